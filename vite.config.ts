@@ -1,0 +1,36 @@
+/**
+ * Build and dev-server settings for the Sagwright web app.
+ * Plotly goes into its own chunk that loads only when the first plot is drawn,
+ * so the shell and the numbers appear before the charting code arrives.
+ */
+import react from '@vitejs/plugin-react';
+import { defineConfig } from 'vite';
+
+export default defineConfig({
+  plugins: [react()],
+  // plotly.js reads the Node-style `global`; in the browser that is globalThis.
+  define: { global: 'globalThis' },
+  server: { host: 'localhost', port: 5173, strictPort: true },
+  preview: { host: 'localhost' },
+  worker: { format: 'es' },
+  build: {
+    target: ['es2022', 'chrome111', 'edge111', 'firefox114', 'safari16.4'],
+    sourcemap: true,
+    // Plotly's scatter bundle alone is a few MB; it is lazy, so the warning is noise.
+    chunkSizeWarningLimit: 4000,
+    rolldownOptions: {
+      output: {
+        codeSplitting: {
+          groups: [
+            { name: 'plotly', test: /node_modules[\\/]plotly\.js[\\/]/, priority: 2 },
+            {
+              name: 'react',
+              test: /node_modules[\\/](react|react-dom|scheduler)[\\/]/,
+              priority: 1,
+            },
+          ],
+        },
+      },
+    },
+  },
+});
