@@ -1,0 +1,40 @@
+/**
+ * The app shell in a real Chromium: it loads, names the product and the demo project, lists one
+ * results row per case, draws one plot line per case, shows the cautions, and logs no errors.
+ */
+import { expect, test } from '@playwright/test';
+import demo from '../examples/courtyard-lights.json' with { type: 'json' };
+
+// The first case is always the installation state, then the project's own cases (DESIGN.md).
+const expectedCaseCount = 1 + demo.cases.length;
+
+test('shell loads, shows results, the sag plot and the cautions without console errors', async ({
+  page,
+}) => {
+  const problems: string[] = [];
+  page.on('console', (message) => {
+    if (message.type() === 'error') problems.push(`console: ${message.text()}`);
+  });
+  page.on('pageerror', (error) => problems.push(`page: ${error.message}`));
+
+  await page.goto('/');
+
+  await expect(page).toHaveTitle('Sagwright');
+  await expect(page.getByRole('heading', { level: 1, name: 'Sagwright' })).toBeVisible();
+  await expect(page.getByRole('heading', { level: 2, name: demo.title })).toBeVisible();
+  await expect(page.getByRole('note', { name: 'Cautions' })).toContainText('licensed person');
+
+  const table = page.getByRole('table', { name: 'Results by case' });
+  await expect(table.getByRole('row')).toHaveCount(1 + expectedCaseCount);
+  for (const weatherCase of demo.cases) {
+    await expect(table.getByRole('rowheader', { name: weatherCase.name })).toBeVisible();
+  }
+
+  const plot = page.getByRole('img', { name: 'Sag plot' });
+  await expect(plot).toHaveAttribute('data-plot-state', 'drawn');
+  await expect(plot.locator('.main-svg').first()).toBeVisible();
+  await expect(plot.locator('.scatterlayer .trace')).toHaveCount(expectedCaseCount);
+  await expect(plot.locator('.legend .traces')).toHaveCount(expectedCaseCount);
+
+  expect(problems).toEqual([]);
+});

@@ -1,0 +1,13 @@
+/** Browser entry: mounts the app into #root (which shows a loading line until then). */
+import { StrictMode } from 'react';
+import { createRoot } from 'react-dom/client';
+import { App } from './ui/App.tsx';
+
+const container = document.getElementById('root');
+if (!container) throw new Error('index.html has no #root element');
+
+createRoot(container).render(
+  <StrictMode>
+    <App />
+  </StrictMode>,
+);
