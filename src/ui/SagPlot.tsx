@@ -3,7 +3,7 @@
  * ground line and clearance zones drawn as shapes. Plotly (core + scatter only) is fetched with
  * a dynamic import so the page and its numbers render before the charting code arrives.
  */
-import type { Data, Layout, Shape } from 'plotly.js';
+import type { Annotation, Data, Layout, Shape } from 'plotly.js';
 import { useEffect, useRef, useState } from 'react';
 import type { CaseResult, Project } from '../core/project.ts';
 
@@ -60,6 +60,17 @@ function groundShapes(project: Project): Partial<Shape>[] {
   return [...lines, ...zones];
 }
 
+function zoneLabels(project: Project): Partial<Annotation>[] {
+  return (project.limits.zones ?? []).map((zone) => ({
+    x: (zone.from + zone.to) / 2,
+    y: zone.height,
+    yanchor: 'bottom',
+    showarrow: false,
+    text: `${zone.label ?? 'Clearance zone'}: ${zone.height} m`,
+    font: { size: 11, color: '#8a4b0f' },
+  }));
+}
+
 function plotLayout(project: Project): Partial<Layout> {
   return {
     margin: { l: 60, r: 20, t: 20, b: 50 },
@@ -67,6 +78,7 @@ function plotLayout(project: Project): Partial<Layout> {
     yaxis: { title: { text: 'Height z (m)' }, rangemode: 'tozero' },
     legend: { orientation: 'h', y: -0.2 },
     shapes: groundShapes(project),
+    annotations: zoneLabels(project),
   };
 }
 
