@@ -1,0 +1,159 @@
+/**
+ * Checks and outputs of one solved state: tensions, utilisation = T_max · SF / breaking load,
+ * sag from the chord, lowest point, clearance over the ground line and in each zone, sideways
+ * swing, support reactions (the wire's pull on each support), and a sampled profile.
+ */
+import type {
+  CaseProfile,
+  CaseResult,
+  ClearanceZone,
+  GroundPoint,
+  SpanResult,
+  SupportReaction,
+} from './project.ts';
+import type { SpanModel } from './spanModel.ts';
+import { largestSwing, largestTension, minimumAboveLine, slopesAt, swingAt, tensionAt } from './spanGeometry.ts';
+
+export interface SolvedSpan {
+  span: SpanModel;
+  tensionN: number;
+}
+
+export interface CheckInput {
+  name: string;
+  temperature: number;
+  spans: SolvedSpan[];
+  ground: readonly GroundPoint[];
+  zones: readonly ClearanceZone[];
+  safetyFactor: number;
+  minClearance: number;
+  breakingLoadN: number;
+  iterations: number;
+  messages: string[];
+  solved: boolean;
+}
+
+const PROFILE_POINTS_PER_SPAN = 200;
+
+/** Smallest wire-minus-ground distance over [from, to] (ground piecewise linear, flat beyond). */
+export function clearanceOver(spans: readonly SolvedSpan[], ground: readonly GroundPoint[], from: number, to: number) {
+  const line = ground.length > 0 ? ground : [{ x: 0, z: 0 }];
+  const pieces: { a: number; b: number; x: number; z: number; slope: number }[] = [];
+  pieces.push({ a: -Infinity, b: line[0].x, x: line[0].x, z: line[0].z, slope: 0 });
+  for (let i = 0; i + 1 < line.length; i++) {
+    const slope = (line[i + 1].z - line[i].z) / (line[i + 1].x - line[i].x);
+    pieces.push({ a: line[i].x, b: line[i + 1].x, x: line[i].x, z: line[i].z, slope });
+  }
+  const end = line[line.length - 1];
+  pieces.push({ a: end.x, b: Infinity, x: end.x, z: end.z, slope: 0 });
+  let best = { x: from, value: Number.POSITIVE_INFINITY };
+  for (const { span, tensionN } of spans) {
+    for (const piece of pieces) {
+      const a = Math.max(from, piece.a, span.x0);
+      const b = Math.min(to, piece.b, span.x1);
+      if (!(b >= a)) continue;
+      const m = minimumAboveLine(span, tensionN, a, b, piece.x, piece.z, piece.slope);
+      if (m.value < best.value) best = m;
+    }
+  }
+  return best;
+}
+
+function spanResult({ span, tensionN }: SolvedSpan): SpanResult {
+  const sag = minimumAboveLine(span, tensionN, span.x0, span.x1, span.x0, span.z0, span.chordSlope);
+  const low = minimumAboveLine(span, tensionN, span.x0, span.x1, span.x0, 0, 0);
+  return { horizontalTension: tensionN, sag: -sag.value, lowestPoint: { x: low.x, z: low.value } };
+}
+
+function reactions(spans: readonly SolvedSpan[]): SupportReaction[] {
+  const forces = Array.from({ length: spans.length + 1 }, () => ({ h: 0, v: 0, l: 0 }));
+  spans.forEach(({ span, tensionN: H }, j) => {
+    const start = slopesAt(span, H, 0, -1);
+    const end = slopesAt(span, H, span.elementLength.length - 1, 1);
+    forces[j].h += H;
+    forces[j].v -= H * start.dz;
+    forces[j].l += H * start.dy;
+    forces[j + 1].h -= H;
+    forces[j + 1].v += H * end.dz;
+    forces[j + 1].l -= H * end.dy;
+  });
+  return forces.map(({ h, v, l }) => ({
+    horizontal: h,
+    vertical: v,
+    lateral: l,
+    resultant: Math.hypot(h, v, l),
+    angle: (Math.atan2(v, Math.hypot(h, l)) * 180) / Math.PI,
+  }));
+}
+
+/** Wire profile at the vertex nodes, thinned to about PROFILE_POINTS_PER_SPAN per span. */
+export function sampleProfile(spans: readonly SolvedSpan[]): CaseProfile {
+  const profile: CaseProfile = { x: [], z: [], y: [], tension: [] };
+  spans.forEach(({ span, tensionN: H }, j) => {
+    const ne = span.elementLength.length;
+    const stride = Math.max(1, Math.ceil(ne / PROFILE_POINTS_PER_SPAN));
+    const vertices: number[] = [];
+    for (let k = j === 0 ? 0 : stride; k < ne; k += stride) vertices.push(k);
+    vertices.push(ne);
+    for (const vertex of vertices) {
+      const x = span.mesh.vertexX[vertex];
+      profile.x.push(x);
+      profile.z.push(span.z0 + span.chordSlope * (x - span.x0) - span.v1[vertex * span.mesh.order] / H);
+      profile.y.push(swingAt(span, H, x));
+      profile.tension.push(tensionAt(span, H, Math.min(vertex, ne - 1), vertex === ne ? 1 : -1));
+    }
+  });
+  return profile;
+}
+
+const fmt = (value: number, digits = 2) => value.toFixed(digits);
+
+/** Build the contract's case result from a solved state. */
+export function checkCase(input: CheckInput): CaseResult {
+  const { spans } = input;
+  const spanResults = spans.map(spanResult);
+  const maxTension = Math.max(...spans.map((s) => largestTension(s.span, s.tensionN)));
+  const horizontalTension = Math.max(...spans.map((s) => s.tensionN));
+  const utilisation = (maxTension * input.safetyFactor) / input.breakingLoadN;
+  const lowest = spanResults.reduce((a, b) => (b.lowestPoint.z < a.lowestPoint.z ? b : a)).lowestPoint;
+  const clearance = clearanceOver(spans, input.ground, -Infinity, Infinity).value;
+  const swing = Math.max(...spans.map((s) => Math.abs(largestSwing(s.span, s.tensionN).value)));
+  const messages = [...input.messages];
+  const allowedN = input.breakingLoadN / input.safetyFactor;
+  if (maxTension > input.breakingLoadN) {
+    messages.push(`Largest tension ${fmt(maxTension, 0)} N exceeds the breaking load ${fmt(input.breakingLoadN, 0)} N: the wire would fail.`);
+  } else if (utilisation > 1) {
+    messages.push(`Largest tension ${fmt(maxTension, 0)} N exceeds the working limit ${fmt(allowedN, 0)} N (breaking load / safety factor ${input.safetyFactor}).`);
+  }
+  if (clearance < input.minClearance) {
+    messages.push(`Clearance ${fmt(clearance)} m is below the required ${fmt(input.minClearance)} m.`);
+  }
+  const zoneClearances = input.zones.map((zone, i) => {
+    const c = clearanceOver(spans, input.ground, zone.from, zone.to).value;
+    const label = zone.label ?? `Zone ${i + 1}`;
+    const ok = c >= zone.height;
+    if (!ok) messages.push(`${label}: clearance ${fmt(c)} m is below the required ${fmt(zone.height)} m.`);
+    return { label, clearance: c, required: zone.height, ok };
+  });
+  const ok = input.solved && utilisation <= 1 && clearance >= input.minClearance && zoneClearances.every((z) => z.ok);
+  return {
+    name: input.name,
+    solved: input.solved,
+    horizontalTension,
+    maxTension,
+    utilisation,
+    sag: Math.max(...spanResults.map((s) => s.sag)),
+    lowestPoint: lowest,
+    clearance,
+    zoneClearances,
+    swing,
+    spans: spanResults,
+    supports: reactions(spans),
+    ok,
+    messages,
+    discretisationError: 0,
+    iterations: input.iterations,
+    temperature: input.temperature,
+    profile: sampleProfile(spans),
+  };
+}

@@ -1,0 +1,102 @@
+/**
+ * Installation target → the horizontal tension H the wire is pulled to at installation.
+ * horizontalTension: H itself. maxTension, sag: root of the target quantity in ln H (Brent,
+ * bracket grown by factors of 2). unstressedLength: length compatibility of all spans as one.
+ * With target.case the quantity is measured in that case after the change of state.
+ */
+import { largestTension, minimumAboveLine } from './spanGeometry.ts';
+import { solveSectionForLength } from './lengthCompatibility.ts';
+import { brent } from './rootFind.ts';
+import type { ProjectModel } from './projectModel.ts';
+import { prepareState } from './projectModel.ts';
+import type { InstallationTarget } from './project.ts';
+import { loadStateOfCase } from './loads.ts';
+import { type StateSolution, solveChangeOfState, solveInstallation } from './states.ts';
+
+export interface InstallationTension {
+  tensionN: number;
+  evaluations: number;
+  ok: boolean;
+  message?: string;
+}
+
+/** The span a sag target refers to: target.span, else the longest span. */
+export function targetSpanIndex(model: ProjectModel, target: InstallationTarget): number {
+  if (target.span !== undefined) return target.span;
+  let best = 0;
+  model.spans.forEach((s, j) => {
+    if (s.x1 - s.x0 > model.spans[best].x1 - model.spans[best].x0) best = j;
+  });
+  return best;
+}
+
+function measure(model: ProjectModel, target: InstallationTarget, state: StateSolution): number {
+  if (target.maxTension !== undefined) {
+    return Math.max(...state.spans.map((s) => largestTension(s.span, s.tensionN)));
+  }
+  if (target.sag !== undefined) {
+    const { span, tensionN } = state.spans[targetSpanIndex(model, target)];
+    return -minimumAboveLine(span, tensionN, span.x0, span.x1, span.x0, span.z0, span.chordSlope).value;
+  }
+  return Math.max(...state.spans.map((s) => s.tensionN));
+}
+
+/** The state in which the target is measured, for installation tension H. */
+function stateFor(model: ProjectModel, target: InstallationTarget, tensionN: number): StateSolution {
+  const installed = solveInstallation(model, tensionN);
+  if (target.case === undefined) return installed;
+  const weather = model.project.cases.find((c) => c.name === target.case);
+  if (!weather) return { ...installed, solved: false, messages: [`installation.target.case: no case named "${target.case}".`] };
+  return solveChangeOfState(model, { ...loadStateOfCase(weather), name: weather.name }, installed.unstressed, tensionN);
+}
+
+/** Parabola estimate of H for the installation state: H ≈ w l² / (8 f), or the target tension. */
+function initialGuess(model: ProjectModel, target: InstallationTarget, value: number): number {
+  if (target.sag === undefined) return value;
+  const span = model.spans[targetSpanIndex(model, target)];
+  const l = span.x1 - span.x0;
+  const wire = prepareState(model, model.installation);
+  const hung = span.hungVertical.reduce((a, q, e) => a + q * span.elementLength[e], 0) / l;
+  const points = span.pointForces.reduce((a, p) => a + p, 0) / l;
+  return ((wire.weightNPerM + hung + 2 * points) * l * l) / (8 * value);
+}
+
+export function findInstallationTension(model: ProjectModel, target: InstallationTarget): InstallationTension {
+  if (target.unstressedLength !== undefined) {
+    const wire = prepareState(model, model.installation);
+    const guess = model.wire.massPerLength * model.env.gravity * 100;
+    const r = solveSectionForLength(model.spans, wire, target.unstressedLength, guess);
+    return { tensionN: r.tensionN, evaluations: r.iterations, ok: r.converged, message: r.reason };
+  }
+  const value = target.horizontalTension ?? target.maxTension ?? target.sag ?? Number.NaN;
+  if (target.horizontalTension !== undefined && target.case === undefined) {
+    return { tensionN: value, evaluations: 0, ok: true };
+  }
+  const increasing = target.sag === undefined; // tensions grow with H, sag shrinks
+  const f = (lnH: number) => {
+    const state = stateFor(model, target, Math.exp(lnH));
+    const q = measure(model, target, state);
+    return increasing ? q - value : value - q;
+  };
+  let lo = Math.log(initialGuess(model, target, value));
+  let hi = lo;
+  let fLo = f(lo);
+  let fHi = fLo;
+  let evaluations = 1;
+  for (let k = 0; k < 60 && fLo * fHi > 0; k++) {
+    if (fLo > 0) {
+      lo -= Math.LN2;
+      fLo = f(lo);
+    } else {
+      hi += Math.LN2;
+      fHi = f(hi);
+    }
+    evaluations++;
+  }
+  if (fLo * fHi > 0) {
+    const what = target.maxTension !== undefined ? 'largest tension' : target.sag !== undefined ? 'sag' : 'horizontal tension';
+    return { tensionN: Math.exp(lo), evaluations, ok: false, message: `the ${what} target ${value} cannot be reached with this wire and load` };
+  }
+  const root = brent(f, lo, hi, 1e-12);
+  return { tensionN: Math.exp(root.x), evaluations: evaluations + root.evaluations, ok: root.converged };
+}

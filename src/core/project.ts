@@ -1,0 +1,218 @@
+/**
+ * The project document (file format "sagwright-project", version 1) and the results object.
+ * SI units everywhere: m, kg, N, °C, m/s. This is a contract shared by the CLI, the core,
+ * the UI, saved files and share links: extend it, never rename or re-unit a field.
+ */
+
+export const PROJECT_FORMAT = 'sagwright-project';
+export const PROJECT_VERSION = 1;
+
+export interface SupportPoint {
+  /** Position along the span from the first support, m. */
+  x: number;
+  /** Height above the ground datum, m. */
+  z: number;
+  label?: string;
+  /** Intermediate support only: the wire runs over a saddle or pulley and can slide. */
+  free?: boolean;
+}
+
+export interface GroundPoint {
+  x: number;
+  z: number;
+}
+
+export interface CustomWire {
+  label: string;
+  /** Outer diameter, m. */
+  diameter: number;
+  /** kg/m. */
+  massPerLength: number;
+  /** EA, N. */
+  axialStiffness: number;
+  /** 1/K. */
+  thermalExpansion: number;
+  /** Minimum breaking load, N. */
+  breakingLoad: number;
+}
+
+export interface CatalogWireRef {
+  catalogId: string;
+}
+
+export type WireSpec = CatalogWireRef | CustomWire;
+
+export interface PointLoad {
+  type: 'point';
+  /** m along the span. */
+  x: number;
+  /** kg (exactly one of mass or force). */
+  mass?: number;
+  /** N, downward. */
+  force?: number;
+  label?: string;
+}
+
+export interface UniformLoad {
+  type: 'uniform';
+  from: number;
+  to: number;
+  /** kg per horizontal metre. */
+  massPerLength: number;
+  /** Diameter that catches wind and ice, m (optional). */
+  diameter?: number;
+  label?: string;
+}
+
+export type Load = PointLoad | UniformLoad;
+
+export interface InstallationTarget {
+  horizontalTension?: number;
+  maxTension?: number;
+  sag?: number;
+  unstressedLength?: number;
+  /** Sag target: which span (0-based); default the longest. */
+  span?: number;
+  /** State the target in this named case instead of the installation state. */
+  case?: string;
+}
+
+export interface Installation {
+  temperature: number;
+  withLoads: boolean;
+  target: InstallationTarget;
+}
+
+export interface WeatherCase {
+  name: string;
+  temperature: number;
+  /** Radial ice thickness, m. */
+  iceThickness: number;
+  /** Wind speed, m/s, blowing across the span (+y). */
+  windSpeed: number;
+  withLoads: boolean;
+}
+
+export interface ClearanceZone {
+  from: number;
+  to: number;
+  /** Required clearance of the wire above the ground in this zone, m. */
+  height: number;
+  label?: string;
+}
+
+export interface Limits {
+  safetyFactor: number;
+  minClearance: number;
+  zones?: ClearanceZone[];
+}
+
+export type Theory = 'exact' | 'parabolic';
+
+export interface ModelSettings {
+  theory: Theory;
+  elementOrder: 1 | 2;
+  elementsPerSpan: number;
+}
+
+export interface Environment {
+  gravity: number;
+  airDensity: number;
+  iceDensity: number;
+  dragCoefficient: number;
+}
+
+export interface Project {
+  format: typeof PROJECT_FORMAT;
+  version: number;
+  title: string;
+  supports: SupportPoint[];
+  ground?: GroundPoint[];
+  wire: WireSpec;
+  loads: Load[];
+  installation: Installation;
+  cases: WeatherCase[];
+  limits: Limits;
+  model?: Partial<ModelSettings>;
+  environment?: Partial<Environment>;
+}
+
+export const DEFAULT_MODEL: ModelSettings = { theory: 'exact', elementOrder: 1, elementsPerSpan: 200 };
+
+/** Standard gravity (CGPM 1901, exact); ISA sea-level air; glaze ice; stranded wire drag. */
+export const DEFAULT_ENVIRONMENT: Environment = {
+  gravity: 9.80665,
+  airDensity: 1.225,
+  iceDensity: 900,
+  dragCoefficient: 1.0,
+};
+
+// ---------------------------------------------------------------- results
+
+export interface Point2 {
+  x: number;
+  z: number;
+}
+
+export interface ZoneClearance {
+  label: string;
+  clearance: number;
+  required: number;
+  ok: boolean;
+}
+
+export interface SpanResult {
+  horizontalTension: number;
+  sag: number;
+  lowestPoint: Point2;
+}
+
+export interface SupportReaction {
+  horizontal: number;
+  vertical: number;
+  lateral: number;
+  resultant: number;
+  /** Angle of the wire's pull below the horizontal, degrees. */
+  angle: number;
+}
+
+/** Sampled wire profile for plots and exports (not part of the JSON contract's required set). */
+export interface CaseProfile {
+  x: number[];
+  z: number[];
+  y: number[];
+  tension: number[];
+}
+
+export interface CaseResult {
+  name: string;
+  /** False when the state could not be solved; messages say why. */
+  solved: boolean;
+  horizontalTension: number;
+  maxTension: number;
+  utilisation: number;
+  sag: number;
+  lowestPoint: Point2;
+  clearance: number;
+  zoneClearances: ZoneClearance[];
+  swing: number;
+  spans: SpanResult[];
+  supports: SupportReaction[];
+  ok: boolean;
+  messages: string[];
+  discretisationError: number;
+  iterations: number;
+  temperature: number;
+  profile?: CaseProfile;
+}
+
+export interface Governing {
+  tension: string;
+  clearance: string;
+}
+
+export interface ProjectResults {
+  unstressedLength: number;
+  cases: CaseResult[];
+  governing: Governing;
+}

@@ -1,0 +1,86 @@
+/**
+ * solveProject: a validated project document → the contract's results (SI). The installation
+ * target fixes the installation tension and so each span's cut length; every weather case is a
+ * change of state at those lengths. The discretisation error is estimated by solving again on
+ * half the elements: e ≈ |f_h − f_2h| / (2² − 1) for sag and largest tension.
+ */
+import { type CaseResult, type ProjectResults, type Project } from './project.ts';
+import { checkCase } from './caseChecks.ts';
+import { findInstallationTension } from './installation.ts';
+import { loadStateOfCase } from './loads.ts';
+import { buildProjectModel, type ProjectModel } from './projectModel.ts';
+import { type StateSolution, solveChangeOfState, solveInstallation } from './states.ts';
+
+interface StateSummary {
+  sag: number;
+  maxTension: number;
+}
+
+function checkState(model: ProjectModel, name: string, temperature: number, state: StateSolution): CaseResult {
+  const p = model.project;
+  return checkCase({
+    name,
+    temperature,
+    spans: state.spans,
+    ground: p.ground ?? [],
+    zones: p.limits.zones ?? [],
+    safetyFactor: p.limits.safetyFactor,
+    minClearance: p.limits.minClearance,
+    breakingLoadN: model.wire.breakingLoad,
+    iterations: state.iterations,
+    messages: state.messages,
+    solved: state.solved,
+  });
+}
+
+/** Solve every state of the model at installation tension H; results in case order. */
+function solveStates(model: ProjectModel, tensionN: number): { results: CaseResult[]; unstressed: number[] } {
+  const installed = solveInstallation(model, tensionN);
+  const results = [checkState(model, model.installation.name, model.installation.temperature, installed)];
+  for (const weather of model.project.cases) {
+    const state = solveChangeOfState(model, { ...loadStateOfCase(weather), name: weather.name }, installed.unstressed, tensionN);
+    results.push(checkState(model, weather.name, weather.temperature, state));
+  }
+  return { results, unstressed: installed.unstressed };
+}
+
+function relativeChange(fine: StateSummary, coarse: StateSummary): number {
+  const dt = Math.abs(fine.maxTension - coarse.maxTension) / Math.max(fine.maxTension, 1e-300);
+  const ds = Math.abs(fine.sag - coarse.sag) / Math.max(fine.sag, 1e-300);
+  return Math.max(dt, ds) / 3;
+}
+
+function governing(project: Project, results: CaseResult[]) {
+  let tension = results[0];
+  let clearance = results[0];
+  const margin = (r: CaseResult) =>
+    Math.min(r.clearance - project.limits.minClearance, ...r.zoneClearances.map((z) => z.clearance - z.required));
+  for (const r of results) {
+    if (r.utilisation > tension.utilisation) tension = r;
+    if (margin(r) < margin(clearance)) clearance = r;
+  }
+  return { tension: tension.name, clearance: clearance.name };
+}
+
+/** Solve a project that has passed validateProject. Never throws for physical failures. */
+export function solveProject(project: Project): ProjectResults {
+  const model = buildProjectModel(project);
+  const target = findInstallationTension(model, project.installation.target);
+  const { results, unstressed } = solveStates(model, target.tensionN);
+  results[0].iterations += target.evaluations;
+  if (!target.ok) {
+    results[0].solved = false;
+    results[0].ok = false;
+    results[0].messages.unshift(`Installation target: ${target.message ?? 'did not converge'}.`);
+  }
+  const coarseCount = Math.max(2, Math.round(model.settings.elementsPerSpan / 2));
+  const coarse = solveStates(buildProjectModel(project, coarseCount), target.tensionN).results;
+  results.forEach((r, i) => {
+    r.discretisationError = relativeChange(r, coarse[i]);
+  });
+  return {
+    unstressedLength: unstressed.reduce((a, b) => a + b, 0),
+    cases: results,
+    governing: governing(project, results),
+  };
+}

@@ -1,0 +1,128 @@
+/**
+ * Geometry of a solved span at horizontal tension H (N): height z(x) = z₀ + c (x − x₀) − v(x),
+ * swing y(x), slopes and tension T = H √(1 + z'² + y'²). Inside element e (x = x_m + ξ L/2):
+ * v(x) = [v₁ₐ + m_e (x − xₐ)]/H + q_e (x − xₐ)(x_b − x)/(2H), v'(x) = (m_e − q_e L ξ/2)/H.
+ * z is convex under downward load, so minima of z minus a straight line are found in closed form.
+ */
+import type { SpanModel } from './spanModel.ts';
+import { elementAt } from './stringMesh.ts';
+
+export interface ShapePoint {
+  x: number;
+  value: number;
+}
+
+function vertexValue(span: SpanModel, values: Float64Array, vertex: number): number {
+  return values[vertex * span.mesh.order];
+}
+
+/** Deflection below the chord, v (m), inside element e at x. */
+function deflectionIn(span: SpanModel, H: number, e: number, x: number): number {
+  const xa = span.mesh.vertexX[e];
+  const xb = span.mesh.vertexX[e + 1];
+  const linear = vertexValue(span, span.v1, e) + span.slopeV1[e] * (x - xa);
+  return (linear + 0.5 * span.qVertical[e] * (x - xa) * (xb - x)) / H;
+}
+
+/** Wire height z (m) at x. */
+export function heightAt(span: SpanModel, H: number, x: number): number {
+  const e = elementAt(span.mesh, x);
+  return span.z0 + span.chordSlope * (x - span.x0) - deflectionIn(span, H, e, x);
+}
+
+/** Sideways swing y (m) at x. */
+export function swingAt(span: SpanModel, H: number, x: number): number {
+  const e = elementAt(span.mesh, x);
+  const xa = span.mesh.vertexX[e];
+  const xb = span.mesh.vertexX[e + 1];
+  const linear = vertexValue(span, span.y1, e) + span.slopeY1[e] * (x - xa);
+  return (linear + 0.5 * span.qLateral[e] * (x - xa) * (xb - x)) / H;
+}
+
+/** Slopes z' and y' inside element e at local ξ ∈ [−1, 1]. */
+export function slopesAt(span: SpanModel, H: number, e: number, xi: number): { dz: number; dy: number } {
+  const L = span.elementLength[e];
+  const dv = (span.slopeV1[e] - 0.5 * span.qVertical[e] * L * xi) / H;
+  const dy = (span.slopeY1[e] - 0.5 * span.qLateral[e] * L * xi) / H;
+  return { dz: span.chordSlope - dv, dy };
+}
+
+/** Tension T (N) at element e, local ξ. */
+export function tensionAt(span: SpanModel, H: number, e: number, xi: number): number {
+  const { dz, dy } = slopesAt(span, H, e, xi);
+  return H * Math.sqrt(1 + dz * dz + dy * dy);
+}
+
+/**
+ * Smallest value of z(x) − (lineZ + lineSlope (x − lineX)) for x in [from, to] (clipped to the
+ * span), with where it occurs. Exact for the element-wise parabolic shape.
+ */
+export function minimumAboveLine(
+  span: SpanModel,
+  H: number,
+  from: number,
+  to: number,
+  lineX: number,
+  lineZ: number,
+  lineSlope: number,
+): ShapePoint {
+  const a = Math.max(from, span.x0);
+  const b = Math.min(to, span.x1);
+  const best: ShapePoint = { x: a, value: Number.POSITIVE_INFINITY };
+  if (!(b >= a)) return best;
+  const consider = (x: number) => {
+    const value = heightAt(span, H, x) - (lineZ + lineSlope * (x - lineX));
+    if (value < best.value) {
+      best.value = value;
+      best.x = x;
+    }
+  };
+  consider(a);
+  consider(b);
+  const first = elementAt(span.mesh, a);
+  const last = elementAt(span.mesh, b);
+  for (let e = first; e <= last; e++) {
+    const xa = span.mesh.vertexX[e];
+    const L = span.elementLength[e];
+    if (e > first) consider(xa);
+    const q = span.qVertical[e];
+    if (q <= 0) continue;
+    // z' = lineSlope  ⇔  v' = c − lineSlope  ⇔  ξ = 2 (m_e − (c − s) H) / (q L)
+    const xi = (2 * (span.slopeV1[e] - (span.chordSlope - lineSlope) * H)) / (q * L);
+    const x = xa + 0.5 * L * (1 + xi);
+    if (xi > -1 && xi < 1 && x > a && x < b) consider(x);
+  }
+  return best;
+}
+
+/** Largest sideways swing (m) and where, exact for the element-wise parabolic shape. */
+export function largestSwing(span: SpanModel, H: number): ShapePoint {
+  const best: ShapePoint = { x: span.x0, value: 0 };
+  for (let e = 0; e < span.elementLength.length; e++) {
+    const L = span.elementLength[e];
+    const p = span.qLateral[e];
+    const xa = span.mesh.vertexX[e];
+    const candidates = [xa];
+    if (p > 0) {
+      const xi = (2 * span.slopeY1[e]) / (p * L);
+      if (xi > -1 && xi < 1) candidates.push(xa + 0.5 * L * (1 + xi));
+    }
+    for (const x of candidates) {
+      const y = swingAt(span, H, x);
+      if (Math.abs(y) > Math.abs(best.value)) {
+        best.value = y;
+        best.x = x;
+      }
+    }
+  }
+  return best;
+}
+
+/** Largest tension along the span (N): tension is extreme at element ends. */
+export function largestTension(span: SpanModel, H: number): number {
+  let largest = H;
+  for (let e = 0; e < span.elementLength.length; e++) {
+    largest = Math.max(largest, tensionAt(span, H, e, -1), tensionAt(span, H, e, 1));
+  }
+  return largest;
+}

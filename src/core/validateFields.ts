@@ -1,0 +1,103 @@
+/**
+ * Field checkers for project validation: each records an issue with the field path and the rule
+ * it breaks, and never repairs a value.
+ */
+
+export interface ValidationIssue {
+  path: string;
+  message: string;
+}
+
+export type Json = Record<string, unknown>;
+
+export class FieldChecker {
+  readonly issues: ValidationIssue[] = [];
+
+  fail(path: string, message: string): void {
+    this.issues.push({ path, message });
+  }
+
+  object(value: unknown, path: string, allowed: readonly string[]): Json | undefined {
+    if (typeof value !== 'object' || value === null || Array.isArray(value)) {
+      this.fail(path, 'must be an object');
+      return undefined;
+    }
+    for (const key of Object.keys(value)) {
+      if (!allowed.includes(key)) this.fail(`${path}.${key}`, 'is not a known field');
+    }
+    return value as Json;
+  }
+
+  array(value: unknown, path: string, min: number, max: number): unknown[] | undefined {
+    if (!Array.isArray(value)) {
+      this.fail(path, 'must be a list');
+      return undefined;
+    }
+    if (value.length < min) this.fail(path, `must have at least ${min} entries`);
+    if (value.length > max) {
+      this.fail(path, `must have at most ${max} entries`);
+      return undefined;
+    }
+    return value;
+  }
+
+  /** A finite number in [min, max] (exclusive bounds when the flags say so). */
+  number(
+    value: unknown,
+    path: string,
+    min = -Infinity,
+    max = Infinity,
+    { minExclusive = false, maxExclusive = false } = {},
+  ): number | undefined {
+    if (typeof value !== 'number' || !Number.isFinite(value)) {
+      this.fail(path, value === undefined ? 'is required (a number)' : 'must be a finite number');
+      return undefined;
+    }
+    const low = minExclusive ? value <= min : value < min;
+    const high = maxExclusive ? value >= max : value > max;
+    if (low) this.fail(path, `must be ${minExclusive ? 'greater than' : 'at least'} ${min}`);
+    else if (high) this.fail(path, `must be ${maxExclusive ? 'less than' : 'at most'} ${max}`);
+    else return value;
+    return undefined;
+  }
+
+  positive(value: unknown, path: string, max = Infinity): number | undefined {
+    return this.number(value, path, 0, max, { minExclusive: true });
+  }
+
+  integer(value: unknown, path: string, min: number, max: number): number | undefined {
+    const n = this.number(value, path, min, max);
+    if (n !== undefined && !Number.isInteger(n)) {
+      this.fail(path, 'must be a whole number');
+      return undefined;
+    }
+    return n;
+  }
+
+  string(value: unknown, path: string, maxLength: number, required = true): string | undefined {
+    if (value === undefined && !required) return undefined;
+    if (typeof value !== 'string') {
+      this.fail(path, 'must be text');
+      return undefined;
+    }
+    if (value.length > maxLength) this.fail(path, `must be at most ${maxLength} characters`);
+    return value;
+  }
+
+  boolean(value: unknown, path: string, required = true): boolean | undefined {
+    if (value === undefined && !required) return undefined;
+    if (typeof value !== 'boolean') {
+      this.fail(path, 'must be true or false');
+      return undefined;
+    }
+    return value;
+  }
+
+  oneOf<T extends string | number>(value: unknown, path: string, options: readonly T[]): T | undefined {
+    if (!options.includes(value as T)) {
+      this.fail(path, `must be one of ${options.map((o) => JSON.stringify(o)).join(', ')}`);
+      return undefined;
+    }
+    return value as T;
+  }
+}
