@@ -7,7 +7,8 @@ import { solveProject, validateProject, WIRE_CATALOG } from '../core/index.ts';
 import { catalogTable, resultsTable } from './table.ts';
 
 const MAX_FILE_BYTES = 5 * 1024 * 1024;
-const USAGE = 'usage: npm run solve -- FILE.json [FILE.json ...] [--table]\n       npm run solve -- --catalog';
+const USAGE =
+  'usage: npm run solve -- FILE.json [FILE.json ...] [--table]\n       npm run solve -- --catalog';
 
 function readProject(file: string): { ok: true; value: unknown } | { ok: false; message: string } {
   let text: string;
@@ -16,7 +17,8 @@ function readProject(file: string): { ok: true; value: unknown } | { ok: false; 
   } catch (error) {
     return { ok: false, message: `${file}: cannot read (${(error as Error).message})` };
   }
-  if (text.length > MAX_FILE_BYTES) return { ok: false, message: `${file}: file is larger than 5 MB` };
+  if (text.length > MAX_FILE_BYTES)
+    return { ok: false, message: `${file}: file is larger than 5 MB` };
   try {
     return { ok: true, value: JSON.parse(text) };
   } catch (error) {
@@ -46,20 +48,24 @@ function main(args: string[]): number {
     }
     const checked = validateProject(read.value);
     if (!checked.ok) {
-      for (const issue of checked.issues) process.stderr.write(`${file}: ${issue.path}: ${issue.message}\n`);
+      for (const issue of checked.issues)
+        process.stderr.write(`${file}: ${issue.path}: ${issue.message}\n`);
       return 2;
     }
     const results = solveProject(checked.project);
     for (const c of results.cases) {
       if (!c.solved) {
-        process.stderr.write(`${file}: case "${c.name}" could not be solved: ${c.messages.join(' ')}\n`);
+        process.stderr.write(
+          `${file}: case "${c.name}" could not be solved: ${c.messages.join(' ')}\n`,
+        );
         status = 1;
       }
     }
     if (table) process.stdout.write(`${resultsTable(checked.project.title, results)}\n\n`);
     else outputs.push(files.length === 1 ? results : { file, results });
   }
-  if (!table) process.stdout.write(`${JSON.stringify(files.length === 1 ? outputs[0] : outputs, null, 2)}\n`);
+  if (!table)
+    process.stdout.write(`${JSON.stringify(files.length === 1 ? outputs[0] : outputs, null, 2)}\n`);
   return status;
 }
 

@@ -4,14 +4,29 @@ import type { ProjectResults, WireProperties } from '../core/index.ts';
 function pad(cells: string[][]): string {
   const widths = cells[0].map((_, k) => Math.max(...cells.map((row) => row[k].length)));
   return cells
-    .map((row) => row.map((cell, k) => (k === 0 ? cell.padEnd(widths[k]) : cell.padStart(widths[k]))).join('  '))
+    .map((row) =>
+      row
+        .map((cell, k) => (k === 0 ? cell.padEnd(widths[k]) : cell.padStart(widths[k])))
+        .join('  '),
+    )
     .join('\n');
 }
 
 const n = (value: number, digits: number) => value.toFixed(digits);
 
 export function resultsTable(title: string, results: ProjectResults): string {
-  const header = ['Case', 'H (N)', 'T max (N)', 'Util. (%)', 'Sag (m)', 'Lowest z (m)', 'Clearance (m)', 'Swing (m)', 'Iter.', 'Check'];
+  const header = [
+    'Case',
+    'H (N)',
+    'T max (N)',
+    'Util. (%)',
+    'Sag (m)',
+    'Lowest z (m)',
+    'Clearance (m)',
+    'Swing (m)',
+    'Iter.',
+    'Check',
+  ];
   const rows = results.cases.map((c) => [
     c.name,
     n(c.horizontalTension, 0),
@@ -24,7 +39,13 @@ export function resultsTable(title: string, results: ProjectResults): string {
     String(c.iterations),
     c.ok ? 'pass' : 'FAIL',
   ]);
-  const lines = [title, `Cut (unstressed) length at installation: ${n(results.unstressedLength, 4)} m`, '', pad([header, ...rows]), ''];
+  const lines = [
+    title,
+    `Cut (unstressed) length at installation: ${n(results.unstressedLength, 4)} m`,
+    '',
+    pad([header, ...rows]),
+    '',
+  ];
   for (const c of results.cases) {
     lines.push(`${c.name} — support reactions (wire's pull on the support):`);
     const support = c.supports.map((s, i) => [
@@ -37,17 +58,31 @@ export function resultsTable(title: string, results: ProjectResults): string {
     ]);
     lines.push(pad(support));
     for (const z of c.zoneClearances) {
-      lines.push(`  ${z.label}: clearance ${n(z.clearance, 3)} m, required ${n(z.required, 3)} m — ${z.ok ? 'pass' : 'FAIL'}`);
+      lines.push(
+        `  ${z.label}: clearance ${n(z.clearance, 3)} m, required ${n(z.required, 3)} m — ${z.ok ? 'pass' : 'FAIL'}`,
+      );
     }
     for (const m of c.messages) lines.push(`  ! ${m}`);
     lines.push(`  estimated discretisation error ${c.discretisationError.toExponential(1)}`);
   }
-  lines.push('', `Governing: tension in "${results.governing.tension}", clearance in "${results.governing.clearance}".`);
+  lines.push(
+    '',
+    `Governing: tension in "${results.governing.tension}", clearance in "${results.governing.clearance}".`,
+  );
   return lines.join('\n');
 }
 
 export function catalogTable(wires: readonly WireProperties[]): string {
-  const header = ['Id', 'Wire', 'd (mm)', 'Mass (kg/m)', 'EA (kN)', 'Alpha (1e-6/K)', 'Breaking (kN)', 'Sources'];
+  const header = [
+    'Id',
+    'Wire',
+    'd (mm)',
+    'Mass (kg/m)',
+    'EA (kN)',
+    'Alpha (1e-6/K)',
+    'Breaking (kN)',
+    'Sources',
+  ];
   const rows = wires.map((w) => [
     w.id,
     w.label,

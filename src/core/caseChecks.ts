@@ -11,8 +11,15 @@ import type {
   SpanResult,
   SupportReaction,
 } from './project.ts';
+import {
+  largestSwing,
+  largestTension,
+  minimumAboveLine,
+  slopesAt,
+  swingAt,
+  tensionAt,
+} from './spanGeometry.ts';
 import type { SpanModel } from './spanModel.ts';
-import { largestSwing, largestTension, minimumAboveLine, slopesAt, swingAt, tensionAt } from './spanGeometry.ts';
 
 export interface SolvedSpan {
   span: SpanModel;
@@ -36,7 +43,12 @@ export interface CheckInput {
 const PROFILE_POINTS_PER_SPAN = 200;
 
 /** Smallest wire-minus-ground distance over [from, to] (ground piecewise linear, flat beyond). */
-export function clearanceOver(spans: readonly SolvedSpan[], ground: readonly GroundPoint[], from: number, to: number) {
+export function clearanceOver(
+  spans: readonly SolvedSpan[],
+  ground: readonly GroundPoint[],
+  from: number,
+  to: number,
+) {
   const line = ground.length > 0 ? ground : [{ x: 0, z: 0 }];
   const pieces: { a: number; b: number; x: number; z: number; slope: number }[] = [];
   pieces.push({ a: -Infinity, b: line[0].x, x: line[0].x, z: line[0].z, slope: 0 });
@@ -98,7 +110,9 @@ export function sampleProfile(spans: readonly SolvedSpan[]): CaseProfile {
     for (const vertex of vertices) {
       const x = span.mesh.vertexX[vertex];
       profile.x.push(x);
-      profile.z.push(span.z0 + span.chordSlope * (x - span.x0) - span.v1[vertex * span.mesh.order] / H);
+      profile.z.push(
+        span.z0 + span.chordSlope * (x - span.x0) - span.v1[vertex * span.mesh.order] / H,
+      );
       profile.y.push(swingAt(span, H, x));
       profile.tension.push(tensionAt(span, H, Math.min(vertex, ne - 1), vertex === ne ? 1 : -1));
     }
@@ -115,27 +129,40 @@ export function checkCase(input: CheckInput): CaseResult {
   const maxTension = Math.max(...spans.map((s) => largestTension(s.span, s.tensionN)));
   const horizontalTension = Math.max(...spans.map((s) => s.tensionN));
   const utilisation = (maxTension * input.safetyFactor) / input.breakingLoadN;
-  const lowest = spanResults.reduce((a, b) => (b.lowestPoint.z < a.lowestPoint.z ? b : a)).lowestPoint;
+  const lowest = spanResults.reduce((a, b) =>
+    b.lowestPoint.z < a.lowestPoint.z ? b : a,
+  ).lowestPoint;
   const clearance = clearanceOver(spans, input.ground, -Infinity, Infinity).value;
   const swing = Math.max(...spans.map((s) => Math.abs(largestSwing(s.span, s.tensionN).value)));
   const messages = [...input.messages];
   const allowedN = input.breakingLoadN / input.safetyFactor;
   if (maxTension > input.breakingLoadN) {
-    messages.push(`Largest tension ${fmt(maxTension, 0)} N exceeds the breaking load ${fmt(input.breakingLoadN, 0)} N: the wire would fail.`);
+    messages.push(
+      `Largest tension ${fmt(maxTension, 0)} N exceeds the breaking load ${fmt(input.breakingLoadN, 0)} N: the wire would fail.`,
+    );
   } else if (utilisation > 1) {
-    messages.push(`Largest tension ${fmt(maxTension, 0)} N exceeds the working limit ${fmt(allowedN, 0)} N (breaking load / safety factor ${input.safetyFactor}).`);
+    messages.push(
+      `Largest tension ${fmt(maxTension, 0)} N exceeds the working limit ${fmt(allowedN, 0)} N (breaking load / safety factor ${input.safetyFactor}).`,
+    );
   }
   if (clearance < input.minClearance) {
-    messages.push(`Clearance ${fmt(clearance)} m is below the required ${fmt(input.minClearance)} m.`);
+    messages.push(
+      `Clearance ${fmt(clearance)} m is below the required ${fmt(input.minClearance)} m.`,
+    );
   }
   const zoneClearances = input.zones.map((zone, i) => {
     const c = clearanceOver(spans, input.ground, zone.from, zone.to).value;
     const label = zone.label ?? `Zone ${i + 1}`;
     const ok = c >= zone.height;
-    if (!ok) messages.push(`${label}: clearance ${fmt(c)} m is below the required ${fmt(zone.height)} m.`);
+    if (!ok)
+      messages.push(`${label}: clearance ${fmt(c)} m is below the required ${fmt(zone.height)} m.`);
     return { label, clearance: c, required: zone.height, ok };
   });
-  const ok = input.solved && utilisation <= 1 && clearance >= input.minClearance && zoneClearances.every((z) => z.ok);
+  const ok =
+    input.solved &&
+    utilisation <= 1 &&
+    clearance >= input.minClearance &&
+    zoneClearances.every((z) => z.ok);
   return {
     name: input.name,
     solved: input.solved,

@@ -4,13 +4,14 @@
  * bracket grown by factors of 2). unstressedLength: length compatibility of all spans as one.
  * With target.case the quantity is measured in that case after the change of state.
  */
-import { largestTension, minimumAboveLine } from './spanGeometry.ts';
+
 import { solveSectionForLength } from './lengthCompatibility.ts';
-import { brent } from './rootFind.ts';
+import { loadStateOfCase } from './loads.ts';
+import type { InstallationTarget } from './project.ts';
 import type { ProjectModel } from './projectModel.ts';
 import { prepareState } from './projectModel.ts';
-import type { InstallationTarget } from './project.ts';
-import { loadStateOfCase } from './loads.ts';
+import { brent } from './rootFind.ts';
+import { largestTension, minimumAboveLine } from './spanGeometry.ts';
 import { type StateSolution, solveChangeOfState, solveInstallation } from './states.ts';
 
 export interface InstallationTension {
@@ -36,18 +37,33 @@ function measure(model: ProjectModel, target: InstallationTarget, state: StateSo
   }
   if (target.sag !== undefined) {
     const { span, tensionN } = state.spans[targetSpanIndex(model, target)];
-    return -minimumAboveLine(span, tensionN, span.x0, span.x1, span.x0, span.z0, span.chordSlope).value;
+    return -minimumAboveLine(span, tensionN, span.x0, span.x1, span.x0, span.z0, span.chordSlope)
+      .value;
   }
   return Math.max(...state.spans.map((s) => s.tensionN));
 }
 
 /** The state in which the target is measured, for installation tension H. */
-function stateFor(model: ProjectModel, target: InstallationTarget, tensionN: number): StateSolution {
+function stateFor(
+  model: ProjectModel,
+  target: InstallationTarget,
+  tensionN: number,
+): StateSolution {
   const installed = solveInstallation(model, tensionN);
   if (target.case === undefined) return installed;
   const weather = model.project.cases.find((c) => c.name === target.case);
-  if (!weather) return { ...installed, solved: false, messages: [`installation.target.case: no case named "${target.case}".`] };
-  return solveChangeOfState(model, { ...loadStateOfCase(weather), name: weather.name }, installed.unstressed, tensionN);
+  if (!weather)
+    return {
+      ...installed,
+      solved: false,
+      messages: [`installation.target.case: no case named "${target.case}".`],
+    };
+  return solveChangeOfState(
+    model,
+    { ...loadStateOfCase(weather), name: weather.name },
+    installed.unstressed,
+    tensionN,
+  );
 }
 
 /** Parabola estimate of H for the installation state: H ≈ w l² / (8 f), or the target tension. */
@@ -61,7 +77,10 @@ function initialGuess(model: ProjectModel, target: InstallationTarget, value: nu
   return ((wire.weightNPerM + hung + 2 * points) * l * l) / (8 * value);
 }
 
-export function findInstallationTension(model: ProjectModel, target: InstallationTarget): InstallationTension {
+export function findInstallationTension(
+  model: ProjectModel,
+  target: InstallationTarget,
+): InstallationTension {
   if (target.unstressedLength !== undefined) {
     const wire = prepareState(model, model.installation);
     const guess = model.wire.massPerLength * model.env.gravity * 100;
@@ -94,9 +113,23 @@ export function findInstallationTension(model: ProjectModel, target: Installatio
     evaluations++;
   }
   if (fLo * fHi > 0) {
-    const what = target.maxTension !== undefined ? 'largest tension' : target.sag !== undefined ? 'sag' : 'horizontal tension';
-    return { tensionN: Math.exp(lo), evaluations, ok: false, message: `the ${what} target ${value} cannot be reached with this wire and load` };
+    const what =
+      target.maxTension !== undefined
+        ? 'largest tension'
+        : target.sag !== undefined
+          ? 'sag'
+          : 'horizontal tension';
+    return {
+      tensionN: Math.exp(lo),
+      evaluations,
+      ok: false,
+      message: `the ${what} target ${value} cannot be reached with this wire and load`,
+    };
   }
   const root = brent(f, lo, hi, 1e-12);
-  return { tensionN: Math.exp(root.x), evaluations: evaluations + root.evaluations, ok: root.converged };
+  return {
+    tensionN: Math.exp(root.x),
+    evaluations: evaluations + root.evaluations,
+    ok: root.converged,
+  };
 }

@@ -5,9 +5,10 @@
  * The root of (that length − L₀(1 + α Δt)) in H is found by bracketed Newton. The exact theory
  * also iterates the load q = w ds₀/dx (weight per unstressed metre of wire) to a fixed point.
  */
+
+import type { Theory } from './project.ts';
 import { newtonBracketed } from './rootFind.ts';
 import { GAUSS2, type SpanModel, solveUnitShapes } from './spanModel.ts';
-import type { Theory } from './project.ts';
 
 export interface WireLoading {
   theory: Theory;
@@ -108,7 +109,8 @@ export function solveSectionForLength(
     }, H);
     iterations += root.evaluations;
     H = root.x;
-    if (!root.converged) return { tensionN: H, iterations, converged: false, reason: 'tension did not converge' };
+    if (!root.converged)
+      return { tensionN: H, iterations, converged: false, reason: 'tension did not converge' };
     unstressedLengthAt(spans, H, wire.axialStiffness, true);
     if (wire.theory === 'parabolic') return { tensionN: H, iterations, converged: true };
     if (updateLoads(spans, wire, true) < LOAD_TOLERANCE) {
@@ -116,7 +118,12 @@ export function solveSectionForLength(
       return { tensionN: H, iterations, converged: true };
     }
   }
-  return { tensionN: H, iterations, converged: false, reason: 'catenary load iteration did not converge' };
+  return {
+    tensionN: H,
+    iterations,
+    converged: false,
+    reason: 'catenary load iteration did not converge',
+  };
 }
 
 /** Shape of the spans at a given horizontal tension (installation pulled to H). */
@@ -136,5 +143,10 @@ export function solveSectionAtTension(
       return { tensionN, iterations, converged: true };
     }
   }
-  return { tensionN, iterations, converged: false, reason: 'catenary load iteration did not converge' };
+  return {
+    tensionN,
+    iterations,
+    converged: false,
+    reason: 'catenary load iteration did not converge',
+  };
 }

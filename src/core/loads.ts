@@ -42,7 +42,12 @@ export function iceWeightNPerM(env: Environment, diameterM: number, iceM: number
 }
 
 /** Wind load per metre on a round member of diameter d with radial ice t: q C_f (d + 2t). */
-export function windLoadNPerM(env: Environment, diameterM: number, iceM: number, speed: number): number {
+export function windLoadNPerM(
+  env: Environment,
+  diameterM: number,
+  iceM: number,
+  speed: number,
+): number {
   const pressurePa = 0.5 * env.airDensity * speed * speed;
   return pressurePa * env.dragCoefficient * (diameterM + 2 * iceM);
 }

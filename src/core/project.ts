@@ -137,7 +137,11 @@ export interface Project {
   environment?: Partial<Environment>;
 }
 
-export const DEFAULT_MODEL: ModelSettings = { theory: 'exact', elementOrder: 1, elementsPerSpan: 200 };
+export const DEFAULT_MODEL: ModelSettings = {
+  theory: 'exact',
+  elementOrder: 1,
+  elementsPerSpan: 200,
+};
 
 /** Standard gravity (CGPM 1901, exact); ISA sea-level air; glaze ice; stranded wire drag. */
 export const DEFAULT_ENVIRONMENT: Environment = {

@@ -3,8 +3,9 @@
  * SpanModel per span (meshed with a node at every load position), the sections that keep one
  * horizontal tension after installation (spans joined by free supports), and the load states.
  */
-import { caseLoads, loadBreakpoints, type LoadState } from './loads.ts';
+
 import type { WireLoading } from './lengthCompatibility.ts';
+import { caseLoads, type LoadState, loadBreakpoints } from './loads.ts';
 import {
   DEFAULT_ENVIRONMENT,
   DEFAULT_MODEL,
@@ -43,7 +44,17 @@ export function buildProjectModel(project: Project, elementsPerSpan?: number): P
   const sections: number[][] = [[]];
   const s = project.supports;
   for (let j = 0; j + 1 < s.length; j++) {
-    spans.push(createSpanModel(s[j].x, s[j].z, s[j + 1].x, s[j + 1].z, breakpoints, count, settings.elementOrder));
+    spans.push(
+      createSpanModel(
+        s[j].x,
+        s[j].z,
+        s[j + 1].x,
+        s[j + 1].z,
+        breakpoints,
+        count,
+        settings.elementOrder,
+      ),
+    );
     sections[sections.length - 1].push(j);
     if (j + 2 < s.length && !s[j + 1].free) sections.push([]);
   }
@@ -72,7 +83,8 @@ export function buildProjectModel(project: Project, elementsPerSpan?: number): P
 export function prepareState(model: ProjectModel, state: LoadState): WireLoading {
   const loads = caseLoads(model.wire, model.project.loads, state, model.env);
   for (const span of model.spans) applyHungLoads(span, loads);
-  const thermal = 1 + model.wire.thermalExpansion * (state.temperature - model.installation.temperature);
+  const thermal =
+    1 + model.wire.thermalExpansion * (state.temperature - model.installation.temperature);
   const bareWeight = model.wire.massPerLength * model.env.gravity;
   return {
     theory: model.settings.theory,

@@ -36,8 +36,10 @@ export function newtonBracketed(
     } else if (!bracketed) {
       next = Math.min(Math.max(next, x / 4), x * 4);
     }
-    if (Math.abs(next - x) <= relativeTolerance * x) return { x: next, evaluations: n, converged: true };
-    if (bracketed && (hi - lo) <= relativeTolerance * lo) return { x: next, evaluations: n, converged: true };
+    if (Math.abs(next - x) <= relativeTolerance * x)
+      return { x: next, evaluations: n, converged: true };
+    if (bracketed && hi - lo <= relativeTolerance * lo)
+      return { x: next, evaluations: n, converged: true };
     if (next < 1e-300 || next > 1e300) return { x, evaluations: n, converged: false };
     x = next;
   }

@@ -4,10 +4,11 @@
  * change of state at those lengths. The discretisation error is estimated by solving again on
  * half the elements: e ≈ |f_h − f_2h| / (2² − 1) for sag and largest tension.
  */
-import { type CaseResult, type ProjectResults, type Project } from './project.ts';
+
 import { checkCase } from './caseChecks.ts';
 import { findInstallationTension } from './installation.ts';
 import { loadStateOfCase } from './loads.ts';
+import type { CaseResult, Project, ProjectResults } from './project.ts';
 import { buildProjectModel, type ProjectModel } from './projectModel.ts';
 import { type StateSolution, solveChangeOfState, solveInstallation } from './states.ts';
 
@@ -16,7 +17,12 @@ interface StateSummary {
   maxTension: number;
 }
 
-function checkState(model: ProjectModel, name: string, temperature: number, state: StateSolution): CaseResult {
+function checkState(
+  model: ProjectModel,
+  name: string,
+  temperature: number,
+  state: StateSolution,
+): CaseResult {
   const p = model.project;
   return checkCase({
     name,
@@ -34,11 +40,21 @@ function checkState(model: ProjectModel, name: string, temperature: number, stat
 }
 
 /** Solve every state of the model at installation tension H; results in case order. */
-function solveStates(model: ProjectModel, tensionN: number): { results: CaseResult[]; unstressed: number[] } {
+function solveStates(
+  model: ProjectModel,
+  tensionN: number,
+): { results: CaseResult[]; unstressed: number[] } {
   const installed = solveInstallation(model, tensionN);
-  const results = [checkState(model, model.installation.name, model.installation.temperature, installed)];
+  const results = [
+    checkState(model, model.installation.name, model.installation.temperature, installed),
+  ];
   for (const weather of model.project.cases) {
-    const state = solveChangeOfState(model, { ...loadStateOfCase(weather), name: weather.name }, installed.unstressed, tensionN);
+    const state = solveChangeOfState(
+      model,
+      { ...loadStateOfCase(weather), name: weather.name },
+      installed.unstressed,
+      tensionN,
+    );
     results.push(checkState(model, weather.name, weather.temperature, state));
   }
   return { results, unstressed: installed.unstressed };
@@ -54,7 +70,10 @@ function governing(project: Project, results: CaseResult[]) {
   let tension = results[0];
   let clearance = results[0];
   const margin = (r: CaseResult) =>
-    Math.min(r.clearance - project.limits.minClearance, ...r.zoneClearances.map((z) => z.clearance - z.required));
+    Math.min(
+      r.clearance - project.limits.minClearance,
+      ...r.zoneClearances.map((z) => z.clearance - z.required),
+    );
   for (const r of results) {
     if (r.utilisation > tension.utilisation) tension = r;
     if (margin(r) < margin(clearance)) clearance = r;

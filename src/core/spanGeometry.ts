@@ -40,7 +40,12 @@ export function swingAt(span: SpanModel, H: number, x: number): number {
 }
 
 /** Slopes z' and y' inside element e at local ξ ∈ [−1, 1]. */
-export function slopesAt(span: SpanModel, H: number, e: number, xi: number): { dz: number; dy: number } {
+export function slopesAt(
+  span: SpanModel,
+  H: number,
+  e: number,
+  xi: number,
+): { dz: number; dy: number } {
   const L = span.elementLength[e];
   const dv = (span.slopeV1[e] - 0.5 * span.qVertical[e] * L * xi) / H;
   const dy = (span.slopeY1[e] - 0.5 * span.qLateral[e] * L * xi) / H;

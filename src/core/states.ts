@@ -17,7 +17,10 @@ export interface StateSolution {
 }
 
 /** Installation at horizontal tension H; returns the state and each span's unstressed length. */
-export function solveInstallation(model: ProjectModel, tensionN: number): StateSolution & { unstressed: number[] } {
+export function solveInstallation(
+  model: ProjectModel,
+  tensionN: number,
+): StateSolution & { unstressed: number[] } {
   const wire = prepareState(model, model.installation);
   const result = solveSectionAtTension(model.spans, wire, tensionN);
   const unstressed = model.spans.map((span) => span.unstressedElement.reduce((a, b) => a + b, 0));
@@ -50,7 +53,9 @@ export function solveChangeOfState(
     iterations += result.iterations;
     if (!result.converged) {
       solved = false;
-      messages.push(`${state.name}: spans ${section.map((j) => j + 1).join(', ')}: ${result.reason}.`);
+      messages.push(
+        `${state.name}: spans ${section.map((j) => j + 1).join(', ')}: ${result.reason}.`,
+      );
     }
     for (const span of members) spans.push({ span, tensionN: result.tensionN });
   }

@@ -8,7 +8,11 @@
 export type ElementOrder = 1 | 2;
 
 /** Element stiffness matrix (row-major, (order+1)²) for length L (m) and tension H (N). */
-export function elementStiffness(order: ElementOrder, lengthM: number, tensionN: number): number[][] {
+export function elementStiffness(
+  order: ElementOrder,
+  lengthM: number,
+  tensionN: number,
+): number[][] {
   if (order === 1) {
     const k = tensionN / lengthM;
     return [
@@ -25,7 +29,11 @@ export function elementStiffness(order: ElementOrder, lengthM: number, tensionN:
 }
 
 /** Consistent nodal loads of a uniform load q (N/m) on an element of length L (m). */
-export function elementUniformLoad(order: ElementOrder, lengthM: number, loadNPerM: number): number[] {
+export function elementUniformLoad(
+  order: ElementOrder,
+  lengthM: number,
+  loadNPerM: number,
+): number[] {
   if (order === 1) {
     const r = (loadNPerM * lengthM) / 2;
     return [r, r];

@@ -47,7 +47,11 @@ export function createStringSystem(mesh: StringMesh): StringSystem {
 }
 
 /** Add the consistent loads of element-wise uniform loads qElement (N/m) into R (per node). */
-export function addElementLoads(mesh: StringMesh, qElement: ArrayLike<number>, R: Float64Array): void {
+export function addElementLoads(
+  mesh: StringMesh,
+  qElement: ArrayLike<number>,
+  R: Float64Array,
+): void {
   const p = mesh.order;
   for (let e = 0; e < mesh.elementCount; e++) {
     const q = qElement[e];
@@ -111,7 +115,11 @@ export function solveString(
 }
 
 /** Finite element interpolation of nodal values u at x: value and slope du/dx. */
-export function interpolate(mesh: StringMesh, u: ArrayLike<number>, x: number): { value: number; slope: number } {
+export function interpolate(
+  mesh: StringMesh,
+  u: ArrayLike<number>,
+  x: number,
+): { value: number; slope: number } {
   const e = elementAt(mesh, x);
   const xa = mesh.vertexX[e];
   const length = mesh.vertexX[e + 1] - xa;

@@ -93,7 +93,11 @@ export class FieldChecker {
     return value;
   }
 
-  oneOf<T extends string | number>(value: unknown, path: string, options: readonly T[]): T | undefined {
+  oneOf<T extends string | number>(
+    value: unknown,
+    path: string,
+    options: readonly T[],
+  ): T | undefined {
     if (!options.includes(value as T)) {
       this.fail(path, `must be one of ${options.map((o) => JSON.stringify(o)).join(', ')}`);
       return undefined;

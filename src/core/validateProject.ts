@@ -3,15 +3,38 @@
  * Anything missing, unknown, of the wrong type, non-finite or out of physical range is refused
  * with the field path and the rule; nothing is repaired. A newer version is refused by name.
  */
-import { FieldChecker, type Json, type ValidationIssue } from './validateFields.ts';
+
 import { PROJECT_FORMAT, PROJECT_VERSION, type Project } from './project.ts';
+import { FieldChecker, type Json, type ValidationIssue } from './validateFields.ts';
 import { findCatalogWire } from './wireCatalog.ts';
 
 export type { ValidationIssue } from './validateFields.ts';
-export type ValidationResult = { ok: true; project: Project } | { ok: false; issues: ValidationIssue[] };
+export type ValidationResult =
+  | { ok: true; project: Project }
+  | { ok: false; issues: ValidationIssue[] };
 
-const TOP_FIELDS = ['format', 'version', 'title', 'supports', 'ground', 'wire', 'loads', 'installation', 'cases', 'limits', 'model', 'environment'];
-const CUSTOM_WIRE = ['label', 'diameter', 'massPerLength', 'axialStiffness', 'thermalExpansion', 'breakingLoad'];
+const TOP_FIELDS = [
+  'format',
+  'version',
+  'title',
+  'supports',
+  'ground',
+  'wire',
+  'loads',
+  'installation',
+  'cases',
+  'limits',
+  'model',
+  'environment',
+];
+const CUSTOM_WIRE = [
+  'label',
+  'diameter',
+  'massPerLength',
+  'axialStiffness',
+  'thermalExpansion',
+  'breakingLoad',
+];
 const TARGET_KINDS = ['horizontalTension', 'maxTension', 'sag', 'unstressedLength'] as const;
 const TEMPERATURE_RANGE = [-80, 80] as const;
 
@@ -26,9 +49,14 @@ function checkSupports(c: FieldChecker, raw: unknown): { x: number }[] {
     c.number(s.z, `${path}.z`, -1000, 10000);
     c.string(s.label, `${path}.label`, 100, false);
     const free = c.boolean(s.free, `${path}.free`, false);
-    if (free && (i === 0 || i === list.length - 1)) c.fail(`${path}.free`, 'an end support cannot be free');
+    if (free && (i === 0 || i === list.length - 1))
+      c.fail(`${path}.free`, 'an end support cannot be free');
     if (x !== undefined) {
-      if (xs.length > 0 && x <= xs[xs.length - 1].x) c.fail(`${path}.x`, 'must be greater than the previous support x (supports in order along the span)');
+      if (xs.length > 0 && x <= xs[xs.length - 1].x)
+        c.fail(
+          `${path}.x`,
+          'must be greater than the previous support x (supports in order along the span)',
+        );
       xs.push({ x });
     }
   });
@@ -44,7 +72,8 @@ function checkGround(c: FieldChecker, raw: unknown): void {
     if (!g) return;
     const x = c.number(g.x, `ground[${i}].x`);
     c.number(g.z, `ground[${i}].z`, -1000, 10000);
-    if (x !== undefined && x <= previous) c.fail(`ground[${i}].x`, 'must be greater than the previous ground point x');
+    if (x !== undefined && x <= previous)
+      c.fail(`ground[${i}].x`, 'must be greater than the previous ground point x');
     if (x !== undefined) previous = x;
   });
 }
@@ -52,7 +81,8 @@ function checkGround(c: FieldChecker, raw: unknown): void {
 function checkWire(c: FieldChecker, raw: unknown): void {
   if (typeof raw === 'object' && raw !== null && 'catalogId' in raw) {
     const w = c.object(raw, 'wire', ['catalogId']);
-    if (w && typeof w.catalogId === 'string' && !findCatalogWire(w.catalogId)) c.fail('wire.catalogId', `"${w.catalogId.slice(0, 60)}" is not in the wire catalogue`);
+    if (w && typeof w.catalogId === 'string' && !findCatalogWire(w.catalogId))
+      c.fail('wire.catalogId', `"${w.catalogId.slice(0, 60)}" is not in the wire catalogue`);
     else if (w && typeof w.catalogId !== 'string') c.fail('wire.catalogId', 'must be text');
     return;
   }
@@ -76,7 +106,8 @@ function checkLoads(c: FieldChecker, raw: unknown, first: number, last: number):
       if (!p) return;
       c.number(p.x, `${path}.x`, first, last);
       c.string(p.label, `${path}.label`, 100, false);
-      if ((p.mass === undefined) === (p.force === undefined)) c.fail(path, 'needs exactly one of mass (kg) or force (N)');
+      if ((p.mass === undefined) === (p.force === undefined))
+        c.fail(path, 'needs exactly one of mass (kg) or force (N)');
       else if (p.mass !== undefined) c.number(p.mass, `${path}.mass`, 0, 1e5);
       else c.number(p.force, `${path}.force`, 0, 1e6);
     } else if (kind === 'uniform') {
@@ -84,7 +115,8 @@ function checkLoads(c: FieldChecker, raw: unknown, first: number, last: number):
       if (!u) return;
       const from = c.number(u.from, `${path}.from`, first, last);
       const to = c.number(u.to, `${path}.to`, first, last);
-      if (from !== undefined && to !== undefined && to <= from) c.fail(`${path}.to`, 'must be greater than from');
+      if (from !== undefined && to !== undefined && to <= from)
+        c.fail(`${path}.to`, 'must be greater than from');
       c.number(u.massPerLength, `${path}.massPerLength`, 0, 1000);
       if (u.diameter !== undefined) c.number(u.diameter, `${path}.diameter`, 0, 1);
       c.string(u.label, `${path}.label`, 100, false);
@@ -99,11 +131,18 @@ function checkCases(c: FieldChecker, raw: unknown): string[] {
   const names: string[] = [];
   list.forEach((item, i) => {
     const path = `cases[${i}]`;
-    const k = c.object(item, path, ['name', 'temperature', 'iceThickness', 'windSpeed', 'withLoads']);
+    const k = c.object(item, path, [
+      'name',
+      'temperature',
+      'iceThickness',
+      'windSpeed',
+      'withLoads',
+    ]);
     if (!k) return;
     const name = c.string(k.name, `${path}.name`, 80);
     if (name !== undefined && name.trim() === '') c.fail(`${path}.name`, 'must not be empty');
-    else if (name !== undefined && names.includes(name)) c.fail(`${path}.name`, `"${name}" is used by another case`);
+    else if (name !== undefined && names.includes(name))
+      c.fail(`${path}.name`, `"${name}" is used by another case`);
     if (name !== undefined) names.push(name);
     c.number(k.temperature, `${path}.temperature`, ...TEMPERATURE_RANGE);
     c.number(k.iceThickness, `${path}.iceThickness`, 0, 0.2);
@@ -113,7 +152,12 @@ function checkCases(c: FieldChecker, raw: unknown): string[] {
   return names;
 }
 
-function checkInstallation(c: FieldChecker, raw: unknown, spanLengths: number[], caseNames: string[]): void {
+function checkInstallation(
+  c: FieldChecker,
+  raw: unknown,
+  spanLengths: number[],
+  caseNames: string[],
+): void {
   const inst = c.object(raw, 'installation', ['temperature', 'withLoads', 'target']);
   if (!inst) return;
   c.number(inst.temperature, 'installation.temperature', ...TEMPERATURE_RANGE);
@@ -132,12 +176,24 @@ function checkInstallation(c: FieldChecker, raw: unknown, spanLengths: number[],
     else c.integer(t.span, 'installation.target.span', 0, Math.max(0, spanLengths.length - 1));
   }
   if (t.case !== undefined) {
-    if (kind === 'unstressedLength') c.fail('installation.target.case', 'does not apply to a cut length (it is the same in every case)');
-    else if (typeof t.case !== 'string' || !caseNames.includes(t.case)) c.fail('installation.target.case', 'must name one of the cases');
+    if (kind === 'unstressedLength')
+      c.fail(
+        'installation.target.case',
+        'does not apply to a cut length (it is the same in every case)',
+      );
+    else if (typeof t.case !== 'string' || !caseNames.includes(t.case))
+      c.fail('installation.target.case', 'must name one of the cases');
   }
   if (kind === 'sag' && value !== undefined && spanLengths.length > 0) {
-    const j = typeof t.span === 'number' && spanLengths[t.span] !== undefined ? t.span : spanLengths.indexOf(Math.max(...spanLengths));
-    if (value >= spanLengths[j] / 2) c.fail('installation.target.sag', `is longer than possible: must be less than half the span (${(spanLengths[j] / 2).toFixed(3)} m)`);
+    const j =
+      typeof t.span === 'number' && spanLengths[t.span] !== undefined
+        ? t.span
+        : spanLengths.indexOf(Math.max(...spanLengths));
+    if (value >= spanLengths[j] / 2)
+      c.fail(
+        'installation.target.sag',
+        `is longer than possible: must be less than half the span (${(spanLengths[j] / 2).toFixed(3)} m)`,
+      );
   }
 }
 
@@ -153,7 +209,8 @@ function checkLimits(c: FieldChecker, raw: unknown): void {
     if (!z) return;
     const from = c.number(z.from, `${path}.from`);
     const to = c.number(z.to, `${path}.to`);
-    if (from !== undefined && to !== undefined && to <= from) c.fail(`${path}.to`, 'must be greater than from');
+    if (from !== undefined && to !== undefined && to <= from)
+      c.fail(`${path}.to`, 'must be greater than from');
     c.number(z.height, `${path}.height`, 0, 1000);
     c.string(z.label, `${path}.label`, 100, false);
   });
@@ -164,14 +221,21 @@ function checkSettings(c: FieldChecker, model: unknown, env: unknown): void {
     const m = c.object(model, 'model', ['theory', 'elementOrder', 'elementsPerSpan']);
     if (m?.theory !== undefined) c.oneOf(m.theory, 'model.theory', ['exact', 'parabolic']);
     if (m?.elementOrder !== undefined) c.oneOf(m.elementOrder, 'model.elementOrder', [1, 2]);
-    if (m?.elementsPerSpan !== undefined) c.integer(m.elementsPerSpan, 'model.elementsPerSpan', 2, 20000);
+    if (m?.elementsPerSpan !== undefined)
+      c.integer(m.elementsPerSpan, 'model.elementsPerSpan', 2, 20000);
   }
   if (env !== undefined) {
-    const e = c.object(env, 'environment', ['gravity', 'airDensity', 'iceDensity', 'dragCoefficient']);
+    const e = c.object(env, 'environment', [
+      'gravity',
+      'airDensity',
+      'iceDensity',
+      'dragCoefficient',
+    ]);
     if (e?.gravity !== undefined) c.positive(e.gravity, 'environment.gravity', 50);
     if (e?.airDensity !== undefined) c.number(e.airDensity, 'environment.airDensity', 0, 10);
     if (e?.iceDensity !== undefined) c.positive(e.iceDensity, 'environment.iceDensity', 2000);
-    if (e?.dragCoefficient !== undefined) c.number(e.dragCoefficient, 'environment.dragCoefficient', 0, 5);
+    if (e?.dragCoefficient !== undefined)
+      c.number(e.dragCoefficient, 'environment.dragCoefficient', 0, 5);
   }
 }
 
@@ -181,7 +245,11 @@ export function validateProject(raw: unknown): ValidationResult {
   if (!doc) return { ok: false, issues: c.issues };
   if (doc.format !== PROJECT_FORMAT) c.fail('format', `must be "${PROJECT_FORMAT}"`);
   const version = c.integer(doc.version, 'version', 1, Number.MAX_SAFE_INTEGER);
-  if (version !== undefined && version > PROJECT_VERSION) c.fail('version', `${version} is newer than this Sagwright reads (${PROJECT_VERSION}); update Sagwright`);
+  if (version !== undefined && version > PROJECT_VERSION)
+    c.fail(
+      'version',
+      `${version} is newer than this Sagwright reads (${PROJECT_VERSION}); update Sagwright`,
+    );
   c.string(doc.title, 'title', 200);
   const supports = checkSupports(c, doc.supports);
   const first = supports[0]?.x ?? -Infinity;
@@ -194,5 +262,7 @@ export function validateProject(raw: unknown): ValidationResult {
   checkInstallation(c, doc.installation, spanLengths, caseNames);
   checkLimits(c, doc.limits);
   checkSettings(c, doc.model, doc.environment);
-  return c.issues.length === 0 ? { ok: true, project: raw as Project } : { ok: false, issues: c.issues };
+  return c.issues.length === 0
+    ? { ok: true, project: raw as Project }
+    : { ok: false, issues: c.issues };
 }

@@ -6,14 +6,23 @@
  */
 import type { CustomWire, WireSpec } from './project.ts';
 
-export type WireKind = 'custom' | 'galvanised steel' | 'stainless steel' | 'polyester rope' | 'nylon rope' | 'coated clothesline';
+export type WireKind =
+  | 'custom'
+  | 'galvanised steel'
+  | 'stainless steel'
+  | 'polyester rope'
+  | 'nylon rope'
+  | 'coated clothesline';
 
 export interface WireProperties extends CustomWire {
   id: string;
   kind: WireKind;
   construction: string;
   /** Where each value comes from, field by field. */
-  sources: Record<'diameter' | 'massPerLength' | 'axialStiffness' | 'thermalExpansion' | 'breakingLoad', string>;
+  sources: Record<
+    'diameter' | 'massPerLength' | 'axialStiffness' | 'thermalExpansion' | 'breakingLoad',
+    string
+  >;
   notes?: string;
 }
 
@@ -26,7 +35,12 @@ interface RopeFactors {
 
 const FEYRER = 'Feyrer, Wire Ropes, 2nd ed., Table 1.9 [V]';
 const FACTORS: Record<string, RopeFactors> = {
-  '1x19': { W: 0.478, C: 0.597, K: 0.537, source: '1x19 factors derived from 19 equal wires, fill 0.76 [D]' },
+  '1x19': {
+    W: 0.478,
+    C: 0.597,
+    K: 0.537,
+    source: '1x19 factors derived from 19 equal wires, fill 0.76 [D]',
+  },
   '7x7': { W: 0.384, C: 0.432, K: 0.388, source: FEYRER },
   '7x19': { W: 0.381, C: 0.418, K: 0.362, source: FEYRER },
 };
@@ -36,7 +50,13 @@ const MODULUS_PA: Record<string, number> = { '1x19': 150e9, '7x7': 100e9, '7x19'
 const STEEL_ALPHA = 12e-6; // EN 1993-1-1 §3.2.6 [M]
 const STAINLESS_ALPHA = 16e-6; // AISI 316 [V]
 
-function steelWire(construction: string, dMm: number, stainless: boolean, id: string, label: string): WireProperties {
+function steelWire(
+  construction: string,
+  dMm: number,
+  stainless: boolean,
+  id: string,
+  label: string,
+): WireProperties {
   const f = FACTORS[construction];
   const grade = stainless ? 1570 : 1770; // N/mm² [M] stainless, [CP] galvanised
   const areaMm2 = f.C * dMm * dMm;
@@ -62,18 +82,34 @@ function steelWire(construction: string, dMm: number, stainless: boolean, id: st
   };
 }
 
-function metricSteel(construction: string, diametersMm: number[], stainless: boolean): WireProperties[] {
+function metricSteel(
+  construction: string,
+  diametersMm: number[],
+  stainless: boolean,
+): WireProperties[] {
   const prefix = stainless ? 'ss' : 'galv';
   const name = stainless ? 'Stainless 316' : 'Galvanised';
   return diametersMm.map((d) =>
-    steelWire(construction, d, stainless, `${prefix}-${construction}-${d}`, `${name} ${construction} ${d} mm`),
+    steelWire(
+      construction,
+      d,
+      stainless,
+      `${prefix}-${construction}-${d}`,
+      `${name} ${construction} ${d} mm`,
+    ),
   );
 }
 
 /** Inch-size 7x19 cable: ~35 % stronger than the factor formula (1/8 in ≈ 8.9 kN) [M]. */
 function inchCable(sixteenths: number, label: string): WireProperties {
   const dMm = (sixteenths / 16) * 25.4;
-  const wire = steelWire('7x19', dMm, false, `galv-7x19-${sixteenths}-16in`, `Galvanised 7x19 ${label} in`);
+  const wire = steelWire(
+    '7x19',
+    dMm,
+    false,
+    `galv-7x19-${sixteenths}-16in`,
+    `Galvanised 7x19 ${label} in`,
+  );
   wire.breakingLoad *= 1.35;
   wire.sources.breakingLoad = 'factor formula × 1.35 for inch aircraft cable [M]';
   return wire;
@@ -97,7 +133,8 @@ const NYLON: FibreRow[] = [
   { dMm: 12, breakingKN: 25.2, massKgPerM: 0.094 },
 ];
 
-const FIBRE_NOTE = 'Fibre ropes creep and stretch: re-tension after loading; thermal expansion taken as 0.';
+const FIBRE_NOTE =
+  'Fibre ropes creep and stretch: re-tension after loading; thermal expansion taken as 0.';
 
 function fibreRopes(rows: FibreRow[], nylon: boolean): WireProperties[] {
   const strainAtBreak = nylon ? 0.3 : 0.2; // mid of 25–35 % / 15–25 % [V]
@@ -124,14 +161,23 @@ function fibreRopes(rows: FibreRow[], nylon: boolean): WireProperties[] {
 
 /** Plastic-coated clothesline: 7x7 galvanised 2 mm core in PVC to 3.5 mm [D from V/M]. */
 function clothesline(): WireProperties {
-  const core = steelWire('7x7', 2, false, 'coated-7x7-2-3.5', 'Coated clothesline 3.5 mm (7x7 2 mm core)');
-  const pvcKgPerM = ((Math.PI / 4) * (3.5 ** 2 - 2 ** 2) * 1e-6) * 1400; // PVC ~1400 kg/m³ [M]
+  const core = steelWire(
+    '7x7',
+    2,
+    false,
+    'coated-7x7-2-3.5',
+    'Coated clothesline 3.5 mm (7x7 2 mm core)',
+  );
+  const pvcKgPerM = (Math.PI / 4) * (3.5 ** 2 - 2 ** 2) * 1e-6 * 1400; // PVC ~1400 kg/m³ [M]
   return {
     ...core,
     kind: 'coated clothesline',
     diameter: 0.0035,
     massPerLength: core.massPerLength + pvcKgPerM,
-    sources: { ...core.sources, massPerLength: `${core.sources.massPerLength} + PVC 1400 kg/m³ [M]` },
+    sources: {
+      ...core.sources,
+      massPerLength: `${core.sources.massPerLength} + PVC 1400 kg/m³ [M]`,
+    },
     notes: 'The coating carries no load; breaking load of the steel core only.',
   };
 }
@@ -164,6 +210,12 @@ export function resolveWire(spec: WireSpec): WireProperties | undefined {
     id: 'custom',
     kind: 'custom',
     construction: 'custom',
-    sources: { diameter: user, massPerLength: user, axialStiffness: user, thermalExpansion: user, breakingLoad: user },
+    sources: {
+      diameter: user,
+      massPerLength: user,
+      axialStiffness: user,
+      thermalExpansion: user,
+      breakingLoad: user,
+    },
   };
 }

@@ -60,9 +60,11 @@ export function solveElasticCatenary(p: CatenaryInput, guessH: number): Catenary
     V += damp * stepV;
   }
   const { weightPerLength: w, axialStiffness: EA, unstressedLength: L0 } = p;
-  const x = (s: number) => (H * s) / EA + (H / w) * (Math.asinh(V / H) - Math.asinh((V - w * s) / H));
+  const x = (s: number) =>
+    (H * s) / EA + (H / w) * (Math.asinh(V / H) - Math.asinh((V - w * s) / H));
   const z = (s: number) =>
-    -(V * s - (w * s * s) / 2) / EA + (H / w) * (Math.sqrt(1 + ((V - w * s) / H) ** 2) - Math.sqrt(1 + (V / H) ** 2));
+    -(V * s - (w * s * s) / 2) / EA +
+    (H / w) * (Math.sqrt(1 + ((V - w * s) / H) ** 2) - Math.sqrt(1 + (V / H) ** 2));
   const sSag = Math.min(Math.max((V + (H * p.rise) / p.span) / w, 0), L0);
   const sLow = Math.min(Math.max(V / w, 0), L0);
   const W = w * L0;
