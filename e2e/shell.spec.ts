@@ -29,6 +29,11 @@ test('shell loads, shows results, the sag plot and the cautions without console 
   for (const weatherCase of demo.cases) {
     await expect(table.getByRole('rowheader', { name: weatherCase.name })).toBeVisible();
   }
+  // The demo installs to a stated sag, so the installation row must read it back (to the mm).
+  const installationRow = table.getByRole('row').filter({ hasText: 'Installation' });
+  await expect(installationRow.getByRole('cell').nth(2)).toHaveText(
+    demo.installation.target.sag.toFixed(3),
+  );
 
   const plot = page.getByRole('img', { name: 'Sag plot' });
   await expect(plot).toHaveAttribute('data-plot-state', 'drawn');
