@@ -1,0 +1,23 @@
+/**
+ * Results derived from the document by the solver worker. The last good results stay while
+ * a newer document is being solved or cannot be solved; `stale` says they no longer match it.
+ */
+import { create } from 'zustand';
+import type { Project, ProjectResults } from '../core/index.ts';
+
+export interface ResultsState {
+  results: ProjectResults | null;
+  /** The document the results were solved from. */
+  resultsProject: Project | null;
+  /** True while the shown results are not those of the current document. */
+  stale: boolean;
+  /** Why the current document could not be solved, or null. */
+  error: string | null;
+}
+
+export const useResultsStore = create<ResultsState>()(() => ({
+  results: null,
+  resultsProject: null,
+  stale: true,
+  error: null,
+}));

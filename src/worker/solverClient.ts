@@ -1,0 +1,107 @@
+/**
+ * Main-thread side of the solver worker. At most one request is in flight; a newer document
+ * waits as the single pending request (the newest replaces any older one), replies to
+ * superseded requests are dropped, and a worker that dies or stops answering is replaced and
+ * the latest request sent again. Nothing here blocks: every call returns at once.
+ */
+import type { Project, ProjectResults } from '../core/index.ts';
+import type { SolveReply, SolveRequest, WorkerLike } from './protocol.ts';
+
+export type SolveOutcome =
+  | { ok: true; results: ProjectResults; project: Project }
+  | { ok: false; message: string; project: Project };
+
+export interface SolverClientOptions {
+  createWorker: () => WorkerLike;
+  onOutcome: (outcome: SolveOutcome) => void;
+  /** A request unanswered this long is taken as a hung worker (ms). */
+  watchdogMs?: number;
+  /** Restarts in a row without a reply before giving up on the request. */
+  maxRestarts?: number;
+}
+
+export class SolverClient {
+  private worker: WorkerLike | undefined;
+  private nextId = 1;
+  private inFlight: SolveRequest | undefined;
+  private pending: SolveRequest | undefined;
+  private latestId = 0;
+  private restarts = 0;
+  private watchdog: ReturnType<typeof setTimeout> | undefined;
+  /** Replies dropped because a newer request had been made (for tests and diagnostics). */
+  dropped = 0;
+
+  constructor(private readonly options: SolverClientOptions) {}
+
+  solve(project: Project): void {
+    const request = { id: this.nextId++, project };
+    this.latestId = request.id;
+    if (this.inFlight) this.pending = request;
+    else this.send(request);
+  }
+
+  dispose(): void {
+    clearTimeout(this.watchdog);
+    this.worker?.terminate();
+    this.worker = undefined;
+    this.inFlight = undefined;
+    this.pending = undefined;
+  }
+
+  private ensureWorker(): WorkerLike {
+    if (this.worker) return this.worker;
+    const worker = this.options.createWorker();
+    worker.onmessage = (event) => this.receive(event.data);
+    worker.onerror = (event) => {
+      event.preventDefault?.();
+      this.restart(`the solver stopped: ${event.message || 'unknown error'}`);
+    };
+    worker.onmessageerror = () => this.restart('the solver sent an unreadable reply');
+    this.worker = worker;
+    return worker;
+  }
+
+  private send(request: SolveRequest): void {
+    this.inFlight = request;
+    this.pending = undefined;
+    this.ensureWorker().postMessage(request);
+    clearTimeout(this.watchdog);
+    const ms = this.options.watchdogMs ?? 20_000;
+    this.watchdog = setTimeout(() => this.restart(`no answer within ${ms / 1000} s`), ms);
+  }
+
+  private receive(reply: SolveReply): void {
+    const request = this.inFlight;
+    if (!request || reply.id !== request.id) return;
+    clearTimeout(this.watchdog);
+    this.inFlight = undefined;
+    this.restarts = 0;
+    if (reply.id === this.latestId) {
+      this.options.onOutcome(
+        reply.ok
+          ? { ok: true, results: reply.results, project: request.project }
+          : { ok: false, message: reply.message, project: request.project },
+      );
+    } else {
+      this.dropped += 1;
+    }
+    if (this.pending) this.send(this.pending);
+  }
+
+  private restart(reason: string): void {
+    clearTimeout(this.watchdog);
+    this.worker?.terminate();
+    this.worker = undefined;
+    const latest = this.pending ?? this.inFlight;
+    this.inFlight = undefined;
+    this.pending = undefined;
+    if (!latest) return;
+    this.restarts += 1;
+    if (this.restarts > (this.options.maxRestarts ?? 3)) {
+      this.restarts = 0;
+      this.options.onOutcome({ ok: false, message: reason, project: latest.project });
+      return;
+    }
+    this.send(latest);
+  }
+}
