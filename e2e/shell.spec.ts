@@ -22,7 +22,9 @@ test('shell loads, shows results, the sag plot and the cautions without console 
   await expect(page).toHaveTitle('Sagwright');
   await expect(page.getByRole('heading', { level: 1, name: 'Sagwright' })).toBeVisible();
   await expect(page.getByRole('heading', { level: 2, name: demo.title })).toBeVisible();
-  await expect(page.getByRole('note', { name: 'Cautions' })).toContainText('licensed person');
+  const cautions = page.getByRole('region', { name: 'Cautions' });
+  await expect(cautions).toBeVisible();
+  await expect(cautions).toContainText('licensed person');
 
   const table = page.getByRole('table', { name: 'Results by case' });
   await expect(table.getByRole('row')).toHaveCount(1 + expectedCaseCount);

@@ -4,7 +4,7 @@
  * store and full workbench replace this wiring later.
  */
 import { useMemo } from 'react';
-import { solveProject } from '../core/index.ts';
+import { CAUTION_SUMMARY, CAUTIONS, solveProject } from '../core/index.ts';
 import type { CaseResult, Project, ProjectResults } from '../core/project.ts';
 import { demoProject } from '../state/demoProject.ts';
 import { SagPlot } from './SagPlot.tsx';
@@ -49,12 +49,21 @@ function ResultsTable({ cases }: { cases: CaseResult[] }) {
 
 function Cautions() {
   return (
-    <p className="cautions" role="note" aria-label="Cautions">
-      <strong>Caution:</strong> a wire that carries an electric cable, crosses a road or path, or
-      holds anything over people is governed by local codes and must be checked by a competent,
-      licensed person. Fixings must be rated for the loads shown. Not for lifting, fall-arrest or
-      carrying people.
-    </p>
+    <section className="cautions" aria-label="Cautions">
+      <p>
+        <strong>Caution:</strong> {CAUTION_SUMMARY}
+      </p>
+      <details>
+        <summary>All cautions</summary>
+        <ul>
+          {CAUTIONS.map((caution) => (
+            <li key={caution.title}>
+              <strong>{caution.title}.</strong> {caution.text}
+            </li>
+          ))}
+        </ul>
+      </details>
+    </section>
   );
 }
 
