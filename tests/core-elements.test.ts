@@ -3,10 +3,14 @@
  * Sources: element matrices as derived in doc/model.md (minimum potential energy, DESIGN.md);
  * dense reference: ml-matrix LU decomposition (npm).
  */
-import { EigenvalueDecomposition, Matrix, solve as denseSolve } from 'ml-matrix';
+import { solve as denseSolve, EigenvalueDecomposition, Matrix } from 'ml-matrix';
 import { describe, expect, it } from 'vitest';
 import { factorPentadiagonal, factorTridiagonal } from '../src/core/bandedSolver.ts';
-import { elementStiffness, elementUniformLoad, shapeFunctions } from '../src/core/stringElements.ts';
+import {
+  elementStiffness,
+  elementUniformLoad,
+  shapeFunctions,
+} from '../src/core/stringElements.ts';
 
 describe('element matrices (closed forms of DESIGN.md)', () => {
   it('linear element K = (H/L)[1 −1; −1 1], R = qL/2 [1 1]', () => {
@@ -103,6 +107,8 @@ describe('band solvers agree with a dense LU solve (ml-matrix)', () => {
   });
 
   it('refuses a matrix that is not positive definite', () => {
-    expect(() => factorTridiagonal(Float64Array.of(1, 1), Float64Array.of(2))).toThrow(/positive definite/);
+    expect(() => factorTridiagonal(Float64Array.of(1, 1), Float64Array.of(2))).toThrow(
+      /positive definite/,
+    );
   });
 });

@@ -16,7 +16,14 @@ import {
   solveString,
 } from '../src/core/stringSystem.ts';
 
-function uniformSolution(order: ElementOrder, elements: number, l: number, h: number, q: number, H: number) {
+function uniformSolution(
+  order: ElementOrder,
+  elements: number,
+  l: number,
+  h: number,
+  q: number,
+  H: number,
+) {
   const mesh = buildStringMesh(0, l, [], elements, order);
   const R = new Float64Array(mesh.nodeX.length);
   // Downward load q: in −H z'' = f the load along +z is f = −q.
@@ -24,7 +31,8 @@ function uniformSolution(order: ElementOrder, elements: number, l: number, h: nu
   return { mesh, z: solveString(createStringSystem(mesh), H, R, 0, h) };
 }
 
-const parabola = (x: number, l: number, h: number, q: number, H: number) => (h * x) / l - (q * x * (l - x)) / (2 * H);
+const parabola = (x: number, l: number, h: number, q: number, H: number) =>
+  (h * x) / l - (q * x * (l - x)) / (2 * H);
 
 describe('uniform load: closed-form parabola (REFERENCE.md, Equations)', () => {
   const [l, h, q, H] = [24, 0.6, 9.5, 850];
@@ -32,7 +40,9 @@ describe('uniform load: closed-form parabola (REFERENCE.md, Equations)', () => {
   it('linear elements: nodal values equal the parabola to 1e-12 relative', () => {
     const { mesh, z } = uniformSolution(1, 17, l, h, q, H);
     const scale = (q * l * l) / (8 * H);
-    mesh.nodeX.forEach((x, i) => expect(Math.abs(z[i] - parabola(x, l, h, q, H)) / scale).toBeLessThan(1e-12));
+    mesh.nodeX.forEach((x, i) =>
+      expect(Math.abs(z[i] - parabola(x, l, h, q, H)) / scale).toBeLessThan(1e-12),
+    );
   });
 
   it('quadratic elements: exact everywhere, not only at nodes', () => {
@@ -69,7 +79,8 @@ describe('published example 1: three point loads, unequal supports', () => {
   const z = solveString(system, H, R, 0, 2);
 
   it('horizontal tension H = 1600 N', () => expect(H).toBeCloseTo(1600, 9));
-  it('point at x = 6 m is 1.375 m below B', () => expect(2 - interpolate(mesh, z, 6).value).toBeCloseTo(1.375, 12));
+  it('point at x = 6 m is 1.375 m below B', () =>
+    expect(2 - interpolate(mesh, z, 6).value).toBeCloseTo(1.375, 12));
   it('support reactions V_A = 300 N, V_B = 1100 N', () => {
     const slopeA = interpolate(mesh, z, 1).slope;
     const slopeB = interpolate(mesh, z, 7).slope;
@@ -87,7 +98,8 @@ describe('published example 1: three point loads, unequal supports', () => {
 
 describe('convergence for a non-uniform (sine) load', () => {
   const [l, H, q0] = [10, 500, 40];
-  const exact = (x: number) => ((q0 * l * l) / (H * Math.PI * Math.PI)) * Math.sin((Math.PI * x) / l);
+  const exact = (x: number) =>
+    ((q0 * l * l) / (H * Math.PI * Math.PI)) * Math.sin((Math.PI * x) / l);
 
   function maxError(order: ElementOrder, elements: number): number {
     const mesh = buildStringMesh(0, l, [], elements, order);
@@ -110,7 +122,9 @@ describe('convergence for a non-uniform (sine) load', () => {
       const sizes = [8, 16, 32, 64]; // asymptotic range
       const errors = sizes.map((n) => maxError(order, n));
       const rates = errors.slice(1).map((e, i) => Math.log2(errors[i] / e));
-      console.log(`order ${order}: errors ${errors.map((e) => e.toExponential(2)).join(', ')}; rates ${rates.map((r) => r.toFixed(2)).join(', ')}`);
+      console.log(
+        `order ${order}: errors ${errors.map((e) => e.toExponential(2)).join(', ')}; rates ${rates.map((r) => r.toFixed(2)).join(', ')}`,
+      );
       for (const rate of rates) expect(rate).toBeGreaterThan(expectedRate - 0.05);
     });
   }

@@ -1,10 +1,13 @@
 /**
- * Irvine's elastic catenary (Cable Structures, 1981, §1.3), solved here independently of the
- * core for test reference values. A at (0, 0), B at (l, h), z up; w weight per unstressed metre,
- * L0 unstressed length, W = w L0, H horizontal tension, V upward reaction at A.
- *   l = H L0/EA + (H/w)[asinh(V/H) − asinh((V − W)/H)]
- *   h = −(L0/EA)(V − W/2) − (H/w)[√(1 + (V/H)²) − √(1 + ((V − W)/H)²)]
+ * Irvine's elastic catenary (Cable Structures, 1981, §1.3), extended to concentrated loads
+ * hung at horizontal positions, solved here independently of the core for reference values.
+ * A at (0, 0), B at (l, h), z up; w weight per unstressed metre; V upward reaction at A;
+ * between loads the vertical force is V(s) = Vₐ − w (s − sₐ) and each piece is an elastic
+ * catenary:  Δx = H Δs/EA + (H/w)[asinh(Vₐ/H) − asinh(V_b/H)],
+ *            Δz = −(Vₐ Δs − w Δs²/2)/EA + (H/w)[√(1 + (V_b/H)²) − √(1 + (Vₐ/H)²)].
+ * Unknowns H, V and the material points sₖ of the loads; Newton with an ml-matrix linear solve.
  */
+import { Matrix, solve } from 'ml-matrix';
 
 export interface CatenaryInput {
   span: number;
@@ -12,6 +15,8 @@ export interface CatenaryInput {
   unstressedLength: number;
   weightPerLength: number;
   axialStiffness: number;
+  /** Concentrated loads: horizontal position (m) and force (N). */
+  pointLoads?: { x: number; force: number }[];
 }
 
 export interface CatenarySolution {
@@ -20,61 +25,99 @@ export interface CatenarySolution {
   maxTension: number;
   sag: number;
   lowestZ: number;
-  x(s: number): number;
-  z(s: number): number;
 }
 
-function residual(p: CatenaryInput, H: number, V: number): [number, number] {
-  const { span: l, rise: h, unstressedLength: L0, weightPerLength: w, axialStiffness: EA } = p;
-  const W = w * L0;
-  const rl = (H * L0) / EA + (H / w) * (Math.asinh(V / H) - Math.asinh((V - W) / H)) - l;
-  const rh =
-    -(L0 / EA) * (V - W / 2) -
-    (H / w) * (Math.sqrt(1 + (V / H) ** 2) - Math.sqrt(1 + ((V - W) / H) ** 2)) -
-    h;
-  return [rl, rh];
+interface Piece {
+  sStart: number;
+  sEnd: number;
+  vStart: number;
 }
 
-/** Damped Newton with a finite-difference Jacobian on (ln H, V). */
-export function solveElasticCatenary(p: CatenaryInput, guessH: number): CatenarySolution {
-  let H = guessH;
-  let V = (p.weightPerLength * p.unstressedLength) / 2;
-  for (let it = 0; it < 200; it++) {
-    const [f1, f2] = residual(p, H, V);
-    if (Math.hypot(f1, f2) < 1e-13 * p.span) break;
-    const dH = 1e-7 * H;
-    const dV = 1e-7 * Math.max(Math.abs(V), H);
-    const [a1, a2] = residual(p, H + dH, V);
-    const [b1, b2] = residual(p, H, V + dV);
-    const j11 = (a1 - f1) / dH;
-    const j21 = (a2 - f2) / dH;
-    const j12 = (b1 - f1) / dV;
-    const j22 = (b2 - f2) / dV;
-    const det = j11 * j22 - j12 * j21;
-    let stepH = (-f1 * j22 + f2 * j12) / det;
-    const stepV = (-j11 * f2 + j21 * f1) / det;
-    let damp = 1;
-    while (H + damp * stepH <= 0) damp /= 2;
-    stepH *= damp;
-    H += stepH;
-    V += damp * stepV;
+function pieces(p: CatenaryInput, V: number, sLoads: number[]): Piece[] {
+  const loads = p.pointLoads ?? [];
+  const result: Piece[] = [];
+  let s = 0;
+  let v = V;
+  for (let k = 0; k <= loads.length; k++) {
+    const end = k < loads.length ? sLoads[k] : p.unstressedLength;
+    result.push({ sStart: s, sEnd: end, vStart: v });
+    v -= p.weightPerLength * (end - s) + (k < loads.length ? loads[k].force : 0);
+    s = end;
   }
-  const { weightPerLength: w, axialStiffness: EA, unstressedLength: L0 } = p;
-  const x = (s: number) =>
-    (H * s) / EA + (H / w) * (Math.asinh(V / H) - Math.asinh((V - w * s) / H));
-  const z = (s: number) =>
-    -(V * s - (w * s * s) / 2) / EA +
-    (H / w) * (Math.sqrt(1 + ((V - w * s) / H) ** 2) - Math.sqrt(1 + (V / H) ** 2));
-  const sSag = Math.min(Math.max((V + (H * p.rise) / p.span) / w, 0), L0);
-  const sLow = Math.min(Math.max(V / w, 0), L0);
-  const W = w * L0;
+  return result;
+}
+
+/** Position (x, z) at material distance ds into a piece. */
+function along(p: CatenaryInput, H: number, piece: Piece, ds: number): { x: number; z: number } {
+  const w = p.weightPerLength;
+  const EA = p.axialStiffness;
+  const va = piece.vStart;
+  const vb = va - w * ds;
   return {
-    H,
-    V,
-    maxTension: Math.max(Math.hypot(H, V), Math.hypot(H, V - W)),
-    sag: (p.rise * x(sSag)) / p.span - z(sSag),
-    lowestZ: z(sLow),
-    x,
-    z,
+    x: (H * ds) / EA + (H / w) * (Math.asinh(va / H) - Math.asinh(vb / H)),
+    z:
+      -(va * ds - (w * ds * ds) / 2) / EA +
+      (H / w) * (Math.hypot(1, vb / H) - Math.hypot(1, va / H)),
   };
+}
+
+function residual(p: CatenaryInput, u: number[]): number[] {
+  const [lnH, V, ...sLoads] = u;
+  const H = Math.exp(lnH);
+  const ps = pieces(p, V, sLoads);
+  const loads = p.pointLoads ?? [];
+  const out: number[] = [];
+  let x = 0;
+  let z = 0;
+  ps.forEach((piece, k) => {
+    const d = along(p, H, piece, piece.sEnd - piece.sStart);
+    x += d.x;
+    z += d.z;
+    if (k < loads.length) out.push(x - loads[k].x);
+  });
+  out.push(x - p.span, z - p.rise);
+  return out;
+}
+
+export function solveElasticCatenary(p: CatenaryInput, guessH: number): CatenarySolution {
+  const loads = p.pointLoads ?? [];
+  const total = p.weightPerLength * p.unstressedLength + loads.reduce((a, l) => a + l.force, 0);
+  let u = [Math.log(guessH), total / 2, ...loads.map((l) => (l.x / p.span) * p.unstressedLength)];
+  for (let it = 0; it < 100; it++) {
+    const f = residual(p, u);
+    if (Math.max(...f.map(Math.abs)) < 1e-12 * p.span) break;
+    const J = new Matrix(f.length, u.length);
+    u.forEach((value, j) => {
+      const step = 1e-7 * Math.max(1, Math.abs(value));
+      const shifted = [...u];
+      shifted[j] += step;
+      residual(p, shifted).forEach((g, i) => J.set(i, j, (g - f[i]) / step));
+    });
+    const delta = solve(J, Matrix.columnVector(f.map((v) => -v))).to1DArray();
+    const damp = Math.min(1, 0.5 / Math.max(1e-300, Math.abs(delta[0]))); // keep ln H steps ≤ 0.5
+    u = u.map((v, j) => v + damp * delta[j]);
+  }
+  const [lnH, V, ...sLoads] = u;
+  const H = Math.exp(lnH);
+  const w = p.weightPerLength;
+  let maxTension = 0;
+  let sag = 0;
+  let lowestZ = 0;
+  let x0 = 0;
+  let z0 = 0;
+  for (const piece of pieces(p, V, sLoads)) {
+    const length = piece.sEnd - piece.sStart;
+    const candidates = [0, length, (piece.vStart + (H * p.rise) / p.span) / w, piece.vStart / w];
+    for (const ds of candidates.filter((d) => d >= 0 && d <= length)) {
+      const at = along(p, H, piece, ds);
+      sag = Math.max(sag, (p.rise * (x0 + at.x)) / p.span - (z0 + at.z));
+      lowestZ = Math.min(lowestZ, z0 + at.z);
+    }
+    const vEnd = piece.vStart - w * length;
+    maxTension = Math.max(maxTension, Math.hypot(H, piece.vStart), Math.hypot(H, vEnd));
+    const end = along(p, H, piece, length);
+    x0 += end.x;
+    z0 += end.z;
+  }
+  return { H, V, maxTension, sag, lowestZ };
 }

@@ -1,0 +1,55 @@
+/** Small project builders for core tests (SI; values invented for the tests, not a scenario). */
+import type { Load, Project, WeatherCase } from '../../src/core/index.ts';
+
+export interface SpanSpec {
+  span: number;
+  rise?: number;
+  massPerLength: number;
+  axialStiffness: number;
+  thermalExpansion?: number;
+  breakingLoad?: number;
+  diameter?: number;
+  target: Project['installation']['target'];
+  installationTemperature?: number;
+  cases?: WeatherCase[];
+  loads?: Load[];
+  theory?: 'exact' | 'parabolic';
+  elementsPerSpan?: number;
+  elementOrder?: 1 | 2;
+  gravity?: number;
+}
+
+export function singleSpan(spec: SpanSpec): Project {
+  return {
+    format: 'sagwright-project',
+    version: 1,
+    title: 'test span',
+    supports: [
+      { x: 0, z: 0 },
+      { x: spec.span, z: spec.rise ?? 0 },
+    ],
+    wire: {
+      label: 'test wire',
+      diameter: spec.diameter ?? 0.005,
+      massPerLength: spec.massPerLength,
+      axialStiffness: spec.axialStiffness,
+      thermalExpansion: spec.thermalExpansion ?? 0,
+      breakingLoad: spec.breakingLoad ?? 1e9,
+    },
+    loads: spec.loads ?? [],
+    installation: {
+      temperature: spec.installationTemperature ?? 15,
+      withLoads: true,
+      target: spec.target,
+    },
+    cases: spec.cases ?? [],
+    limits: { safetyFactor: 5, minClearance: 0 },
+    ground: [{ x: 0, z: -1000 }],
+    model: {
+      theory: spec.theory ?? 'exact',
+      elementOrder: spec.elementOrder ?? 1,
+      elementsPerSpan: spec.elementsPerSpan ?? 400,
+    },
+    environment: { gravity: spec.gravity ?? 9.80665 },
+  };
+}
