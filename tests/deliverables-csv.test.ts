@@ -1,0 +1,69 @@
+/**
+ * CSV of the wire profiles. References: the unit definitions of the 1959 international yard and
+ * pound (1 ft = 0.3048 m, 1 lbf = 4.4482216152605 N, exact); the clearance is the height minus
+ * the ground line read off the example's own ground points; tension along a wire is never less
+ * than its horizontal component (T = H sqrt(1 + z'^2), DESIGN.md).
+ */
+import { readFileSync } from 'node:fs';
+import { describe, expect, it } from 'vitest';
+import { CAUTIONS, type Project, solveProject } from '../src/core/index.ts';
+import { csvText, profilesCsv } from '../src/deliverables/csv.ts';
+
+const project = JSON.parse(
+  readFileSync(new URL('../examples/workshop-yard-inclined.json', import.meta.url), 'utf8'),
+) as Project;
+const results = solveProject(project);
+
+function rows(csv: string) {
+  const lines = csv.trimEnd().split('\r\n');
+  const data = lines.filter((line) => !line.startsWith('#'));
+  return { comments: lines.filter((l) => l.startsWith('#')), header: data[0], body: data.slice(1) };
+}
+
+describe('profiles CSV', () => {
+  it('has one row per sampled point of every case, with units in the header', () => {
+    const { header, body } = rows(profilesCsv(project, results, 'si'));
+    expect(header).toBe('case,x (m),height z (m),clearance above ground (m),tension (N)');
+    const expected = results.cases.reduce((n, c) => n + (c.profile?.x.length ?? 0), 0);
+    expect(expected).toBeGreaterThan(results.cases.length * 10);
+    expect(body).toHaveLength(expected);
+    for (const c of results.cases)
+      expect(body.some((r) => r.startsWith(`${csvText(c.name)},`))).toBe(true);
+  });
+
+  it('clearance is height minus the ground line, and tension is at least H', () => {
+    const { body } = rows(profilesCsv(project, results, 'si'));
+    const hot = results.cases.find((c) => c.name === 'Hot summer');
+    const hotRows = body
+      .filter((r) => r.startsWith('Hot summer,'))
+      .map((r) => r.split(',').slice(1).map(Number));
+    // Ground from the file: (0,0) (12,0.2) (28,-0.4); at x = 12 m the ground is 0.2 m.
+    for (const [x, z, clearance, tension] of hotRows) {
+      const ground = x <= 12 ? (0.2 * x) / 12 : 0.2 + (-0.6 * (x - 12)) / 16;
+      expect(clearance).toBeCloseTo(z - ground, 3);
+      expect(tension).toBeGreaterThanOrEqual((hot?.horizontalTension ?? Infinity) - 0.05);
+    }
+  });
+
+  it('converts to feet and pounds-force exactly', () => {
+    const si = rows(profilesCsv(project, results, 'si'))
+      .body[5].split(',')
+      .map(Number);
+    const us = rows(profilesCsv(project, results, 'imperial'));
+    expect(us.header).toBe('case,x (ft),height z (ft),clearance above ground (ft),tension (lbf)');
+    const row = us.body[5].split(',').map(Number);
+    expect(row[2]).toBeCloseTo(si[2] / 0.3048, 2);
+    expect(row[4]).toBeCloseTo(si[4] / 4.4482216152605, 0);
+  });
+
+  it('carries every caution as a comment line', () => {
+    const { comments } = rows(profilesCsv(project, results, 'si'));
+    for (const caution of CAUTIONS) expect(comments.join('\n')).toContain(caution.text);
+  });
+
+  it('quotes commas and defuses formulas in case names', () => {
+    expect(csvText('Cold, iced, windy')).toBe('"Cold, iced, windy"');
+    expect(csvText('=HYPERLINK("x")')).toBe('"\'=HYPERLINK(""x"")"');
+    expect(csvText('Hot summer')).toBe('Hot summer');
+  });
+});
