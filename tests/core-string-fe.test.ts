@@ -40,9 +40,9 @@ describe('uniform load: closed-form parabola (REFERENCE.md, Equations)', () => {
   it('linear elements: nodal values equal the parabola to 1e-12 relative', () => {
     const { mesh, z } = uniformSolution(1, 17, l, h, q, H);
     const scale = (q * l * l) / (8 * H);
-    mesh.nodeX.forEach((x, i) =>
-      expect(Math.abs(z[i] - parabola(x, l, h, q, H)) / scale).toBeLessThan(1e-12),
-    );
+    mesh.nodeX.forEach((x, i) => {
+      expect(Math.abs(z[i] - parabola(x, l, h, q, H)) / scale).toBeLessThan(1e-12),;
+    });
   });
 
   it('quadratic elements: exact everywhere, not only at nodes', () => {
@@ -134,6 +134,8 @@ describe('convergence for a non-uniform (sine) load', () => {
     const R = new Float64Array(mesh.nodeX.length);
     addLoadFunction(mesh, (x) => q0 * Math.sin((Math.PI * x) / l), R);
     const u = solveString(createStringSystem(mesh), H, R);
-    mesh.nodeX.forEach((x, i) => expect(u[i]).toBeCloseTo(exact(x), 6));
+    mesh.nodeX.forEach((x, i) => {
+      expect(u[i]).toBeCloseTo(exact(x), 6);
+    });
   });
 });

@@ -91,7 +91,9 @@ export function solveElasticCatenary(p: CatenaryInput, guessH: number): Catenary
       const step = 1e-7 * Math.max(1, Math.abs(value));
       const shifted = [...u];
       shifted[j] += step;
-      residual(p, shifted).forEach((g, i) => J.set(i, j, (g - f[i]) / step));
+      residual(p, shifted).forEach((g, i) => {
+        J.set(i, j, (g - f[i]) / step);
+      });
     });
     const delta = solve(J, Matrix.columnVector(f.map((v) => -v))).to1DArray();
     const damp = Math.min(1, 0.5 / Math.max(1e-300, Math.abs(delta[0]))); // keep ln H steps ≤ 0.5
