@@ -41,7 +41,7 @@ describe('uniform load: closed-form parabola (REFERENCE.md, Equations)', () => {
     const { mesh, z } = uniformSolution(1, 17, l, h, q, H);
     const scale = (q * l * l) / (8 * H);
     mesh.nodeX.forEach((x, i) => {
-      expect(Math.abs(z[i] - parabola(x, l, h, q, H)) / scale).toBeLessThan(1e-12),;
+      expect(Math.abs(z[i] - parabola(x, l, h, q, H)) / scale).toBeLessThan(1e-12);
     });
   });
 
