@@ -249,9 +249,9 @@ function heavier(project: Project, k: number): Project {
 }
 
 function expectMore(more: CaseResult, less: CaseResult, label: string, tensionUp: boolean): void {
-  more.spans.forEach((s, j) =>
-    expect(s.sag, `${label} span ${j + 1} sag`).toBeGreaterThan(less.spans[j].sag),
-  );
+  more.spans.forEach((s, j) => {
+    expect(s.sag, `${label} span ${j + 1} sag`).toBeGreaterThan(less.spans[j].sag);
+  });
   if (tensionUp) {
     expect(more.horizontalTension, `${label} H`).toBeGreaterThan(less.horizontalTension);
     expect(more.maxTension, `${label} Tmax`).toBeGreaterThan(less.maxTension);
@@ -264,12 +264,22 @@ function expectMore(more: CaseResult, less: CaseResult, label: string, tensionUp
 describe('monotone response at a fixed cut length (change of state)', () => {
   const seeds = Array.from({ length: 40 }, (_, i) => 8000 + i);
 
+  // One section (intermediate supports free): with clamped supports the installation shares the
+  // cut length out among the spans by their stretch, so one span may get less wire when heavier.
   it('heavier load (all loads × 1.5) gives more sag and more tension in every span', () => {
     for (const seed of seeds) {
-      const light = fixedLengthProject(seed, [stillCase('Cold', -5), stillCase('Hot', 35)]);
+      const cases = [stillCase('Cold', -5), stillCase('Hot', 35)];
+      const clamped = fixedLengthProject(seed, cases);
+      const last = clamped.supports.length - 1;
+      const supports = clamped.supports.map((s, i) =>
+        i > 0 && i < last ? { ...s, free: true } : s,
+      );
+      const light = { ...clamped, supports };
       const a = solveProject(light).cases;
       const b = solveProject(heavier(light, 1.5)).cases;
-      a.forEach((c, i) => expectMore(b[i], c, `${light.title} / ${c.name}`, true));
+      a.forEach((c, i) => {
+        expectMore(b[i], c, `${light.title} / ${c.name}`, true);
+      });
     }
   });
 
