@@ -1,15 +1,15 @@
 /** Plain-text tables for people: the results of a project and the wire catalogue. */
 import type { ProjectResults, WireProperties } from '../core/index.ts';
 
-function pad(cells: string[][]): string {
+/** Columns padded to a common width: the first `leftColumns` left-aligned; a free-text last column. */
+function pad(cells: string[][], leftColumns = 1, freeLast = false): string {
   const widths = cells[0].map((_, k) => Math.max(...cells.map((row) => row[k].length)));
-  return cells
-    .map((row) =>
-      row
-        .map((cell, k) => (k === 0 ? cell.padEnd(widths[k]) : cell.padStart(widths[k])))
-        .join('  '),
-    )
-    .join('\n');
+  const last = cells[0].length - 1;
+  const cellText = (cell: string, k: number) => {
+    if (freeLast && k === last) return cell;
+    return k < leftColumns ? cell.padEnd(widths[k]) : cell.padStart(widths[k]);
+  };
+  return cells.map((row) => row.map(cellText).join('  ')).join('\n');
 }
 
 const n = (value: number, digits: number) => value.toFixed(digits);
@@ -93,5 +93,5 @@ export function catalogTable(wires: readonly WireProperties[]): string {
     n(w.breakingLoad / 1000, 2),
     `mass: ${w.sources.massPerLength}; breaking: ${w.sources.breakingLoad}; EA: ${w.sources.axialStiffness}`,
   ]);
-  return pad([header, ...rows]);
+  return pad([header, ...rows], 2, true);
 }

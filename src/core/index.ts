@@ -1,6 +1,7 @@
 /** Public entry of the Sagwright core: the project contract, the solver, the catalogue, validation. */
-export * from './project.ts';
+
 export { CAUTION_SUMMARY, CAUTIONS } from './cautions.ts';
+export * from './project.ts';
 export { solveProject } from './solveProject.ts';
 export { type ValidationIssue, type ValidationResult, validateProject } from './validateProject.ts';
 export { findCatalogWire, resolveWire, WIRE_CATALOG, type WireProperties } from './wireCatalog.ts';

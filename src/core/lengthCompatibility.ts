@@ -69,13 +69,18 @@ export function unstressedLengthAt(
   return { value, slope };
 }
 
-/** Set element loads from the wire loading; exact theory scales by ds₀/dx from the last state. */
-function updateLoads(spans: readonly SpanModel[], wire: WireLoading, useGeometry: boolean): number {
+/**
+ * Set element loads from the wire loading. The exact theory scales the wire's load by ds₀/dx of
+ * the last solved state (a warm start across states and trial tensions; 1 before any state).
+ */
+function updateLoads(spans: readonly SpanModel[], wire: WireLoading): number {
+  const useGeometry = wire.theory === 'exact';
   let change = 0;
   let scale = 0;
   for (const span of spans) {
     for (let e = 0; e < span.elementLength.length; e++) {
-      const ratio = useGeometry ? span.unstressedElement[e] / span.elementLength[e] : 1;
+      const unstressed = span.unstressedElement[e];
+      const ratio = useGeometry && unstressed > 0 ? unstressed / span.elementLength[e] : 1;
       const q = wire.weightNPerM * ratio + span.hungVertical[e];
       const p = wire.windNPerM * ratio + span.hungLateral[e];
       change = Math.max(change, Math.abs(q - span.qVertical[e]), Math.abs(p - span.qLateral[e]));
@@ -98,7 +103,7 @@ export function solveSectionForLength(
   unstressedLengthM: number,
   tensionGuessN: number,
 ): SectionSolution {
-  updateLoads(spans, wire, false);
+  updateLoads(spans, wire);
   let H = tensionGuessN;
   let iterations = 0;
   for (let outer = 0; outer < MAX_LOAD_ITERATIONS; outer++) {
@@ -113,7 +118,7 @@ export function solveSectionForLength(
       return { tensionN: H, iterations, converged: false, reason: 'tension did not converge' };
     unstressedLengthAt(spans, H, wire.axialStiffness, true);
     if (wire.theory === 'parabolic') return { tensionN: H, iterations, converged: true };
-    if (updateLoads(spans, wire, true) < LOAD_TOLERANCE) {
+    if (updateLoads(spans, wire) < LOAD_TOLERANCE) {
       solveShapes(spans);
       return { tensionN: H, iterations, converged: true };
     }
@@ -132,13 +137,13 @@ export function solveSectionAtTension(
   wire: WireLoading,
   tensionN: number,
 ): SectionSolution {
-  updateLoads(spans, wire, false);
+  updateLoads(spans, wire);
   let iterations = 0;
   for (let outer = 0; outer < MAX_LOAD_ITERATIONS; outer++) {
     solveShapes(spans);
     iterations++;
     unstressedLengthAt(spans, tensionN, wire.axialStiffness, true);
-    if (wire.theory === 'parabolic' || updateLoads(spans, wire, true) < LOAD_TOLERANCE) {
+    if (wire.theory === 'parabolic' || updateLoads(spans, wire) < LOAD_TOLERANCE) {
       if (wire.theory !== 'parabolic') solveShapes(spans);
       return { tensionN, iterations, converged: true };
     }

@@ -35,15 +35,27 @@ interface RopeFactors {
 
 const FEYRER = 'Feyrer, Wire Ropes, 2nd ed., Table 1.9 [V]';
 const FACTORS: Record<string, RopeFactors> = {
+  '6x7 FC': { W: 0.345, C: 0.369, K: 0.332, source: FEYRER },
   '1x19': {
     W: 0.478,
     C: 0.597,
     K: 0.537,
-    source: '1x19 factors derived from 19 equal wires, fill 0.76 [D]',
+    source:
+      '1x19 factors from 19 equal wires, fill 0.76, lay 1.02, spinning loss 0.9 (checked against ASTM A586 [V])',
   },
   '7x7': { W: 0.384, C: 0.432, K: 0.388, source: FEYRER },
   '7x19': { W: 0.381, C: 0.418, K: 0.362, source: FEYRER },
 };
+
+/** Factor method of EN 12385-4: metallic area mm², mass kg/m and breaking force N for d mm. */
+export function ropeByFactors(construction: string, dMm: number, gradeNPerMm2: number) {
+  const f = FACTORS[construction];
+  return {
+    areaMm2: f.C * dMm * dMm,
+    massPerLength: (f.W * dMm * dMm) / 100,
+    breakingLoad: f.K * gradeNPerMm2 * dMm * dMm,
+  };
+}
 
 /** Effective modulus on the metallic area, Pa [M]. */
 const MODULUS_PA: Record<string, number> = { '1x19': 150e9, '7x7': 100e9, '7x19': 100e9 };
@@ -57,9 +69,9 @@ function steelWire(
   id: string,
   label: string,
 ): WireProperties {
-  const f = FACTORS[construction];
   const grade = stainless ? 1570 : 1770; // N/mm² [M] stainless, [CP] galvanised
-  const areaMm2 = f.C * dMm * dMm;
+  const f = FACTORS[construction];
+  const rope = ropeByFactors(construction, dMm, grade);
   const massFactor = stainless ? 1.02 : 1; // stainless ~2 % heavier [M]
   const modulus = MODULUS_PA[construction] * (stainless ? 0.93 : 1); // stainless 5–10 % lower [M]
   return {
@@ -68,10 +80,10 @@ function steelWire(
     kind: stainless ? 'stainless steel' : 'galvanised steel',
     construction,
     diameter: dMm / 1000,
-    massPerLength: ((f.W * dMm * dMm) / 100) * massFactor,
-    axialStiffness: modulus * areaMm2 * 1e-6,
+    massPerLength: rope.massPerLength * massFactor,
+    axialStiffness: modulus * rope.areaMm2 * 1e-6,
     thermalExpansion: stainless ? STAINLESS_ALPHA : STEEL_ALPHA,
-    breakingLoad: f.K * grade * dMm * dMm,
+    breakingLoad: rope.breakingLoad,
     sources: {
       diameter: 'nominal [V]',
       massPerLength: `m = W d²/100, ${f.source}${stainless ? '; +2 % stainless [M]' : ''} [D]`,
