@@ -8,7 +8,7 @@ import { type Project, validateProject } from '../core/index.ts';
 export const AUTOSAVE_KEY = 'sagwright:autosave';
 export const REJECTED_KEY = 'sagwright:autosave-rejected';
 
-export type KeyValueStorage = Pick<Storage, 'getItem' | 'setItem'>;
+export type KeyValueStorage = Pick<Storage, 'getItem' | 'setItem' | 'removeItem'>;
 
 export function browserStorage(): KeyValueStorage | undefined {
   try {

@@ -1,92 +1,26 @@
 /**
- * Sag plot: one line per case (wire height z against distance x along the span, m), with the
- * ground line and clearance zones drawn as shapes. Plotly (core + scatter only) is fetched with
- * a dynamic import so the page and its numbers render before the charting code arrives.
+ * The sag plot on screen: draws buildSagFigure() with Plotly once Plotly has loaded (lazily),
+ * redraws on every new result or unit change, and states the largest parabola difference.
  */
-import type { Annotation, Data, Layout, Shape } from 'plotly.js';
-import { useEffect, useRef, useState } from 'react';
-import type { CaseResult, Project } from '../core/project.ts';
-
-type PlotlyApi = typeof import('plotly.js/lib/core').default;
-
-let plotlyPromise: Promise<PlotlyApi> | undefined;
-
-function loadPlotly(): Promise<PlotlyApi> {
-  plotlyPromise ??= Promise.all([
-    import('plotly.js/lib/core'),
-    import('plotly.js/lib/scatter'),
-  ]).then(([core, scatter]) => {
-    core.default.register([scatter.default]);
-    return core.default;
-  });
-  return plotlyPromise;
-}
-
-function caseTraces(cases: CaseResult[]): Data[] {
-  return cases.map((result) => ({
-    type: 'scatter',
-    mode: 'lines',
-    name: result.name,
-    x: result.profile?.x ?? [],
-    y: result.profile?.z ?? [],
-    hovertemplate: 'x %{x:.2f} m<br>z %{y:.3f} m<extra>%{fullData.name}</extra>',
-  }));
-}
-
-function groundShapes(project: Project): Partial<Shape>[] {
-  const first = project.supports[0]?.x ?? 0;
-  const last = project.supports[project.supports.length - 1]?.x ?? 0;
-  const ground = project.ground ?? [
-    { x: first, z: 0 },
-    { x: last, z: 0 },
-  ];
-  const lines: Partial<Shape>[] = ground.slice(1).map((point, index) => ({
-    type: 'line',
-    x0: ground[index].x,
-    y0: ground[index].z,
-    x1: point.x,
-    y1: point.z,
-    line: { color: '#6b5a3c', width: 2 },
-  }));
-  const zones: Partial<Shape>[] = (project.limits.zones ?? []).map((zone) => ({
-    type: 'rect',
-    x0: zone.from,
-    x1: zone.to,
-    y0: 0,
-    y1: zone.height,
-    fillcolor: 'rgba(200, 120, 40, 0.12)',
-    line: { width: 0 },
-  }));
-  return [...lines, ...zones];
-}
-
-function zoneLabels(project: Project): Partial<Annotation>[] {
-  return (project.limits.zones ?? []).map((zone) => ({
-    x: (zone.from + zone.to) / 2,
-    y: zone.height,
-    yanchor: 'bottom',
-    showarrow: false,
-    text: `${zone.label ?? 'Clearance zone'}: ${zone.height} m`,
-    font: { size: 11, color: '#8a4b0f' },
-  }));
-}
-
-function plotLayout(project: Project): Partial<Layout> {
-  return {
-    margin: { l: 60, r: 20, t: 20, b: 50 },
-    xaxis: { title: { text: 'Distance along span x (m)' }, zeroline: false },
-    yaxis: { title: { text: 'Height z (m)' }, rangemode: 'tozero' },
-    legend: { orientation: 'h', y: -0.2 },
-    shapes: groundShapes(project),
-    annotations: zoneLabels(project),
-  };
-}
+import { useEffect, useMemo, useRef, useState } from 'react';
+import type { Project, ProjectResults } from '../core/index.ts';
+import { useUiStore } from '../state/uiStore.ts';
+import { show } from './format.ts';
+import { loadPlotly } from './plot/loadPlotly.ts';
+import { buildSagFigure } from './plot/sagFigure.ts';
 
 type PlotState = 'loading' | 'drawn' | 'failed';
 
-export function SagPlot({ project, cases }: { project: Project; cases: CaseResult[] }) {
+export function SagPlot({ project, results }: { project: Project; results: ProjectResults }) {
   const containerRef = useRef<HTMLDivElement>(null);
   const [state, setState] = useState<PlotState>('loading');
+  const units = useUiStore((s) => s.unitSystem);
+  const equalAspect = useUiStore((s) => s.equalAspect);
+  const setEqualAspect = useUiStore((s) => s.setEqualAspect);
+  const figure = useMemo(
+    () => buildSagFigure(project, results, units, { equalAspect }),
+    [project, results, units, equalAspect],
+  );
 
   useEffect(() => {
     const container = containerRef.current;
@@ -94,9 +28,10 @@ export function SagPlot({ project, cases }: { project: Project; cases: CaseResul
     let cancelled = false;
     loadPlotly()
       .then((Plotly) =>
-        Plotly.react(container, caseTraces(cases), plotLayout(project), {
+        Plotly.react(container, figure.data, figure.layout, {
           displaylogo: false,
           responsive: true,
+          modeBarButtonsToRemove: ['select2d', 'lasso2d'],
         }),
       )
       .then(() => !cancelled && setState('drawn'))
@@ -104,10 +39,20 @@ export function SagPlot({ project, cases }: { project: Project; cases: CaseResul
     return () => {
       cancelled = true;
     };
-  }, [project, cases]);
+  }, [figure]);
 
   return (
     <figure className="sag-plot">
+      <div className="plot-tools">
+        <label>
+          <input
+            type="checkbox"
+            checked={equalAspect}
+            onChange={(event) => setEqualAspect(event.target.checked)}
+          />
+          True proportions (equal scales)
+        </label>
+      </div>
       <div
         ref={containerRef}
         role="img"
@@ -118,7 +63,12 @@ export function SagPlot({ project, cases }: { project: Project; cases: CaseResul
       {state === 'loading' && <p className="muted">Loading the plot…</p>}
       {state === 'failed' && <p role="alert">The plot could not be drawn; the numbers stand.</p>}
       <figcaption className="muted">
-        Wire height above the ground datum for each case; ground line and clearance zones shaded.
+        Solid: the wire by finite elements for each case. Dashed: the closed-form parabola at the
+        same horizontal tension
+        {figure.parabola
+          ? ` — largest difference ${show(figure.parabola.differenceM, 'length', units, 4)} (${figure.parabola.caseName}).`
+          : '.'}{' '}
+        Shaded: ground and clearance zones at their required heights.
       </figcaption>
     </figure>
   );

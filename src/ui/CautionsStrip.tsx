@@ -1,0 +1,29 @@
+/** The always-visible cautions line with a dialog holding the full text. */
+import { useRef } from 'react';
+import { CAUTION_SUMMARY, CAUTIONS } from '../core/index.ts';
+
+export function CautionsStrip() {
+  const dialog = useRef<HTMLDialogElement>(null);
+  return (
+    <aside className="cautions" aria-label="Cautions">
+      <strong>Caution:</strong> {CAUTION_SUMMARY}{' '}
+      <button type="button" className="link" onClick={() => dialog.current?.showModal()}>
+        Read all cautions
+      </button>
+      <dialog ref={dialog} aria-labelledby="cautions-title" className="cautions-dialog">
+        <h2 id="cautions-title">Cautions</h2>
+        <dl>
+          {CAUTIONS.map((caution) => (
+            <div key={caution.title}>
+              <dt>{caution.title}</dt>
+              <dd>{caution.text}</dd>
+            </div>
+          ))}
+        </dl>
+        <form method="dialog">
+          <button type="submit">Close</button>
+        </form>
+      </dialog>
+    </aside>
+  );
+}

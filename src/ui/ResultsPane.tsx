@@ -1,0 +1,75 @@
+/**
+ * The output side: status (solving, out of date, refused input), the summary line, the sag
+ * plot, the results and fixing tables, and the solver details. The last good results stay on
+ * screen when the document changes or cannot be solved, marked out of date.
+ */
+import { useDraftStore } from '../state/draftStore.ts';
+import { useProjectStore } from '../state/projectStore.ts';
+import { useResultsStore } from '../state/resultsStore.ts';
+import { useUiStore } from '../state/uiStore.ts';
+import { ReactionsTable } from './results/ReactionsTable.tsx';
+import { ResultsTable } from './results/ResultsTable.tsx';
+import { SolverDetails } from './results/SolverDetails.tsx';
+import { summaryText } from './results/summaryText.ts';
+import { SagPlot } from './SagPlot.tsx';
+
+function Status() {
+  const stale = useResultsStore((s) => s.stale);
+  const error = useResultsStore((s) => s.error);
+  const hasResults = useResultsStore((s) => s.results !== null);
+  const invalid = useDraftStore((s) => Object.values(s.invalid));
+  if (invalid.length > 0)
+    return (
+      <p className="status status-stale" role="status">
+        Out of date: the results shown are for the last valid input. Fix{' '}
+        {invalid.length === 1 ? 'this field' : `these ${invalid.length} fields`}:{' '}
+        {invalid.join('; ')}.
+      </p>
+    );
+  if (error)
+    return (
+      <p className="status status-stale" role="status">
+        Out of date: this design could not be solved ({error}). The results shown are for the last
+        design that could.
+      </p>
+    );
+  if (stale)
+    return (
+      <p className="status status-busy" role="status">
+        {hasResults ? 'Solving the change…' : 'Solving…'}
+      </p>
+    );
+  return (
+    <p className="status status-ok" role="status">
+      Up to date.
+    </p>
+  );
+}
+
+export function ResultsPane() {
+  const results = useResultsStore((s) => s.results);
+  const resultsProject = useResultsStore((s) => s.resultsProject);
+  const stale = useResultsStore((s) => s.stale);
+  const anyInvalid = useDraftStore((s) => Object.keys(s.invalid).length > 0);
+  const units = useUiStore((s) => s.unitSystem);
+  const title = useProjectStore((s) => s.project.title);
+  const outOfDate = stale || anyInvalid;
+  return (
+    <section className="results-pane" aria-label="Results" data-out-of-date={outOfDate}>
+      <Status />
+      {results && resultsProject ? (
+        <div className={outOfDate ? 'out-of-date' : undefined}>
+          <p className="summary" data-testid="summary">
+            {summaryText(results, units)}
+          </p>
+          <SagPlot project={resultsProject} results={results} />
+          <ResultsTable results={results} />
+          <ReactionsTable results={results} />
+          <SolverDetails results={results} />
+        </div>
+      ) : (
+        <p className="muted">Working out {title}…</p>
+      )}
+    </section>
+  );
+}

@@ -1,0 +1,50 @@
+/** A text input for a document string (labels, case names), checked like a number field. */
+import { useId, useState } from 'react';
+import { useDraftStore } from '../../state/draftStore.ts';
+import { type Edit, tryEdit } from './useDocumentEdit.ts';
+
+export interface TextFieldProps {
+  path: string;
+  label: string;
+  value: string;
+  edit: (text: string) => Edit;
+  compact?: boolean;
+  placeholder?: string;
+}
+
+export function TextField({ path, label, value, edit, compact, placeholder }: TextFieldProps) {
+  const setInvalid = useDraftStore((s) => s.setInvalid);
+  const [draft, setDraft] = useState<string | null>(null);
+  const [message, setMessage] = useState<string | null>(null);
+  const inputId = useId();
+
+  function change(text: string) {
+    setDraft(text);
+    const reason = text === value ? null : tryEdit(path, edit(text), 'count', 'si');
+    setMessage(reason);
+    setInvalid(path, reason === null ? null : `${label}: ${reason}`);
+  }
+
+  return (
+    <div className={`field field-text${message ? ' field-invalid' : ''}`}>
+      <label htmlFor={inputId} className={compact ? 'visually-hidden' : undefined}>
+        {label}
+      </label>
+      <input
+        id={inputId}
+        type="text"
+        value={draft ?? value}
+        placeholder={placeholder}
+        aria-invalid={message ? true : undefined}
+        aria-describedby={message ? `${inputId}-message` : undefined}
+        onChange={(event) => change(event.target.value)}
+        onBlur={() => message === null && setDraft(null)}
+      />
+      {message && (
+        <span id={`${inputId}-message`} className="field-message" role="alert">
+          {label} {message}
+        </span>
+      )}
+    </div>
+  );
+}

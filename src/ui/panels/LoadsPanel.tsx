@@ -1,0 +1,123 @@
+/** What hangs on the wire: point loads (lamps, signs) and part-span loads (cables), add/remove/edit. */
+import type { Load, PointLoad, UniformLoad } from '../../core/index.ts';
+import * as edits from '../../state/projectEdits.ts';
+import { useProjectStore } from '../../state/projectStore.ts';
+import { applyEdit } from '../fields/ChoiceFields.tsx';
+import { NumberField } from '../fields/NumberField.tsx';
+import { TextField } from '../fields/TextField.tsx';
+import { Row } from './Row.tsx';
+
+function PointRow({ load, index }: { load: PointLoad; index: number }) {
+  const path = `loads[${index}]`;
+  const name = load.label || `Load ${index + 1}`;
+  return (
+    <>
+      <NumberField
+        path={`${path}.x`}
+        label={`${name} position`}
+        quantity="length"
+        value={load.x}
+        edit={(x) => edits.patchLoad(index, { x })}
+      />
+      {load.force !== undefined ? (
+        <NumberField
+          path={`${path}.force`}
+          label={`${name} force`}
+          quantity="force"
+          value={load.force}
+          edit={(force) => edits.patchLoad(index, { force })}
+        />
+      ) : (
+        <NumberField
+          path={`${path}.mass`}
+          label={`${name} mass`}
+          quantity="mass"
+          value={load.mass ?? 0}
+          edit={(mass) => edits.patchLoad(index, { mass })}
+        />
+      )}
+    </>
+  );
+}
+
+function UniformRow({ load, index }: { load: UniformLoad; index: number }) {
+  const path = `loads[${index}]`;
+  const name = load.label || `Load ${index + 1}`;
+  return (
+    <>
+      <NumberField
+        path={`${path}.from`}
+        label={`${name} from`}
+        quantity="length"
+        value={load.from}
+        edit={(from) => edits.patchLoad(index, { from })}
+      />
+      <NumberField
+        path={`${path}.to`}
+        label={`${name} to`}
+        quantity="length"
+        value={load.to}
+        edit={(to) => edits.patchLoad(index, { to })}
+      />
+      <NumberField
+        path={`${path}.massPerLength`}
+        label={`${name} mass`}
+        quantity="massPerLength"
+        value={load.massPerLength}
+        edit={(massPerLength) => edits.patchLoad(index, { massPerLength })}
+      />
+      <NumberField
+        path={`${path}.diameter`}
+        label={`${name} diameter (for ice and wind)`}
+        quantity="diameter"
+        value={load.diameter ?? 0}
+        edit={(diameter) => edits.patchLoad(index, { diameter })}
+      />
+    </>
+  );
+}
+
+function LoadRow({ load, index }: { load: Load; index: number }) {
+  const kind = load.type === 'point' ? 'Point load' : 'Part-span load';
+  const name = load.label || `Load ${index + 1}`;
+  return (
+    <Row label={`${kind} ${index + 1}`}>
+      <TextField
+        path={`loads[${index}].label`}
+        label={`${kind} ${index + 1} name`}
+        value={load.label ?? ''}
+        edit={(label) => edits.patchLoad(index, { label })}
+      />
+      {load.type === 'point' ? (
+        <PointRow load={load} index={index} />
+      ) : (
+        <UniformRow load={load} index={index} />
+      )}
+      <button type="button" onClick={() => applyEdit(edits.removeLoad(index))}>
+        Remove {name}
+      </button>
+    </Row>
+  );
+}
+
+export function LoadsPanel() {
+  const loads = useProjectStore((s) => s.project.loads);
+  return (
+    <section className="panel" aria-labelledby="loads-heading">
+      <h2 id="loads-heading">Hung loads</h2>
+      {loads.length === 0 && <p className="muted">Nothing hangs on the wire.</p>}
+      {loads.map((load, index) => (
+        // biome-ignore lint/suspicious/noArrayIndexKey: rows are positions in the list
+        <LoadRow key={index} load={load} index={index} />
+      ))}
+      <div className="actions">
+        <button type="button" onClick={() => applyEdit(edits.addLoad('point'))}>
+          Add a point load
+        </button>
+        <button type="button" onClick={() => applyEdit(edits.addLoad('uniform'))}>
+          Add a part-span load
+        </button>
+      </div>
+    </section>
+  );
+}

@@ -1,0 +1,159 @@
+/** The span: fixings (position, height, name), the ground line and clearance zones. */
+import type { Project } from '../../core/index.ts';
+import * as edits from '../../state/projectEdits.ts';
+import { useProjectStore } from '../../state/projectStore.ts';
+import { applyEdit, CheckField } from '../fields/ChoiceFields.tsx';
+import { NumberField } from '../fields/NumberField.tsx';
+import { TextField } from '../fields/TextField.tsx';
+import { Row } from './Row.tsx';
+
+function Supports({ project }: { project: Project }) {
+  const count = project.supports.length;
+  return (
+    <fieldset>
+      <legend>Fixings</legend>
+      {project.supports.map((support, i) => {
+        const path = `supports[${i}]`;
+        const name = support.label || `Fixing ${i + 1}`;
+        return (
+          // biome-ignore lint/suspicious/noArrayIndexKey: rows are positions in the list
+          <Row key={i} label={`Fixing ${i + 1}`}>
+            <TextField
+              path={`${path}.label`}
+              label={`Fixing ${i + 1} name`}
+              value={support.label ?? ''}
+              edit={(label) => edits.patchSupport(i, { label })}
+            />
+            <NumberField
+              path={`${path}.x`}
+              label={`${name} position`}
+              quantity="length"
+              value={support.x}
+              edit={(x) => edits.patchSupport(i, { x })}
+            />
+            <NumberField
+              path={`${path}.z`}
+              label={`${name} height`}
+              quantity="length"
+              value={support.z}
+              edit={(z) => edits.patchSupport(i, { z })}
+            />
+            {i > 0 && i < count - 1 && (
+              <CheckField
+                label="Runs over a pulley (free)"
+                checked={support.free === true}
+                edit={(free) => edits.patchSupport(i, { free: free || undefined })}
+              />
+            )}
+            {count > 2 && (
+              <button type="button" onClick={() => applyEdit(edits.removeSupport(i))}>
+                Remove {name}
+              </button>
+            )}
+          </Row>
+        );
+      })}
+      <button type="button" onClick={() => applyEdit(edits.addSupport())}>
+        Add a fixing at the far end
+      </button>
+    </fieldset>
+  );
+}
+
+function Ground({ project }: { project: Project }) {
+  const ground = project.ground ?? [];
+  return (
+    <fieldset>
+      <legend>Ground line</legend>
+      {ground.length === 0 && <p className="muted">Level ground at height 0.</p>}
+      {ground.map((point, i) => (
+        // biome-ignore lint/suspicious/noArrayIndexKey: rows are positions in the list
+        <Row key={i} label={`Ground point ${i + 1}`}>
+          <NumberField
+            path={`ground[${i}].x`}
+            label={`Ground point ${i + 1} position`}
+            quantity="length"
+            value={point.x}
+            edit={(x) => edits.patchGround(i, { x })}
+          />
+          <NumberField
+            path={`ground[${i}].z`}
+            label={`Ground point ${i + 1} height`}
+            quantity="length"
+            value={point.z}
+            edit={(z) => edits.patchGround(i, { z })}
+          />
+          <button type="button" onClick={() => applyEdit(edits.removeGroundPoint(i))}>
+            Remove ground point {i + 1}
+          </button>
+        </Row>
+      ))}
+      <button type="button" onClick={() => applyEdit(edits.addGroundPoint())}>
+        Add a ground point
+      </button>
+    </fieldset>
+  );
+}
+
+function Zones({ project }: { project: Project }) {
+  const zones = project.limits.zones ?? [];
+  return (
+    <fieldset>
+      <legend>Clearance zones (paths, driveways)</legend>
+      {zones.map((zone, i) => {
+        const path = `limits.zones[${i}]`;
+        const name = zone.label || `Zone ${i + 1}`;
+        return (
+          // biome-ignore lint/suspicious/noArrayIndexKey: rows are positions in the list
+          <Row key={i} label={`Clearance zone ${i + 1}`}>
+            <TextField
+              path={`${path}.label`}
+              label={`Zone ${i + 1} name`}
+              value={zone.label ?? ''}
+              edit={(label) => edits.patchZone(i, { label })}
+            />
+            <NumberField
+              path={`${path}.from`}
+              label={`${name} from`}
+              quantity="length"
+              value={zone.from}
+              edit={(from) => edits.patchZone(i, { from })}
+            />
+            <NumberField
+              path={`${path}.to`}
+              label={`${name} to`}
+              quantity="length"
+              value={zone.to}
+              edit={(to) => edits.patchZone(i, { to })}
+            />
+            <NumberField
+              path={`${path}.height`}
+              label={`${name} clearance needed`}
+              quantity="length"
+              value={zone.height}
+              edit={(height) => edits.patchZone(i, { height })}
+            />
+            <button type="button" onClick={() => applyEdit(edits.removeZone(i))}>
+              Remove {name}
+            </button>
+          </Row>
+        );
+      })}
+      <button type="button" onClick={() => applyEdit(edits.addZone())}>
+        Add a clearance zone
+      </button>
+    </fieldset>
+  );
+}
+
+export function SpanPanel() {
+  const project = useProjectStore((s) => s.project);
+  return (
+    <section className="panel" aria-labelledby="span-heading">
+      <h2 id="span-heading">Span</h2>
+      <Supports project={project} />
+      <Ground project={project} />
+      <Zones project={project} />
+    </section>
+  );
+}

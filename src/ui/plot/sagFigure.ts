@@ -1,0 +1,147 @@
+/**
+ * The sag plot as a pure Plotly figure spec (no DOM), so the workbench and exports draw the
+ * same thing: each case's wire (solid) with its closed-form parabola (dashed), the ground
+ * filled, clearance zones shaded at their required heights, supports, the lowest point and the
+ * largest sag annotated. Values are converted to the chosen display units.
+ */
+import type { Annotation, Data, Layout } from 'plotly.js';
+import type { CaseResult, Project, ProjectResults } from '../../core/index.ts';
+import { fromSi, type UnitSystem, unitSymbol } from '../../core/units.ts';
+import { caseColour } from './colours.ts';
+import { groundHeightAt, groundTraces, supportTrace, zoneTraces } from './figureParts.ts';
+import { largestDifference, parabolaHeights } from './parabola.ts';
+
+export interface SagFigureOptions {
+  equalAspect?: boolean;
+  /** Draw the dashed closed-form parabola beside each case (default true). */
+  showParabola?: boolean;
+}
+
+export interface ParabolaComparison {
+  caseName: string;
+  /** Largest vertical distance between the FE wire and the parabola, m. */
+  differenceM: number;
+}
+
+export interface SagFigure {
+  data: Data[];
+  layout: Partial<Layout>;
+  parabola: ParabolaComparison | null;
+}
+
+function caseTraces(
+  project: Project,
+  result: CaseResult,
+  index: number,
+  units: UnitSystem,
+): { traces: Data[]; differenceM: number } {
+  const profile = result.profile;
+  if (!profile || !result.solved) return { traces: [], differenceM: 0 };
+  const len = (m: number) => fromSi(m, 'length', units);
+  const colour = caseColour(index);
+  const lu = unitSymbol('length', units);
+  const fu = unitSymbol('force', units);
+  const customdata = profile.x.map((x, i) => [
+    len(profile.z[i] - groundHeightAt(project, x)),
+    fromSi(profile.tension[i], 'force', units),
+  ]);
+  const wire: Data = {
+    type: 'scatter',
+    mode: 'lines',
+    name: result.name,
+    legendgroup: result.name,
+    x: profile.x.map(len),
+    y: profile.z.map(len),
+    customdata,
+    line: { color: colour, width: 2.5, dash: index >= 7 ? 'dot' : 'solid' },
+    hovertemplate:
+      `x %{x:.2f} ${lu}<br>height %{y:.3f} ${lu}<br>clearance %{customdata[0]:.3f} ${lu}` +
+      `<br>tension %{customdata[1]:.0f} ${fu}<extra>%{fullData.name}</extra>`,
+  };
+  const parabola = parabolaHeights(project, result);
+  if (!parabola) return { traces: [wire], differenceM: 0 };
+  const closedForm: Data = {
+    type: 'scatter',
+    mode: 'lines',
+    name: `${result.name} — parabola`,
+    legendgroup: result.name,
+    showlegend: false,
+    x: profile.x.map(len),
+    y: parabola.map(len),
+    line: { color: colour, width: 1.2, dash: 'dash' },
+    hovertemplate: `parabola %{y:.3f} ${lu}<extra>${result.name}</extra>`,
+  };
+  return { traces: [wire, closedForm], differenceM: largestDifference(profile.z, parabola) };
+}
+
+function annotations(results: ProjectResults, units: UnitSystem): Partial<Annotation>[] {
+  const solved = results.cases.filter((c) => c.solved);
+  if (solved.length === 0) return [];
+  const len = (m: number) => fromSi(m, 'length', units);
+  const lu = unitSymbol('length', units);
+  const lowest = solved.reduce((a, b) => (b.lowestPoint.z < a.lowestPoint.z ? b : a));
+  const sagging = solved.reduce((a, b) => (b.sag > a.sag ? b : a));
+  const notes: Partial<Annotation>[] = [
+    {
+      x: len(lowest.lowestPoint.x),
+      y: len(lowest.lowestPoint.z),
+      text: `Lowest point ${len(lowest.lowestPoint.z).toFixed(2)} ${lu} (${lowest.name})`,
+      showarrow: true,
+      arrowhead: 2,
+      ax: 40,
+      ay: 40,
+      bgcolor: 'rgba(255,255,255,0.85)',
+    },
+  ];
+  const sagX = sagging.spans.length === 1 ? sagging.lowestPoint.x : undefined;
+  if (sagX !== undefined) {
+    const profile = sagging.profile;
+    const i = profile ? profile.x.findIndex((x) => x >= sagX) : -1;
+    const z = profile && i >= 0 ? profile.z[i] : sagging.lowestPoint.z;
+    notes.push({
+      x: len(sagX),
+      y: len(z),
+      text: `Largest sag ${len(sagging.sag).toFixed(3)} ${lu} (${sagging.name})`,
+      showarrow: true,
+      arrowhead: 2,
+      ax: -60,
+      ay: -45,
+      bgcolor: 'rgba(255,255,255,0.85)',
+    });
+  }
+  return notes;
+}
+
+export function buildSagFigure(
+  project: Project,
+  results: ProjectResults,
+  unitSystem: UnitSystem,
+  options: SagFigureOptions = {},
+): SagFigure {
+  const lu = unitSymbol('length', unitSystem);
+  const data: Data[] = [...groundTraces(project, unitSystem), ...zoneTraces(project, unitSystem)];
+  let parabola: ParabolaComparison | null = null;
+  results.cases.forEach((result, index) => {
+    const drawn = caseTraces(project, result, index, unitSystem);
+    const traces = options.showParabola === false ? drawn.traces.slice(0, 1) : drawn.traces;
+    data.push(...traces);
+    if (drawn.traces.length > 1 && (!parabola || drawn.differenceM > parabola.differenceM))
+      parabola = { caseName: result.name, differenceM: drawn.differenceM };
+  });
+  data.push(supportTrace(project, unitSystem));
+  const layout: Partial<Layout> = {
+    margin: { l: 64, r: 16, t: 16, b: 48 },
+    xaxis: { title: { text: `Distance along the span (${lu})` }, zeroline: false },
+    yaxis: {
+      title: { text: `Height above ground datum (${lu})` },
+      zeroline: false,
+      ...(options.equalAspect ? { scaleanchor: 'x', scaleratio: 1 } : {}),
+    },
+    legend: { orientation: 'h', y: -0.18, x: 0 },
+    hovermode: 'closest',
+    annotations: annotations(results, unitSystem),
+    paper_bgcolor: '#ffffff',
+    plot_bgcolor: '#ffffff',
+  };
+  return { data, layout, parabola };
+}

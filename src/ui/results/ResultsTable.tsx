@@ -1,0 +1,89 @@
+/** Results by case: tension, utilisation with pass/fail in words, sag, lowest point, clearance, swing. */
+import type { CaseResult, ProjectResults } from '../../core/index.ts';
+import { unitSymbol } from '../../core/units.ts';
+import { useUiStore } from '../../state/uiStore.ts';
+import { fieldText, percent, show } from '../format.ts';
+
+function Verdict({ result }: { result: CaseResult }) {
+  if (!result.solved) return <span className="verdict fail">Not solved</span>;
+  return result.ok ? (
+    <span className="verdict pass">✓ Pass</span>
+  ) : (
+    <span className="verdict fail">✗ Fail</span>
+  );
+}
+
+function governs(result: CaseResult, results: ProjectResults): string[] {
+  const marks: string[] = [];
+  if (results.governing.tension === result.name) marks.push('governs tension');
+  if (results.governing.clearance === result.name) marks.push('governs clearance');
+  return marks;
+}
+
+export function ResultsTable({ results }: { results: ProjectResults }) {
+  const units = useUiStore((s) => s.unitSystem);
+  const lu = unitSymbol('length', units);
+  const fu = unitSymbol('force', units);
+  return (
+    <div className="table-scroll">
+      <table className="results" aria-label="Results by case">
+        <thead>
+          <tr>
+            <th scope="col">Case</th>
+            <th scope="col">Horizontal tension ({fu})</th>
+            <th scope="col">Largest tension ({fu})</th>
+            <th scope="col">Utilisation</th>
+            <th scope="col">Check</th>
+            <th scope="col">Sag ({lu})</th>
+            <th scope="col">Lowest point ({lu})</th>
+            <th scope="col">Clearance ({lu})</th>
+            <th scope="col">Swing ({lu})</th>
+          </tr>
+        </thead>
+        <tbody>
+          {results.cases.map((result) => {
+            const marks = governs(result, results);
+            const zones = result.zoneClearances
+              .map(
+                (z) =>
+                  `${z.label}: ${fieldText(z.clearance, 'length', units)}${z.ok ? '' : ' (too low)'}`,
+              )
+              .join('; ');
+            return (
+              <tr key={result.name} className={marks.length ? 'governing' : undefined}>
+                <th scope="row">
+                  {result.name}
+                  <span className="case-meta">
+                    {show(result.temperature, 'temperature', units)}
+                  </span>
+                  {marks.length > 0 && <span className="badge">{marks.join(', ')}</span>}
+                </th>
+                <td>{show(result.horizontalTension, 'force', units).replace(` ${fu}`, '')}</td>
+                <td>{show(result.maxTension, 'force', units).replace(` ${fu}`, '')}</td>
+                <td>{percent(result.utilisation)}</td>
+                <td>
+                  <Verdict result={result} />
+                  {result.messages.length > 0 && (
+                    <span className="case-meta">{result.messages.join(' ')}</span>
+                  )}
+                </td>
+                <td>{show(result.sag, 'length', units).replace(` ${lu}`, '')}</td>
+                <td>
+                  {show(result.lowestPoint.z, 'length', units).replace(` ${lu}`, '')}
+                  <span className="case-meta">
+                    at {show(result.lowestPoint.x, 'length', units, 2)}
+                  </span>
+                </td>
+                <td>
+                  {show(result.clearance, 'length', units).replace(` ${lu}`, '')}
+                  {zones && <span className="case-meta">{zones}</span>}
+                </td>
+                <td>{show(result.swing, 'length', units).replace(` ${lu}`, '')}</td>
+              </tr>
+            );
+          })}
+        </tbody>
+      </table>
+    </div>
+  );
+}

@@ -1,0 +1,42 @@
+/** Solver details on request: theory, elements, iterations and estimated discretisation error. */
+import { DEFAULT_MODEL, type ProjectResults } from '../../core/index.ts';
+import { useResultsStore } from '../../state/resultsStore.ts';
+import { useUiStore } from '../../state/uiStore.ts';
+import { show } from '../format.ts';
+
+export function SolverDetails({ results }: { results: ProjectResults }) {
+  const units = useUiStore((s) => s.unitSystem);
+  const project = useResultsStore((s) => s.resultsProject);
+  const model = { ...DEFAULT_MODEL, ...project?.model };
+  return (
+    <details className="solver-details">
+      <summary>Solver details</summary>
+      <p>
+        {model.theory === 'exact'
+          ? 'Elastic catenary: self weight per length of wire, iterated to convergence.'
+          : 'Parabolic: self weight per horizontal metre.'}{' '}
+        {model.elementsPerSpan} {model.elementOrder === 2 ? 'quadratic' : 'linear'} string elements
+        per span; cut length (unstressed, installation temperature){' '}
+        {show(results.unstressedLength, 'length', units, 4)}.
+      </p>
+      <table className="results" aria-label="Solver details by case">
+        <thead>
+          <tr>
+            <th scope="col">Case</th>
+            <th scope="col">Iterations</th>
+            <th scope="col">Estimated discretisation error (relative)</th>
+          </tr>
+        </thead>
+        <tbody>
+          {results.cases.map((result) => (
+            <tr key={result.name}>
+              <th scope="row">{result.name}</th>
+              <td>{result.iterations}</td>
+              <td>{result.discretisationError.toExponential(1)}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </details>
+  );
+}
