@@ -222,7 +222,7 @@ export function installationLines(project: Project, units: UnitSystem): string[]
   const limits = project.limits;
   const zones = (limits.zones ?? []).map(
     (z) =>
-      `${z.label ?? 'zone'} ${fq(units, 'length', z.from)}-${fq(units, 'length', z.to)} needs ${fq(units, 'length', z.height)}`,
+      `${z.label ?? 'zone'} from ${fq(units, 'length', z.from)} to ${fq(units, 'length', z.to)} needs ${fq(units, 'length', z.height)}`,
   );
   return [
     `Installed at ${fq(units, 'temperature', inst.temperature)} ${inst.withLoads ? 'with' : 'without'} the hung loads, to a ${targetText(project, units)}.`,

@@ -1,0 +1,118 @@
+/**
+ * The sag plot drawn off-screen for exports: the workbench's own figure (buildSagFigure), with
+ * every name and label escaped so Plotly shows markup as text, the project title on top and the
+ * caution line at the foot. Returns an SVG or PNG data URL, or a parsed SVG element for the PDF.
+ */
+import type { Data, Layout } from 'plotly.js';
+import { CAUTION_SUMMARY, type Project, type ProjectResults } from '../../core/index.ts';
+import type { UnitSystem } from '../../core/units.ts';
+import { loadPlotly } from '../plot/loadPlotly.ts';
+import { buildSagFigure, type ParabolaComparison } from '../plot/sagFigure.ts';
+
+export interface PlotImageRequest {
+  format: 'svg' | 'png';
+  width: number;
+  height: number;
+  scale: number;
+  /** Title on top and caution at the foot (images); the PDF page carries its own. */
+  captioned: boolean;
+}
+
+/** Plotly reads a small HTML subset in text; entities make it show the characters instead. */
+export function plotlyText(text: string): string {
+  return text.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;');
+}
+
+function escapeFigure(data: Data[], layout: Partial<Layout>): void {
+  for (const trace of data as { name?: string }[])
+    if (typeof trace.name === 'string') trace.name = plotlyText(trace.name);
+  for (const note of layout.annotations ?? [])
+    if (typeof note.text === 'string') note.text = plotlyText(note.text);
+}
+
+export function exportFigure(
+  project: Project,
+  results: ProjectResults,
+  units: UnitSystem,
+  captioned: boolean,
+): { data: Data[]; layout: Partial<Layout>; parabola: ParabolaComparison | null } {
+  const figure = buildSagFigure(project, results, units);
+  const layout: Partial<Layout> = {
+    ...figure.layout,
+    annotations: [...(figure.layout.annotations ?? [])],
+  };
+  escapeFigure(figure.data, layout);
+  layout.font = { family: 'Helvetica, Arial, sans-serif', size: 12, color: '#1c2128' };
+  if (captioned) {
+    layout.title = {
+      text: plotlyText(project.title),
+      x: 0.01,
+      xanchor: 'left',
+      font: { size: 16 },
+    };
+    layout.margin = { l: 64, r: 16, t: 48, b: 150 };
+    layout.annotations?.push({
+      xref: 'paper',
+      yref: 'paper',
+      x: 0,
+      y: 0,
+      xanchor: 'left',
+      yanchor: 'top',
+      yshift: -128,
+      showarrow: false,
+      align: 'left',
+      text: plotlyText(`Caution: ${CAUTION_SUMMARY}`),
+      font: { size: 11, color: '#60686f' },
+    });
+  } else {
+    layout.margin = { l: 64, r: 16, t: 16, b: 96 };
+  }
+  return { data: figure.data, layout, parabola: figure.parabola };
+}
+
+/** Draws the figure in a hidden element, asks Plotly for the image, and cleans up. */
+export async function renderPlotImage(
+  project: Project,
+  results: ProjectResults,
+  units: UnitSystem,
+  request: PlotImageRequest,
+): Promise<string> {
+  const Plotly = await loadPlotly();
+  const { data, layout } = exportFigure(project, results, units, request.captioned);
+  const host = document.createElement('div');
+  host.style.cssText = `position:fixed;left:-20000px;top:0;width:${request.width}px;height:${request.height}px;`;
+  host.setAttribute('aria-hidden', 'true');
+  document.body.append(host);
+  try {
+    await Plotly.newPlot(
+      host,
+      data,
+      { ...layout, width: request.width, height: request.height },
+      {
+        staticPlot: true,
+      },
+    );
+    return await Plotly.toImage(host, {
+      format: request.format,
+      width: request.width,
+      height: request.height,
+      scale: request.scale,
+    });
+  } finally {
+    Plotly.purge(host);
+    host.remove();
+  }
+}
+
+/** SVG data URL → markup (Plotly returns it percent-encoded). */
+export function svgMarkupFromDataUrl(dataUrl: string): string {
+  const comma = dataUrl.indexOf(',');
+  const body = dataUrl.slice(comma + 1);
+  return dataUrl.slice(0, comma).endsWith(';base64') ? atob(body) : decodeURIComponent(body);
+}
+
+export function parseSvg(markup: string): SVGSVGElement | null {
+  const parsed = new DOMParser().parseFromString(markup, 'image/svg+xml');
+  const root = parsed.documentElement;
+  return root.nodeName === 'svg' ? (root as unknown as SVGSVGElement) : null;
+}
