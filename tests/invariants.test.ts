@@ -15,8 +15,11 @@ import {
 import {
   type CaseState,
   expectedTotals,
-  random,
+  fixedLengthProject,
+  heavier,
   randomProject,
+  stillCase,
+  symmetricProject,
 } from './fixtures/randomProjects.ts';
 
 const PROJECT_COUNT = 100;
@@ -154,41 +157,6 @@ describe('random valid projects (seeded mulberry32, 100 projects)', () => {
   });
 });
 
-/** A level span with loads mirrored about midspan (seeded). */
-function symmetricProject(seed: number): Project {
-  const base = randomProject(seed);
-  const r = random(seed + 7);
-  const span = r.uniform(8, 45);
-  const pairs = r.int(0, 2);
-  const loads: Project['loads'] = [];
-  for (let k = 0; k < pairs; k++) {
-    const a = r.uniform(0.1, 0.45) * span;
-    const mass = r.uniform(0.2, 6);
-    loads.push({ type: 'point', x: a, mass }, { type: 'point', x: span - a, mass });
-  }
-  if (r.chance(0.5)) loads.push({ type: 'point', x: span / 2, force: r.uniform(5, 60) });
-  const c = r.uniform(0, 0.4) * span;
-  loads.push({
-    type: 'uniform',
-    from: c,
-    to: span - c,
-    massPerLength: r.uniform(0, 0.3),
-    diameter: 0.01,
-  });
-  const z = r.uniform(3, 8);
-  return {
-    ...base,
-    title: `Symmetric project ${seed}`,
-    supports: [
-      { x: 0, z },
-      { x: span, z },
-    ],
-    loads,
-    installation: { ...base.installation, target: { sag: r.uniform(0.01, 0.05) * span } },
-    model: { ...base.model, elementsPerSpan: 2 * r.int(5, 40) },
-  };
-}
-
 describe('level spans with loads mirrored about midspan (symmetry)', () => {
   it('give equal end reactions and the lowest point at midspan, every case', () => {
     for (let seed = 0; seed < 40; seed++) {
@@ -207,46 +175,6 @@ describe('level spans with loads mirrored about midspan (symmetry)', () => {
     }
   });
 });
-
-type Case = Project['cases'][number];
-const stillCase = (name: string, temperature: number, extra: Partial<Case> = {}): Case => ({
-  name,
-  temperature,
-  iceThickness: 0,
-  windSpeed: 0,
-  withLoads: true,
-  ...extra,
-});
-
-/** A random project at a fixed cut length (installation.target.unstressedLength). */
-function fixedLengthProject(seed: number, cases: Case[]): Project {
-  const base = randomProject(seed);
-  const xs = base.supports;
-  const chord = xs.slice(1).reduce((s, p, j) => s + Math.hypot(p.x - xs[j].x, p.z - xs[j].z), 0);
-  const wire = { ...(base.wire as CustomWire), thermalExpansion: 1.2e-5 };
-  return {
-    ...base,
-    wire,
-    installation: { temperature: 15, withLoads: true, target: { unstressedLength: chord * 1.004 } },
-    cases,
-  };
-}
-
-/** Every load (wire weight and hung loads) times k: the same shape, more stretch. */
-function heavier(project: Project, k: number): Project {
-  const wire = project.wire as CustomWire;
-  return {
-    ...project,
-    wire: { ...wire, massPerLength: wire.massPerLength * k },
-    loads: project.loads.map((l) =>
-      l.type === 'uniform'
-        ? { ...l, massPerLength: l.massPerLength * k }
-        : l.mass !== undefined
-          ? { ...l, mass: l.mass * k }
-          : { ...l, force: (l.force ?? 0) * k },
-    ),
-  };
-}
 
 function expectMore(more: CaseResult, less: CaseResult, label: string, tensionUp: boolean): void {
   more.spans.forEach((s, j) => {
