@@ -97,10 +97,7 @@ describe('random valid projects (seeded mulberry32, 100 projects)', () => {
     expect(verticalFailures('exact')).toEqual([]);
   });
 
-  // KNOWN CORE DEFECT, reported to the lead: the parabolic theory scales the wire's weight per
-  // horizontal metre by 1/(1 + α Δt), so the hung weight changes with temperature. Minimal input:
-  // 'parabolic wire weight does not change with temperature' below. Flip to it() once fixed.
-  it.fails('balance the hung weight with the vertical reactions, parabolic theory (ΣV = W)', () => {
+  it('balance the hung weight with the vertical reactions, parabolic theory (ΣV = W)', () => {
     expect(verticalFailures('parabolic')).toEqual([]);
   });
 
@@ -239,8 +236,9 @@ describe('monotone response at a fixed cut length (change of state)', () => {
 describe('minimal inputs for past and present defects', () => {
   // Source: equilibrium. The parabolic theory carries w per horizontal metre, so the end
   // reactions of a bare level span sum to w·l at any temperature (mass does not change).
-  // KNOWN CORE DEFECT (reported): the hot case gives w·l/(1 + α Δt) = 18.679 N, not 19.613 N.
-  it.fails('parabolic wire weight does not change with temperature', () => {
+  // Regression fixture: the parabolic theory once scaled its per-horizontal-metre weight by
+  // 1/(1 + α Δt), giving 18.679 N here instead of w·l = 19.613 N.
+  it('parabolic wire weight does not change with temperature', () => {
     const project: Project = {
       format: 'sagwright-project',
       version: 1,

@@ -78,13 +78,13 @@ export function buildProjectModel(project: Project, elementsPerSpan?: number): P
 
 /**
  * Put a state's hung loads on every span and return the wire loading at its temperature.
- * The wire's mass is conserved: weight per unstressed metre scales by 1 / (1 + α Δt).
+ * Exact theory: the wire's mass is conserved, so its weight per unstressed metre scales by
+ * 1 / (1 + α Δt). Parabolic theory: the weight acts per horizontal metre and does not change.
  */
 export function prepareState(model: ProjectModel, state: LoadState): WireLoading {
   const loads = caseLoads(model.wire, model.project.loads, state, model.env);
   for (const span of model.spans) applyHungLoads(span, loads);
-  const thermal =
-    1 + model.wire.thermalExpansion * (state.temperature - model.installation.temperature);
+  const thermal = model.settings.theory === 'exact' ? thermalFactor(model, state.temperature) : 1;
   const bareWeight = model.wire.massPerLength * model.env.gravity;
   return {
     theory: model.settings.theory,
