@@ -91,6 +91,7 @@ function summaryBox(
 ): void {
   const { doc } = w;
   const allPass = results.cases.every((c) => c.ok);
+  w.font(9.5, 'bold');
   const lines = w.lines(summaryLine(project, results, options.unitSystem), w.width - 8);
   const height = lines.length * 4.4 + 5;
   const tint = allPass ? [234, 245, 237] : [251, 234, 234];

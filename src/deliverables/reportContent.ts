@@ -246,6 +246,6 @@ export function methodParagraphs(
       ? 'Theory: exact. The wire weight acts per metre of wire, so the shape is the elastic catenary.'
       : 'Theory: parabolic. The wire weight acts per horizontal metre, the classic approximation for shallow spans.',
     'Ice adds a ring of the stated thickness around the wire and any cable; wind acts across the span on the iced diameter and swings the wire sideways. Tension, sag, clearance and the pull on each fixing follow for every case.',
-    `Check against closed forms: the dashed lines on the plot are the closed-form parabola for the same span and loads${parabola ? `; the largest difference is ${fq(units, 'length', parabola.differenceM)} (${parabola.caseName})` : ''}. The mesh error estimate is at most ${(worstMesh * 100).toFixed(3)} %.`,
+    `Check against closed forms: the dashed lines on the plot are the closed-form parabola for the same span and loads${parabola ? `; the largest difference is ${fq(units, 'diameter', parabola.differenceM)} (${parabola.caseName})` : ''}. The mesh error estimate is ${worstMesh < 1e-5 ? 'below 0.001 %' : `at most ${(worstMesh * 100).toFixed(3)} %`}.`,
   ];
 }

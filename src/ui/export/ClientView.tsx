@@ -52,15 +52,15 @@ export function ClientView({
   }, [project, results, units]);
 
   return (
-    <div className="client-view" role="dialog" aria-modal="true" aria-label="Client view">
-      <header className="client-view-head">
+    <div className="presenter" role="dialog" aria-modal="true" aria-label="Client view">
+      <header className="presenter-head">
         <h2>{project.title}</h2>
-        <button ref={closeRef} type="button" className="client-view-close" onClick={onClose}>
+        <button ref={closeRef} type="button" className="presenter-close" onClick={onClose}>
           Close client view
         </button>
       </header>
-      <p className="client-view-summary">{summaryLine(project, results, units)}</p>
-      <dl className="client-view-numbers">
+      <p className="presenter-summary">{summaryLine(project, results, units)}</p>
+      <dl className="presenter-numbers">
         {keyNumbers(project, results, units).map((n) => (
           <div key={n.label}>
             <dt>{n.label}</dt>
@@ -71,11 +71,11 @@ export function ClientView({
       </dl>
       <div
         ref={plotRef}
-        className="client-view-plot"
+        className="presenter-plot"
         role="img"
         aria-label="Sag plot for the client"
       />
-      <p className="client-view-caution" role="note">
+      <p className="presenter-caution" role="note">
         <strong>Caution:</strong> {CAUTION_SUMMARY}
       </p>
     </div>

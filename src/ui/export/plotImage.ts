@@ -50,7 +50,7 @@ export function exportFigure(
       xanchor: 'left',
       font: { size: 16 },
     };
-    layout.margin = { l: 64, r: 16, t: 48, b: 150 };
+    layout.margin = { l: 84, r: 60, t: 48, b: 150 };
     layout.annotations?.push({
       xref: 'paper',
       yref: 'paper',
@@ -65,7 +65,7 @@ export function exportFigure(
       font: { size: 11, color: '#60686f' },
     });
   } else {
-    layout.margin = { l: 64, r: 16, t: 16, b: 96 };
+    layout.margin = { l: 84, r: 60, t: 16, b: 96 };
   }
   return { data: figure.data, layout, parabola: figure.parabola };
 }
