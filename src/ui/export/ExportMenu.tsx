@@ -36,7 +36,7 @@ export function ExportMenu() {
   const fileInput = useRef<HTMLInputElement>(null);
   const shared = useSharedProject();
 
-  const run = (label: string, work: () => Promise<unknown> | void) => async () => {
+  const run = (label: string, work: () => unknown) => async () => {
     setOpen(false);
     setBusy(true);
     try {
