@@ -1,6 +1,7 @@
 /**
- * The app shell in a real Chromium: it loads, names the product and the demo project, lists one
- * results row per case, draws one plot line per case, shows the cautions, and logs no errors.
+ * The app in a real Chromium: it loads, names the product and the demo project, lists one
+ * results row per case, draws one wire and one dashed parabola per case with a legend entry for
+ * each case, shows the cautions, and logs no errors.
  */
 import { expect, test } from '@playwright/test';
 import demo from '../examples/courtyard-lights.json' with { type: 'json' };
@@ -21,8 +22,8 @@ test('shell loads, shows results, the sag plot and the cautions without console 
 
   await expect(page).toHaveTitle('Sagwright');
   await expect(page.getByRole('heading', { level: 1, name: 'Sagwright' })).toBeVisible();
-  await expect(page.getByRole('heading', { level: 2, name: demo.title })).toBeVisible();
-  const cautions = page.getByRole('region', { name: 'Cautions' });
+  await expect(page.getByLabel('Project title')).toHaveValue(demo.title);
+  const cautions = page.getByRole('complementary', { name: 'Cautions' });
   await expect(cautions).toBeVisible();
   await expect(cautions).toContainText('licensed person');
 
@@ -33,15 +34,23 @@ test('shell loads, shows results, the sag plot and the cautions without console 
   }
   // The demo installs to a stated sag, so the installation row must read it back (to the mm).
   const installationRow = table.getByRole('row').filter({ hasText: 'Installation' });
-  await expect(installationRow.getByRole('cell').nth(2)).toHaveText(
+  // cells: horizontal tension, largest tension, utilisation, check, sag, …
+  await expect(installationRow.getByRole('cell').nth(4)).toHaveText(
     demo.installation.target.sag.toFixed(3),
   );
 
-  const plot = page.getByRole('img', { name: 'Sag plot' });
+  const plot = page.getByRole('figure', { name: 'Sag plot' });
   await expect(plot).toHaveAttribute('data-plot-state', 'drawn');
   await expect(plot.locator('.main-svg').first()).toBeVisible();
-  await expect(plot.locator('.scatterlayer .trace')).toHaveCount(expectedCaseCount);
-  await expect(plot.locator('.legend .traces')).toHaveCount(expectedCaseCount);
+  // Per case a solid wire and a dashed parabola; plus ground, minimum-clearance line, one shape
+  // per clearance zone and the supports.
+  const staticTraces = 3 + demo.limits.zones.length;
+  await expect(plot.locator('.scatterlayer .trace')).toHaveCount(
+    2 * expectedCaseCount + staticTraces,
+  );
+  for (const name of ['Installation', ...demo.cases.map((c) => c.name)]) {
+    await expect(plot.locator('.legend .traces').filter({ hasText: name })).toHaveCount(1);
+  }
 
   expect(problems).toEqual([]);
 });

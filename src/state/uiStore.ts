@@ -1,5 +1,5 @@
 /**
- * UI state kept apart from the document: display units, client view, plot options.
+ * UI state kept apart from the document: display units and plot options.
  * Persisted on its own key so a reload keeps the person's preferences.
  */
 import { create } from 'zustand';
@@ -11,9 +11,6 @@ export const UI_KEY = 'sagwright:ui';
 export interface UiState {
   unitSystem: UnitSystem;
   setUnitSystem(unitSystem: UnitSystem): void;
-  /** The client view hides the inputs: plot, results and cautions only. */
-  clientView: boolean;
-  setClientView(on: boolean): void;
   /** Plot with one metre across equal to one metre up. */
   equalAspect: boolean;
   setEqualAspect(on: boolean): void;
@@ -24,8 +21,6 @@ export const useUiStore = create<UiState>()(
     (set) => ({
       unitSystem: 'si',
       setUnitSystem: (unitSystem) => set({ unitSystem }),
-      clientView: false,
-      setClientView: (clientView) => set({ clientView }),
       equalAspect: false,
       setEqualAspect: (equalAspect) => set({ equalAspect }),
     }),
@@ -34,7 +29,6 @@ export const useUiStore = create<UiState>()(
       storage: createJSONStorage(() => localStorage),
       partialize: (state) => ({
         unitSystem: state.unitSystem,
-        clientView: state.clientView,
         equalAspect: state.equalAspect,
       }),
     },

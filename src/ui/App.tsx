@@ -1,12 +1,12 @@
 /**
  * The workbench: header with the project title and tools, the cautions strip, the inputs
  * grouped as an installer works (span, wire, loads, installation, weather, limits) and the
- * results. It only wires components together; the solver runs in a worker.
+ * results. It only wires components together; the solver runs in a worker. The client view
+ * lives in the export menu.
  */
 import { useEffect } from 'react';
 import { setTitle } from '../state/projectEdits.ts';
 import { useProjectStore } from '../state/projectStore.ts';
-import { useUiStore } from '../state/uiStore.ts';
 import { connectSolver } from '../worker/connectSolver.ts';
 import { CautionsStrip } from './CautionsStrip.tsx';
 import { ExportMenu } from './export/ExportMenu.tsx';
@@ -36,24 +36,19 @@ function Inputs() {
 export function App() {
   useEffect(() => connectSolver(), []);
   const title = useProjectStore((s) => s.project.title);
-  const clientView = useUiStore((s) => s.clientView);
   return (
-    <div className={`app${clientView ? ' client-view' : ''}`}>
+    <div className="app">
       <header className="app-header">
         <h1>Sagwright</h1>
-        {clientView ? (
-          <h2 className="project-title">{title}</h2>
-        ) : (
-          <div className="project-title">
-            <TextField path="title" label="Project title" value={title} edit={setTitle} />
-          </div>
-        )}
+        <div className="project-title">
+          <TextField path="title" label="Project title" value={title} edit={setTitle} />
+        </div>
         <Toolbar />
         <ExportMenu />
       </header>
       <CautionsStrip />
-      <main className={clientView ? 'layout-single' : 'layout-split'}>
-        {!clientView && <Inputs />}
+      <main className="layout-split">
+        <Inputs />
         <ResultsPane />
       </main>
     </div>

@@ -17,7 +17,7 @@ function Status() {
   const stale = useResultsStore((s) => s.stale);
   const error = useResultsStore((s) => s.error);
   const hasResults = useResultsStore((s) => s.results !== null);
-  const invalid = useDraftStore((s) => Object.values(s.invalid));
+  const invalid = Object.values(useDraftStore((s) => s.invalid));
   if (invalid.length > 0)
     return (
       <p className="status status-stale" role="status">

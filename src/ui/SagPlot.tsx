@@ -2,7 +2,7 @@
  * The sag plot on screen: draws buildSagFigure() with Plotly once Plotly has loaded (lazily),
  * redraws on every new result or unit change, and states the largest parabola difference.
  */
-import { useEffect, useMemo, useRef, useState } from 'react';
+import { useEffect, useId, useMemo, useRef, useState } from 'react';
 import type { Project, ProjectResults } from '../core/index.ts';
 import { useUiStore } from '../state/uiStore.ts';
 import { show } from './format.ts';
@@ -14,6 +14,7 @@ type PlotState = 'loading' | 'drawn' | 'failed';
 export function SagPlot({ project, results }: { project: Project; results: ProjectResults }) {
   const containerRef = useRef<HTMLDivElement>(null);
   const [state, setState] = useState<PlotState>('loading');
+  const captionId = useId();
   const units = useUiStore((s) => s.unitSystem);
   const equalAspect = useUiStore((s) => s.equalAspect);
   const setEqualAspect = useUiStore((s) => s.setEqualAspect);
@@ -42,7 +43,12 @@ export function SagPlot({ project, results }: { project: Project; results: Proje
   }, [figure]);
 
   return (
-    <figure className="sag-plot">
+    <figure
+      className="sag-plot"
+      aria-label="Sag plot"
+      aria-describedby={captionId}
+      data-plot-state={state}
+    >
       <div className="plot-tools">
         <label>
           <input
@@ -53,16 +59,10 @@ export function SagPlot({ project, results }: { project: Project; results: Proje
           True proportions (equal scales)
         </label>
       </div>
-      <div
-        ref={containerRef}
-        role="img"
-        aria-label="Sag plot"
-        data-plot-state={state}
-        className="sag-plot-canvas"
-      />
+      <div ref={containerRef} className="sag-plot-canvas" />
       {state === 'loading' && <p className="muted">Loading the plot…</p>}
       {state === 'failed' && <p role="alert">The plot could not be drawn; the numbers stand.</p>}
-      <figcaption className="muted">
+      <figcaption id={captionId} className="muted">
         Solid: the wire by finite elements for each case. Dashed: the closed-form parabola at the
         same horizontal tension
         {figure.parabola

@@ -1,4 +1,4 @@
-/** Header tools: undo/redo of document edits, the unit system, and the client view. */
+/** Header tools: undo/redo of document edits and the unit system. */
 import { useEffect } from 'react';
 import { useStore } from 'zustand';
 import { redo, undo, useProjectStore } from '../state/projectStore.ts';
@@ -33,8 +33,6 @@ export function Toolbar() {
   const canRedo = useStore(useProjectStore.temporal, (s) => s.futureStates.length > 0);
   const units = useUiStore((s) => s.unitSystem);
   const setUnits = useUiStore((s) => s.setUnitSystem);
-  const clientView = useUiStore((s) => s.clientView);
-  const setClientView = useUiStore((s) => s.setClientView);
   return (
     <div className="toolbar" role="toolbar" aria-label="Workbench tools">
       <button type="button" onClick={undo} disabled={!canUndo}>
@@ -64,9 +62,6 @@ export function Toolbar() {
           Imperial
         </label>
       </fieldset>
-      <button type="button" aria-pressed={clientView} onClick={() => setClientView(!clientView)}>
-        Client view
-      </button>
     </div>
   );
 }

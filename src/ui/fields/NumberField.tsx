@@ -22,9 +22,19 @@ export interface NumberFieldProps {
   edit: (si: number) => Edit;
   /** Hide the visible label (a table column header names it); the input keeps it. */
   compact?: boolean;
+  /** Words before the label that only a screen reader hears, e.g. the fixing's name. */
+  context?: string;
 }
 
-export function NumberField({ path, label, quantity, value, edit, compact }: NumberFieldProps) {
+export function NumberField({
+  path,
+  label,
+  quantity,
+  value,
+  edit,
+  compact,
+  context,
+}: NumberFieldProps) {
   const units = useUiStore((s) => s.unitSystem);
   const setInvalid = useDraftStore((s) => s.setInvalid);
   const [draft, setDraft] = useState<string | null>(null);
@@ -56,7 +66,7 @@ export function NumberField({ path, label, quantity, value, edit, compact }: Num
       if (reason !== null) committed.current = null;
     }
     setMessage(reason);
-    setInvalid(path, reason === null ? null : `${label}: ${reason}`);
+    setInvalid(path, reason === null ? null : `${context ? `${context} ` : ''}${label}: ${reason}`);
   }
 
   const text = draft ?? fieldText(value, quantity, units);
@@ -64,6 +74,7 @@ export function NumberField({ path, label, quantity, value, edit, compact }: Num
   return (
     <div className={`field${message ? ' field-invalid' : ''}`}>
       <label htmlFor={inputId} className={compact ? 'visually-hidden' : undefined}>
+        {context && <span className="visually-hidden">{context} </span>}
         {fullLabel}
       </label>
       <input
@@ -80,7 +91,7 @@ export function NumberField({ path, label, quantity, value, edit, compact }: Num
       />
       {message && (
         <span id={messageId} className="field-message" role="alert">
-          {label} {message}
+          {context} {label} {message}
         </span>
       )}
     </div>

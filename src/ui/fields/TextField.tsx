@@ -9,10 +9,20 @@ export interface TextFieldProps {
   value: string;
   edit: (text: string) => Edit;
   compact?: boolean;
+  /** Words before the label that only a screen reader hears, e.g. the fixing's name. */
+  context?: string;
   placeholder?: string;
 }
 
-export function TextField({ path, label, value, edit, compact, placeholder }: TextFieldProps) {
+export function TextField({
+  path,
+  label,
+  value,
+  edit,
+  compact,
+  placeholder,
+  context,
+}: TextFieldProps) {
   const setInvalid = useDraftStore((s) => s.setInvalid);
   const [draft, setDraft] = useState<string | null>(null);
   const [message, setMessage] = useState<string | null>(null);
@@ -22,12 +32,13 @@ export function TextField({ path, label, value, edit, compact, placeholder }: Te
     setDraft(text);
     const reason = text === value ? null : tryEdit(path, edit(text), 'count', 'si');
     setMessage(reason);
-    setInvalid(path, reason === null ? null : `${label}: ${reason}`);
+    setInvalid(path, reason === null ? null : `${context ? `${context} ` : ''}${label}: ${reason}`);
   }
 
   return (
     <div className={`field field-text${message ? ' field-invalid' : ''}`}>
       <label htmlFor={inputId} className={compact ? 'visually-hidden' : undefined}>
+        {context && <span className="visually-hidden">{context} </span>}
         {label}
       </label>
       <input
@@ -42,7 +53,7 @@ export function TextField({ path, label, value, edit, compact, placeholder }: Te
       />
       {message && (
         <span id={`${inputId}-message`} className="field-message" role="alert">
-          {label} {message}
+          {context} {label} {message}
         </span>
       )}
     </div>

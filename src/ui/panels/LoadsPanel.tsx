@@ -14,7 +14,8 @@ function PointRow({ load, index }: { load: PointLoad; index: number }) {
     <>
       <NumberField
         path={`${path}.x`}
-        label={`${name} position`}
+        context={name}
+        label="Position"
         quantity="length"
         value={load.x}
         edit={(x) => edits.patchLoad(index, { x })}
@@ -22,7 +23,8 @@ function PointRow({ load, index }: { load: PointLoad; index: number }) {
       {load.force !== undefined ? (
         <NumberField
           path={`${path}.force`}
-          label={`${name} force`}
+          context={name}
+          label="Force"
           quantity="force"
           value={load.force}
           edit={(force) => edits.patchLoad(index, { force })}
@@ -30,7 +32,8 @@ function PointRow({ load, index }: { load: PointLoad; index: number }) {
       ) : (
         <NumberField
           path={`${path}.mass`}
-          label={`${name} mass`}
+          context={name}
+          label="Mass"
           quantity="mass"
           value={load.mass ?? 0}
           edit={(mass) => edits.patchLoad(index, { mass })}
@@ -47,28 +50,32 @@ function UniformRow({ load, index }: { load: UniformLoad; index: number }) {
     <>
       <NumberField
         path={`${path}.from`}
-        label={`${name} from`}
+        context={name}
+        label="From"
         quantity="length"
         value={load.from}
         edit={(from) => edits.patchLoad(index, { from })}
       />
       <NumberField
         path={`${path}.to`}
-        label={`${name} to`}
+        context={name}
+        label="To"
         quantity="length"
         value={load.to}
         edit={(to) => edits.patchLoad(index, { to })}
       />
       <NumberField
         path={`${path}.massPerLength`}
-        label={`${name} mass`}
+        context={name}
+        label="Mass"
         quantity="massPerLength"
         value={load.massPerLength}
         edit={(massPerLength) => edits.patchLoad(index, { massPerLength })}
       />
       <NumberField
         path={`${path}.diameter`}
-        label={`${name} diameter (for ice and wind)`}
+        context={name}
+        label="Diameter"
         quantity="diameter"
         value={load.diameter ?? 0}
         edit={(diameter) => edits.patchLoad(index, { diameter })}
@@ -84,7 +91,8 @@ function LoadRow({ load, index }: { load: Load; index: number }) {
     <Row label={`${kind} ${index + 1}`}>
       <TextField
         path={`loads[${index}].label`}
-        label={`${kind} ${index + 1} name`}
+        context={`${kind} ${index + 1}`}
+        label="Name"
         value={load.label ?? ''}
         edit={(label) => edits.patchLoad(index, { label })}
       />

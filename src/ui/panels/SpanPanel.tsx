@@ -20,20 +20,23 @@ function Supports({ project }: { project: Project }) {
           <Row key={i} label={`Fixing ${i + 1}`}>
             <TextField
               path={`${path}.label`}
-              label={`Fixing ${i + 1} name`}
+              context={`Fixing ${i + 1}`}
+              label="Name"
               value={support.label ?? ''}
               edit={(label) => edits.patchSupport(i, { label })}
             />
             <NumberField
               path={`${path}.x`}
-              label={`${name} position`}
+              context={name}
+              label="Position"
               quantity="length"
               value={support.x}
               edit={(x) => edits.patchSupport(i, { x })}
             />
             <NumberField
               path={`${path}.z`}
-              label={`${name} height`}
+              context={name}
+              label="Height"
               quantity="length"
               value={support.z}
               edit={(z) => edits.patchSupport(i, { z })}
@@ -71,14 +74,16 @@ function Ground({ project }: { project: Project }) {
         <Row key={i} label={`Ground point ${i + 1}`}>
           <NumberField
             path={`ground[${i}].x`}
-            label={`Ground point ${i + 1} position`}
+            context={`Ground point ${i + 1}`}
+            label="Position"
             quantity="length"
             value={point.x}
             edit={(x) => edits.patchGround(i, { x })}
           />
           <NumberField
             path={`ground[${i}].z`}
-            label={`Ground point ${i + 1} height`}
+            context={`Ground point ${i + 1}`}
+            label="Height"
             quantity="length"
             value={point.z}
             edit={(z) => edits.patchGround(i, { z })}
@@ -108,27 +113,31 @@ function Zones({ project }: { project: Project }) {
           <Row key={i} label={`Clearance zone ${i + 1}`}>
             <TextField
               path={`${path}.label`}
-              label={`Zone ${i + 1} name`}
+              context={`Zone ${i + 1}`}
+              label="Name"
               value={zone.label ?? ''}
               edit={(label) => edits.patchZone(i, { label })}
             />
             <NumberField
               path={`${path}.from`}
-              label={`${name} from`}
+              context={name}
+              label="From"
               quantity="length"
               value={zone.from}
               edit={(from) => edits.patchZone(i, { from })}
             />
             <NumberField
               path={`${path}.to`}
-              label={`${name} to`}
+              context={name}
+              label="To"
               quantity="length"
               value={zone.to}
               edit={(to) => edits.patchZone(i, { to })}
             />
             <NumberField
               path={`${path}.height`}
-              label={`${name} clearance needed`}
+              context={name}
+              label="Clearance needed"
               quantity="length"
               value={zone.height}
               edit={(height) => edits.patchZone(i, { height })}

@@ -91,7 +91,9 @@ export function supportTrace(project: Project, units: UnitSystem): Data {
     x: project.supports.map((s) => len(s.x)),
     y: project.supports.map((s) => len(s.z)),
     text: project.supports.map((s, i) => s.label || `Support ${i + 1}`),
-    textposition: 'top center',
+    textposition: project.supports.map((_, i) =>
+      i === 0 ? 'top right' : i === project.supports.length - 1 ? 'top left' : 'top center',
+    ),
     marker: { symbol: 'triangle-down', size: 12, color: '#333333' },
     hovertemplate: '%{text}<extra></extra>',
   };

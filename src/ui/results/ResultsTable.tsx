@@ -2,7 +2,7 @@
 import type { CaseResult, ProjectResults } from '../../core/index.ts';
 import { unitSymbol } from '../../core/units.ts';
 import { useUiStore } from '../../state/uiStore.ts';
-import { fieldText, percent, show } from '../format.ts';
+import { percent, show } from '../format.ts';
 
 function Verdict({ result }: { result: CaseResult }) {
   if (!result.solved) return <span className="verdict fail">Not solved</span>;
@@ -46,7 +46,7 @@ export function ResultsTable({ results }: { results: ProjectResults }) {
             const zones = result.zoneClearances
               .map(
                 (z) =>
-                  `${z.label}: ${fieldText(z.clearance, 'length', units)}${z.ok ? '' : ' (too low)'}`,
+                  `${z.label}: ${show(z.clearance, 'length', units, 2)}${z.ok ? '' : ` — too low, needs ${show(z.required, 'length', units, 2)}`}`,
               )
               .join('; ');
             return (
