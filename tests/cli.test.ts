@@ -100,7 +100,7 @@ describe('npm run solve (src/cli/main.ts)', () => {
       const run = solveCli('tests/fixtures/unreachable-tension.json');
       expect(run.status).toBe(1);
       expect(run.stderr).toMatch(/case "Installation" could not be solved/);
-      expect(run.stderr).toMatch(/largest tension target 1 cannot be reached/);
+      expect(run.stderr).toMatch(/largest tension target 1 N cannot be reached/);
       expect(JSON.parse(run.stdout).cases[0].solved).toBe(false);
     },
     TIMEOUT_MS,

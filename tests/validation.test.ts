@@ -217,7 +217,7 @@ describe('solveProject on valid files with physical trouble', () => {
       const installed = results.cases[0];
       expect(installed.ok).toBe(false);
       expect(installed.solved).toBe(false);
-      expect(installed.messages[0]).toMatch(/largest tension target 1 cannot be reached/);
+      expect(installed.messages[0]).toMatch(/largest tension target 1 N cannot be reached/);
       for (const c of results.cases) expect(c.ok, c.name).toBe(false);
     },
   );

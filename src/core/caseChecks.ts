@@ -77,6 +77,16 @@ function spanResult({ span, tensionN }: SolvedSpan): SpanResult {
   return { horizontalTension: tensionN, sag: -sag.value, lowestPoint: { x: low.x, z: low.value } };
 }
 
+/** Largest sag over the spans of a solved state, m. */
+export function largestSag(spans: readonly SolvedSpan[]): number {
+  return Math.max(...spans.map((s) => spanResult(s).sag));
+}
+
+/** Largest tension over the spans of a solved state, N. */
+export function largestStateTension(spans: readonly SolvedSpan[]): number {
+  return Math.max(...spans.map((s) => largestTension(s.span, s.tensionN)));
+}
+
 function reactions(spans: readonly SolvedSpan[]): SupportReaction[] {
   const forces = Array.from({ length: spans.length + 1 }, () => ({ h: 0, v: 0, l: 0 }));
   spans.forEach(({ span, tensionN: H }, j) => {
@@ -126,7 +136,7 @@ const fmt = (value: number, digits = 2) => value.toFixed(digits);
 export function checkCase(input: CheckInput): CaseResult {
   const { spans } = input;
   const spanResults = spans.map(spanResult);
-  const maxTension = Math.max(...spans.map((s) => largestTension(s.span, s.tensionN)));
+  const maxTension = largestStateTension(spans);
   const horizontalTension = Math.max(...spans.map((s) => s.tensionN));
   const utilisation = (maxTension * input.safetyFactor) / input.breakingLoadN;
   const lowest = spanResults.reduce((a, b) =>

@@ -10,7 +10,7 @@ import { loadStateOfCase } from './loads.ts';
 import type { InstallationTarget } from './project.ts';
 import type { ProjectModel } from './projectModel.ts';
 import { prepareState } from './projectModel.ts';
-import { brent } from './rootFind.ts';
+import { solveNearlyLinear } from './rootFind.ts';
 import { largestTension, minimumAboveLine } from './spanGeometry.ts';
 import { type StateSolution, solveChangeOfState, solveInstallation } from './states.ts';
 
@@ -91,45 +91,27 @@ export function findInstallationTension(
   if (target.horizontalTension !== undefined && target.case === undefined) {
     return { tensionN: value, evaluations: 0, ok: true };
   }
-  const increasing = target.sag === undefined; // tensions grow with H, sag shrinks
+  // In logarithms the quantity is nearly linear with slope ±1 (sag ∝ 1/H, tension ∝ H).
+  const sign = target.sag === undefined ? 1 : -1;
   const f = (lnH: number) => {
-    const state = stateFor(model, target, Math.exp(lnH));
-    const q = measure(model, target, state);
-    return increasing ? q - value : value - q;
+    const q = measure(model, target, stateFor(model, target, Math.exp(lnH)));
+    return q > 0 && Number.isFinite(q) ? sign * (Math.log(q) - Math.log(value)) : Number.NaN;
   };
-  let lo = Math.log(initialGuess(model, target, value));
-  let hi = lo;
-  let fLo = f(lo);
-  let fHi = fLo;
-  let evaluations = 1;
-  for (let k = 0; k < 60 && fLo * fHi > 0; k++) {
-    if (fLo > 0) {
-      lo -= Math.LN2;
-      fLo = f(lo);
-    } else {
-      hi += Math.LN2;
-      fHi = f(hi);
-    }
-    evaluations++;
-  }
-  if (fLo * fHi > 0) {
-    const what =
-      target.maxTension !== undefined
-        ? 'largest tension'
-        : target.sag !== undefined
-          ? 'sag'
-          : 'horizontal tension';
-    return {
-      tensionN: Math.exp(lo),
-      evaluations,
-      ok: false,
-      message: `the ${what} target ${value} cannot be reached with this wire and load`,
-    };
-  }
-  const root = brent(f, lo, hi, 1e-12);
+  const start = Math.log(initialGuess(model, target, value));
+  const root = solveNearlyLinear(f, start, 1);
+  if (root.converged)
+    return { tensionN: Math.exp(root.x), evaluations: root.evaluations, ok: true };
+  const what =
+    target.maxTension !== undefined
+      ? 'largest tension'
+      : target.sag !== undefined
+        ? 'sag'
+        : 'horizontal tension';
+  const unit = target.sag !== undefined ? 'm' : 'N';
   return {
-    tensionN: Math.exp(root.x),
-    evaluations: evaluations + root.evaluations,
-    ok: root.converged,
+    tensionN: Math.exp(start),
+    evaluations: root.evaluations,
+    ok: false,
+    message: `the ${what} target ${value} ${unit} cannot be reached with this wire and load${target.case ? ` in "${target.case}"` : ''}`,
   };
 }

@@ -28,6 +28,9 @@ export interface SectionSolution {
 }
 
 const LOAD_TOLERANCE = 1e-12;
+/** Newton is quadratic: a relative step below 1e-7 leaves an error of order 1e-14. */
+const NEWTON_SETTLED = 1e-7;
+const JOINT_ITERATIONS = 40;
 const MAX_LOAD_ITERATIONS = 100;
 
 /** Unstressed length of the section at H and its derivative dL₀/dH; optionally per element. */
@@ -48,6 +51,7 @@ export function unstressedLengthAt(
       const curvV = 0.5 * span.qVertical[e] * L * GAUSS2;
       const curvY = 0.5 * span.qLateral[e] * L * GAUSS2;
       let element = 0;
+      let elementSlope = 0;
       for (let g = -1; g <= 1; g += 2) {
         const av = span.slopeV1[e] - g * curvV;
         const ay = span.slopeY1[e] - g * curvY;
@@ -59,11 +63,16 @@ export function unstressedLengthAt(
         const drdH = ((sz * av - sy * ay) * invH2) / r;
         const dTdH = r + H * drdH;
         element += f;
-        slope += ((drdH - (f * dTdH) / axialStiffness) / stretch) * 0.5 * L;
+        elementSlope += (drdH - (f * dTdH) / axialStiffness) / stretch;
       }
       element *= 0.5 * L;
-      if (storeElements) span.unstressedElement[e] = element;
+      elementSlope *= 0.5 * L;
+      if (storeElements) {
+        span.unstressedElement[e] = element;
+        span.unstressedElementSlope[e] = elementSlope;
+      }
       value += element;
+      slope += elementSlope;
     }
   }
   return { value, slope };
@@ -73,13 +82,14 @@ export function unstressedLengthAt(
  * Set element loads from the wire loading. The exact theory scales the wire's load by ds₀/dx of
  * the last solved state (a warm start across states and trial tensions; 1 before any state).
  */
-function updateLoads(spans: readonly SpanModel[], wire: WireLoading): number {
+function updateLoads(spans: readonly SpanModel[], wire: WireLoading, tensionShiftN = 0): number {
   const useGeometry = wire.theory === 'exact';
   let change = 0;
   let scale = 0;
   for (const span of spans) {
+    let lateral = false;
     for (let e = 0; e < span.elementLength.length; e++) {
-      const unstressed = span.unstressedElement[e];
+      const unstressed = span.unstressedElement[e] + span.unstressedElementSlope[e] * tensionShiftN;
       const ratio = useGeometry && unstressed > 0 ? unstressed / span.elementLength[e] : 1;
       const q = wire.weightNPerM * ratio + span.hungVertical[e];
       const p = wire.windNPerM * ratio + span.hungLateral[e];
@@ -87,17 +97,97 @@ function updateLoads(spans: readonly SpanModel[], wire: WireLoading): number {
       scale = Math.max(scale, Math.abs(q), Math.abs(p));
       span.qVertical[e] = q;
       span.qLateral[e] = p;
+      if (p !== 0) lateral = true;
     }
+    span.lateralLoaded = lateral;
   }
   return scale > 0 ? change / scale : 0;
+}
+
+/**
+ * A first step from the small-slope model of the section (the classic change-of-state form):
+ * L₀(H) ≈ Σ l√(1 + c²) + P/H² − Q H with P = Σ ∫v₁'²/(2(1 + c²)^{3/2}) + ∫y₁'²/(2√(1 + c²)) and
+ * Q = Σ l (1 + c²)/EA, shifted to match the exact mismatch at H; its root (Newton on a scalar
+ * cubic) is a far better start than a tangent step when the state changed a lot.
+ */
+function slackModelStep(
+  spans: readonly SpanModel[],
+  axialStiffness: number,
+  H: number,
+  mismatch: number,
+): number {
+  let P = 0;
+  let Q = 0;
+  for (const span of spans) {
+    const c2 = 1 + span.chordSlope * span.chordSlope;
+    let dz = 0;
+    let dy = 0;
+    for (let e = 0; e < span.elementLength.length; e++) {
+      const L = span.elementLength[e];
+      const qL = span.qVertical[e] * L;
+      const pL = span.qLateral[e] * L;
+      dz += L * (span.slopeV1[e] * span.slopeV1[e] + (qL * qL) / 12);
+      dy += L * (span.slopeY1[e] * span.slopeY1[e] + (pL * pL) / 12);
+    }
+    P += dz / (2 * c2 * Math.sqrt(c2)) + dy / (2 * Math.sqrt(c2));
+    Q += ((span.x1 - span.x0) * c2) / axialStiffness;
+  }
+  // Model: F(h) = P/h² − Q h + K, with K chosen so that F(H) equals the exact mismatch.
+  const K = mismatch - P / (H * H) + Q * H;
+  let h = H;
+  for (let i = 0; i < 60; i++) {
+    const f = P / (h * h) - Q * h + K;
+    const df = (-2 * P) / (h * h * h) - Q;
+    let next = h - f / df;
+    if (!(next > 0)) next = h / 2;
+    if (Math.abs(next - h) <= 1e-15 * h) return next;
+    h = next;
+  }
+  return h;
 }
 
 function solveShapes(spans: readonly SpanModel[]): void {
   for (const span of spans) solveUnitShapes(span);
 }
 
-/** Horizontal tension of a section whose unstressed length at this temperature is L₀ (m). */
+/**
+ * Horizontal tension of a section whose unstressed length at this temperature is L₀ (m).
+ * Fast path: one Newton step on H per shape solve, the catenary loads updated in the same pass
+ * (parabolic theory: the shape is solved once). Steps are kept within a factor 4 of H. If that
+ * joint iteration has not settled, the nested, bracketed method below takes over.
+ */
 export function solveSectionForLength(
+  spans: readonly SpanModel[],
+  wire: WireLoading,
+  unstressedLengthM: number,
+  tensionGuessN: number,
+): SectionSolution {
+  const exact = wire.theory === 'exact';
+  updateLoads(spans, wire);
+  solveShapes(spans);
+  let H = tensionGuessN > 0 && Number.isFinite(tensionGuessN) ? tensionGuessN : 1;
+  for (let k = 1; k <= JOINT_ITERATIONS; k++) {
+    const r = unstressedLengthAt(spans, H, wire.axialStiffness, exact);
+    const mismatch = r.value - unstressedLengthM;
+    let next = k === 1 ? slackModelStep(spans, wire.axialStiffness, H, mismatch) : Number.NaN;
+    if (!(next > 0)) next = H - mismatch / r.slope;
+    if (!(next > H / 4)) next = H / 4;
+    if (next > 4 * H) next = 4 * H;
+    const step = Math.abs(next - H) / H;
+    // Loads for the new tension: the stored element lengths moved to H_next to first order.
+    const loadChange = exact ? updateLoads(spans, wire, next - H) : 0;
+    H = next;
+    if (exact) solveShapes(spans);
+    if (step < NEWTON_SETTLED && loadChange < LOAD_TOLERANCE) {
+      return { tensionN: H, iterations: k, converged: true };
+    }
+  }
+  const nested = solveSectionNested(spans, wire, unstressedLengthM, H);
+  return { ...nested, iterations: nested.iterations + JOINT_ITERATIONS };
+}
+
+/** The robust method: a full bracketed root in H for each catenary load update. */
+function solveSectionNested(
   spans: readonly SpanModel[],
   wire: WireLoading,
   unstressedLengthM: number,

@@ -53,12 +53,13 @@ export function brent(
   b0: number,
   absoluteTolerance = 1e-12,
   maxEvaluations = 200,
+  known?: { fa: number; fb: number },
 ): RootResult {
   let a = a0;
   let b = b0;
-  let fa = f(a);
-  let fb = f(b);
-  let evaluations = 2;
+  let fa = known ? known.fa : f(a);
+  let fb = known ? known.fb : f(b);
+  let evaluations = known ? 0 : 2;
   if (fa === 0) return { x: a, evaluations, converged: true };
   if (fb === 0) return { x: b, evaluations, converged: true };
   if (!(fa * fb < 0)) return { x: b, evaluations, converged: false };
@@ -117,4 +118,49 @@ export function brent(
     evaluations++;
   }
   return { x: b, evaluations, converged: false };
+}
+
+/**
+ * Root of an increasing function that is nearly linear with the given slope near x0 (such as a
+ * log quantity against log tension): secant steps until the root is bracketed (steps at most
+ * `maxStep`, the search within ±`range` of x0), then Brent. NaN values count as failure.
+ */
+export function solveNearlyLinear(
+  f: (x: number) => number,
+  x0: number,
+  slope: number,
+  tolerance = 1e-12,
+  maxStep = 3,
+  range = 25,
+): RootResult {
+  let a = x0;
+  let fa = f(a);
+  let evaluations = 1;
+  if (fa === 0) return { x: a, evaluations, converged: true };
+  const clampStep = (x: number, from: number) =>
+    from + Math.max(-maxStep, Math.min(maxStep, x - from));
+  let b = clampStep(a - fa / slope, a);
+  let fb = f(b);
+  evaluations++;
+  if (fb === 0) return { x: b, evaluations, converged: true };
+  while (fa * fb > 0 && evaluations < 60) {
+    if (!Number.isFinite(fa) || !Number.isFinite(fb)) break;
+    if (Math.abs(b - x0) > range) break;
+    const secant = b - (fb * (b - a)) / (fb - fa);
+    const progress = Math.abs(fb) < Math.abs(fa) && Number.isFinite(secant);
+    // Secant towards the root while it helps; otherwise step on, downhill, doubling the step.
+    let c = progress
+      ? clampStep(secant, b)
+      : b + (fb > 0 ? -1 : 1) * Math.min(maxStep, 2 * Math.abs(b - a));
+    if (Math.abs(c - b) < tolerance) c = b + (fb > 0 ? -tolerance : tolerance) * 10;
+    a = b;
+    fa = fb;
+    b = c;
+    fb = f(b);
+    evaluations++;
+    if (fb === 0) return { x: b, evaluations, converged: true };
+  }
+  if (!(fa * fb < 0)) return { x: b, evaluations, converged: false };
+  const root = brent(f, a, b, tolerance, 200, { fa, fb });
+  return { x: root.x, evaluations: evaluations + root.evaluations, converged: root.converged };
 }

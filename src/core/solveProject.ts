@@ -5,7 +5,7 @@
  * half the elements: e ≈ |f_h − f_2h| / (2² − 1) for sag and largest tension.
  */
 
-import { checkCase } from './caseChecks.ts';
+import { checkCase, largestSag, largestStateTension } from './caseChecks.ts';
 import { findInstallationTension } from './installation.ts';
 import { loadStateOfCase } from './loads.ts';
 import type { CaseResult, Project, ProjectResults } from './project.ts';
@@ -39,15 +39,14 @@ function checkState(
   });
 }
 
-/** Solve every state of the model at installation tension H; results in case order. */
-function solveStates(
+/** Solve every state of the model at installation tension H and finish each; in case order. */
+function solveStates<T>(
   model: ProjectModel,
   tensionN: number,
-): { results: CaseResult[]; unstressed: number[] } {
+  finish: (name: string, temperature: number, state: StateSolution) => T,
+): { results: T[]; unstressed: number[] } {
   const installed = solveInstallation(model, tensionN);
-  const results = [
-    checkState(model, model.installation.name, model.installation.temperature, installed),
-  ];
+  const results = [finish(model.installation.name, model.installation.temperature, installed)];
   for (const weather of model.project.cases) {
     const state = solveChangeOfState(
       model,
@@ -55,9 +54,14 @@ function solveStates(
       installed.unstressed,
       tensionN,
     );
-    results.push(checkState(model, weather.name, weather.temperature, state));
+    results.push(finish(weather.name, weather.temperature, state));
   }
   return { results, unstressed: installed.unstressed };
+}
+
+/** Sag and largest tension only: what the discretisation estimate compares. */
+function summarise(_name: string, _temperature: number, state: StateSolution): StateSummary {
+  return { sag: largestSag(state.spans), maxTension: largestStateTension(state.spans) };
 }
 
 function relativeChange(fine: StateSummary, coarse: StateSummary): number {
@@ -85,15 +89,21 @@ function governing(project: Project, results: CaseResult[]) {
 export function solveProject(project: Project): ProjectResults {
   const model = buildProjectModel(project);
   const target = findInstallationTension(model, project.installation.target);
-  const { results, unstressed } = solveStates(model, target.tensionN);
+  const finish = (name: string, temperature: number, state: StateSolution) =>
+    checkState(model, name, temperature, state);
+  const { results, unstressed } = solveStates(model, target.tensionN, finish);
   results[0].iterations += target.evaluations;
   if (!target.ok) {
-    results[0].solved = false;
-    results[0].ok = false;
-    results[0].messages.unshift(`Installation target: ${target.message ?? 'did not converge'}.`);
+    // Without its installation tension no state is meaningful: every case says so.
+    for (const r of results) {
+      r.solved = false;
+      r.ok = false;
+      r.messages.unshift(`Installation target: ${target.message ?? 'did not converge'}.`);
+    }
   }
   const coarseCount = Math.max(2, Math.round(model.settings.elementsPerSpan / 2));
-  const coarse = solveStates(buildProjectModel(project, coarseCount), target.tensionN).results;
+  const coarseModel = buildProjectModel(project, coarseCount);
+  const coarse = solveStates(coarseModel, target.tensionN, summarise).results;
   results.forEach((r, i) => {
     r.discretisationError = relativeChange(r, coarse[i]);
   });

@@ -31,14 +31,17 @@ export interface SpanModel {
   /** Current element loads (N per horizontal metre) used for the shape. */
   readonly qVertical: Float64Array;
   readonly qLateral: Float64Array;
+  /** True when any element carries a sideways load (else y₁ = 0 and its solve is skipped). */
+  lateralLoaded: boolean;
   /** Unit-tension nodal solutions v₁, y₁ (N·m). */
   readonly v1: Float64Array;
   readonly y1: Float64Array;
   /** Unit-tension element chord slopes m_e of v₁ and y₁. */
   readonly slopeV1: Float64Array;
   readonly slopeY1: Float64Array;
-  /** Unstressed length of each element at the last evaluated state, m. */
+  /** Unstressed length of each element at the last evaluated state, m, and its d/dH (m/N). */
   readonly unstressedElement: Float64Array;
+  readonly unstressedElementSlope: Float64Array;
 }
 
 export function createSpanModel(
@@ -70,11 +73,13 @@ export function createSpanModel(
     pointForces: [],
     qVertical: new Float64Array(ne),
     qLateral: new Float64Array(ne),
+    lateralLoaded: false,
     v1: new Float64Array(nodes),
     y1: new Float64Array(nodes),
     slopeV1: new Float64Array(ne),
     slopeY1: new Float64Array(ne),
     unstressedElement: new Float64Array(ne),
+    unstressedElementSlope: new Float64Array(ne),
   };
 }
 
@@ -110,10 +115,10 @@ export function solveUnitShapes(span: SpanModel): void {
   addElementLoads(mesh, span.qVertical, v1);
   for (let i = 0; i < span.pointNodes.length; i++) v1[span.pointNodes[i]] += span.pointForces[i];
   y1.fill(0);
-  addElementLoads(mesh, span.qLateral, y1);
+  if (span.lateralLoaded) addElementLoads(mesh, span.qLateral, y1);
   if (last > 1) {
     span.system.factor.solve(v1.subarray(1, last));
-    span.system.factor.solve(y1.subarray(1, last));
+    if (span.lateralLoaded) span.system.factor.solve(y1.subarray(1, last));
   }
   v1[0] = 0;
   v1[last] = 0;
