@@ -17,13 +17,14 @@ export class FieldChecker {
     this.issues.push({ path, message });
   }
 
+  /** An object with only `allowed` keys; path '' is the document itself. */
   object(value: unknown, path: string, allowed: readonly string[]): Json | undefined {
     if (typeof value !== 'object' || value === null || Array.isArray(value)) {
-      this.fail(path, 'must be an object');
+      this.fail(path || '(document)', 'must be an object');
       return undefined;
     }
     for (const key of Object.keys(value)) {
-      if (!allowed.includes(key)) this.fail(`${path}.${key}`, 'is not a known field');
+      if (!allowed.includes(key)) this.fail(path ? `${path}.${key}` : key, 'is not a known field');
     }
     return value as Json;
   }

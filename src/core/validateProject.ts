@@ -241,7 +241,7 @@ function checkSettings(c: FieldChecker, model: unknown, env: unknown): void {
 
 export function validateProject(raw: unknown): ValidationResult {
   const c = new FieldChecker();
-  const doc = c.object(raw, '(document)', TOP_FIELDS);
+  const doc = c.object(raw, '', TOP_FIELDS);
   if (!doc) return { ok: false, issues: c.issues };
   if (doc.format !== PROJECT_FORMAT) c.fail('format', `must be "${PROJECT_FORMAT}"`);
   const version = c.integer(doc.version, 'version', 1, Number.MAX_SAFE_INTEGER);
