@@ -167,8 +167,8 @@ test('switching to imperial shows feet and pound-force, and back to SI restores 
   await openDemo(page);
   const results = solveProject(demoProject());
   await page.getByRole('radio', { name: 'Imperial' }).check();
-  // 22 m / 0.3048 m per ft (exact definition, NIST SP 811)
-  await expect(page.getByLabel('Studio wall bracket Position (ft)')).toHaveValue('72.178478');
+  // 22 m / 0.3048 m per ft (exact definition, NIST SP 811) = 72.17847769 ft, shown to 6 digits
+  await expect(page.getByLabel('Studio wall bracket Position (ft)')).toHaveValue('72.1785');
   const installation = results.cases[0];
   // 1 lbf = 4.4482216152605 N (NIST SP 811)
   await expect(caseRow(page, 'Installation').getByRole('cell').nth(0)).toHaveText(

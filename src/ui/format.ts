@@ -4,14 +4,16 @@
  */
 import { fromSi, type Quantity, type UnitSystem, unitSymbol } from '../core/units.ts';
 
-const fieldFormat = new Intl.NumberFormat('en', {
-  maximumSignificantDigits: 8,
-  useGrouping: false,
-});
+// SI values are shown as typed (8 digits); converted imperial values are rounded to 6 digits so
+// a 22 m span reads 72.1785 ft, not 72.178478. The document keeps the exact SI value.
+const fieldFormats: Record<UnitSystem, Intl.NumberFormat> = {
+  si: new Intl.NumberFormat('en', { maximumSignificantDigits: 8, useGrouping: false }),
+  imperial: new Intl.NumberFormat('en', { maximumSignificantDigits: 6, useGrouping: false }),
+};
 
 /** The text an input shows for an SI value. */
 export function fieldText(si: number, quantity: Quantity, units: UnitSystem): string {
-  return fieldFormat.format(fromSi(si, quantity, units));
+  return fieldFormats[units].format(fromSi(si, quantity, units));
 }
 
 /** Parse typed text: a plain number, decimal point, optional exponent. */
@@ -44,23 +46,27 @@ const DIGITS: Partial<Record<Quantity, number>> = {
   mass: 2,
 };
 
-/** An SI value shown with its unit, e.g. "3.750 m", "442 N". */
+/** An SI value as a number in display units without the unit, e.g. "3.750" (table cells). */
+export function num(si: number, quantity: Quantity, units: UnitSystem, digits?: number): string {
+  return fixed(digits ?? DIGITS[quantity] ?? 2).format(fromSi(si, quantity, units));
+}
+
+/** An SI value shown with its unit, kept on one line, e.g. "3.750 m", "442 N". */
 export function show(si: number, quantity: Quantity, units: UnitSystem, digits?: number): string {
-  const value = fromSi(si, quantity, units);
   const symbol = unitSymbol(quantity, units);
-  const text = fixed(digits ?? DIGITS[quantity] ?? 2).format(value);
-  return symbol ? `${text} ${symbol}` : text;
+  const text = num(si, quantity, units, digits);
+  return symbol ? `${text}\u00a0${symbol}` : text;
 }
 
 /** Forces above 1 kN (or 1 000 lbf) in kN or kip, for summaries. */
 export function showForceShort(newtons: number, units: UnitSystem): string {
   if (units === 'si')
     return newtons >= 1000
-      ? `${fixed(2).format(newtons / 1000)} kN`
-      : `${fixed(0).format(newtons)} N`;
+      ? `${fixed(2).format(newtons / 1000)}\u00a0kN`
+      : `${fixed(0).format(newtons)}\u00a0N`;
   return show(newtons, 'force', units, 0);
 }
 
 export function percent(fraction: number): string {
-  return `${fixed(0).format(fraction * 100)} %`;
+  return `${fixed(0).format(fraction * 100)}\u00a0%`;
 }

@@ -3,13 +3,13 @@ import type { ProjectResults } from '../../core/index.ts';
 import { unitSymbol } from '../../core/units.ts';
 import { useProjectStore } from '../../state/projectStore.ts';
 import { useUiStore } from '../../state/uiStore.ts';
-import { show } from '../format.ts';
+import { num } from '../format.ts';
 
 export function ReactionsTable({ results }: { results: ProjectResults }) {
   const units = useUiStore((s) => s.unitSystem);
   const supports = useProjectStore((s) => s.project.supports);
   const fu = unitSymbol('force', units);
-  const force = (n: number) => show(Math.abs(n), 'force', units).replace(` ${fu}`, '');
+  const force = (n: number) => num(Math.abs(n), 'force', units);
   return (
     <details className="reactions" open>
       <summary>Pull on the fixings</summary>

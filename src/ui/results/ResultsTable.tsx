@@ -2,7 +2,7 @@
 import type { CaseResult, ProjectResults } from '../../core/index.ts';
 import { unitSymbol } from '../../core/units.ts';
 import { useUiStore } from '../../state/uiStore.ts';
-import { percent, show } from '../format.ts';
+import { num, percent, show } from '../format.ts';
 
 function Verdict({ result }: { result: CaseResult }) {
   if (!result.solved) return <span className="verdict fail">Not solved</span>;
@@ -58,8 +58,8 @@ export function ResultsTable({ results }: { results: ProjectResults }) {
                   </span>
                   {marks.length > 0 && <span className="badge">{marks.join(', ')}</span>}
                 </th>
-                <td>{show(result.horizontalTension, 'force', units).replace(` ${fu}`, '')}</td>
-                <td>{show(result.maxTension, 'force', units).replace(` ${fu}`, '')}</td>
+                <td>{num(result.horizontalTension, 'force', units)}</td>
+                <td>{num(result.maxTension, 'force', units)}</td>
                 <td>{percent(result.utilisation)}</td>
                 <td>
                   <Verdict result={result} />
@@ -67,18 +67,18 @@ export function ResultsTable({ results }: { results: ProjectResults }) {
                     <span className="case-meta">{result.messages.join(' ')}</span>
                   )}
                 </td>
-                <td>{show(result.sag, 'length', units).replace(` ${lu}`, '')}</td>
+                <td>{num(result.sag, 'length', units)}</td>
                 <td>
-                  {show(result.lowestPoint.z, 'length', units).replace(` ${lu}`, '')}
+                  {num(result.lowestPoint.z, 'length', units)}
                   <span className="case-meta">
                     at {show(result.lowestPoint.x, 'length', units, 2)}
                   </span>
                 </td>
                 <td>
-                  {show(result.clearance, 'length', units).replace(` ${lu}`, '')}
+                  {num(result.clearance, 'length', units)}
                   {zones && <span className="case-meta">{zones}</span>}
                 </td>
-                <td>{show(result.swing, 'length', units).replace(` ${lu}`, '')}</td>
+                <td>{num(result.swing, 'length', units)}</td>
               </tr>
             );
           })}
