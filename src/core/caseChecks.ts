@@ -16,7 +16,6 @@ import {
   largestTension,
   minimumAboveLine,
   slopesAt,
-  swingAt,
   tensionAt,
 } from './spanGeometry.ts';
 import type { SpanModel } from './spanModel.ts';
@@ -123,7 +122,7 @@ export function sampleProfile(spans: readonly SolvedSpan[]): CaseProfile {
       profile.z.push(
         span.z0 + span.chordSlope * (x - span.x0) - span.v1[vertex * span.mesh.order] / H,
       );
-      profile.y.push(swingAt(span, H, x));
+      profile.y.push(span.y1[vertex * span.mesh.order] / H);
       profile.tension.push(tensionAt(span, H, Math.min(vertex, ne - 1), vertex === ne ? 1 : -1));
     }
   });

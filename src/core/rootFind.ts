@@ -122,8 +122,8 @@ export function brent(
 
 /**
  * Root of an increasing function that is nearly linear with the given slope near x0 (such as a
- * log quantity against log tension): secant steps until the root is bracketed (steps at most
- * `maxStep`, the search within ±`range` of x0), then Brent. NaN values count as failure.
+ * log quantity against log tension): secant steps (at most `maxStep`, within ±`range` of x0)
+ * until |f| ≤ tolerance or the root is bracketed, then Brent. NaN values count as failure.
  */
 export function solveNearlyLinear(
   f: (x: number) => number,
@@ -142,7 +142,7 @@ export function solveNearlyLinear(
   let b = clampStep(a - fa / slope, a);
   let fb = f(b);
   evaluations++;
-  if (fb === 0) return { x: b, evaluations, converged: true };
+  if (Math.abs(fb) <= tolerance) return { x: b, evaluations, converged: true };
   while (fa * fb > 0 && evaluations < 60) {
     if (!Number.isFinite(fa) || !Number.isFinite(fb)) break;
     if (Math.abs(b - x0) > range) break;
@@ -158,7 +158,7 @@ export function solveNearlyLinear(
     b = c;
     fb = f(b);
     evaluations++;
-    if (fb === 0) return { x: b, evaluations, converged: true };
+    if (Math.abs(fb) <= tolerance) return { x: b, evaluations, converged: true };
   }
   if (!(fa * fb < 0)) return { x: b, evaluations, converged: false };
   const root = brent(f, a, b, tolerance, 200, { fa, fb });

@@ -26,17 +26,25 @@ function deflectionIn(span: SpanModel, H: number, e: number, x: number): number 
 
 /** Wire height z (m) at x. */
 export function heightAt(span: SpanModel, H: number, x: number): number {
-  const e = elementAt(span.mesh, x);
+  return heightIn(span, H, elementAt(span.mesh, x), x);
+}
+
+/** Wire height z (m) at x inside element e. */
+function heightIn(span: SpanModel, H: number, e: number, x: number): number {
   return span.z0 + span.chordSlope * (x - span.x0) - deflectionIn(span, H, e, x);
 }
 
-/** Sideways swing y (m) at x. */
-export function swingAt(span: SpanModel, H: number, x: number): number {
-  const e = elementAt(span.mesh, x);
+/** Sideways swing y (m) at x inside element e. */
+function swingIn(span: SpanModel, H: number, e: number, x: number): number {
   const xa = span.mesh.vertexX[e];
   const xb = span.mesh.vertexX[e + 1];
   const linear = vertexValue(span, span.y1, e) + span.slopeY1[e] * (x - xa);
   return (linear + 0.5 * span.qLateral[e] * (x - xa) * (xb - x)) / H;
+}
+
+/** Sideways swing y (m) at x. */
+export function swingAt(span: SpanModel, H: number, x: number): number {
+  return swingIn(span, H, elementAt(span.mesh, x), x);
 }
 
 /** Slopes z' and y' inside element e at local ξ ∈ [−1, 1]. */
@@ -52,9 +60,11 @@ export function slopesAt(
   return { dz: span.chordSlope - dv, dy };
 }
 
-/** Tension T (N) at element e, local ξ. */
+/** Tension T (N) at element e, local ξ (no allocation: used over every element). */
 export function tensionAt(span: SpanModel, H: number, e: number, xi: number): number {
-  const { dz, dy } = slopesAt(span, H, e, xi);
+  const L = span.elementLength[e];
+  const dz = span.chordSlope - (span.slopeV1[e] - 0.5 * span.qVertical[e] * L * xi) / H;
+  const dy = (span.slopeY1[e] - 0.5 * span.qLateral[e] * L * xi) / H;
   return H * Math.sqrt(1 + dz * dz + dy * dy);
 }
 
@@ -75,27 +85,27 @@ export function minimumAboveLine(
   const b = Math.min(to, span.x1);
   const best: ShapePoint = { x: a, value: Number.POSITIVE_INFINITY };
   if (!(b >= a)) return best;
-  const consider = (x: number) => {
-    const value = heightAt(span, H, x) - (lineZ + lineSlope * (x - lineX));
+  const first = elementAt(span.mesh, a);
+  const last = elementAt(span.mesh, b);
+  const consider = (e: number, x: number) => {
+    const value = heightIn(span, H, e, x) - (lineZ + lineSlope * (x - lineX));
     if (value < best.value) {
       best.value = value;
       best.x = x;
     }
   };
-  consider(a);
-  consider(b);
-  const first = elementAt(span.mesh, a);
-  const last = elementAt(span.mesh, b);
+  consider(first, a);
+  consider(last, b);
   for (let e = first; e <= last; e++) {
     const xa = span.mesh.vertexX[e];
     const L = span.elementLength[e];
-    if (e > first) consider(xa);
+    if (e > first) consider(e, xa);
     const q = span.qVertical[e];
     if (q <= 0) continue;
     // z' = lineSlope  ⇔  v' = c − lineSlope  ⇔  ξ = 2 (m_e − (c − s) H) / (q L)
     const xi = (2 * (span.slopeV1[e] - (span.chordSlope - lineSlope) * H)) / (q * L);
     const x = xa + 0.5 * L * (1 + xi);
-    if (xi > -1 && xi < 1 && x > a && x < b) consider(x);
+    if (xi > -1 && xi < 1 && x > a && x < b) consider(e, x);
   }
   return best;
 }
@@ -103,21 +113,22 @@ export function minimumAboveLine(
 /** Largest sideways swing (m) and where, exact for the element-wise parabolic shape. */
 export function largestSwing(span: SpanModel, H: number): ShapePoint {
   const best: ShapePoint = { x: span.x0, value: 0 };
+  if (!span.lateralLoaded) return best;
+  const consider = (e: number, x: number) => {
+    const y = swingIn(span, H, e, x);
+    if (Math.abs(y) > Math.abs(best.value)) {
+      best.value = y;
+      best.x = x;
+    }
+  };
   for (let e = 0; e < span.elementLength.length; e++) {
     const L = span.elementLength[e];
     const p = span.qLateral[e];
     const xa = span.mesh.vertexX[e];
-    const candidates = [xa];
+    consider(e, xa);
     if (p > 0) {
       const xi = (2 * span.slopeY1[e]) / (p * L);
-      if (xi > -1 && xi < 1) candidates.push(xa + 0.5 * L * (1 + xi));
-    }
-    for (const x of candidates) {
-      const y = swingAt(span, H, x);
-      if (Math.abs(y) > Math.abs(best.value)) {
-        best.value = y;
-        best.x = x;
-      }
+      if (xi > -1 && xi < 1) consider(e, xa + 0.5 * L * (1 + xi));
     }
   }
   return best;
