@@ -153,6 +153,14 @@ test('an invalid value shows the rule beside the field and keeps the last result
   await expect(wind).toHaveValue('-3');
   await expectPlotMatches(page, results);
 
+  // Refused text follows a unit switch: -3 m/s / 0.44704 (m/s per mph, NIST SP 811) = -6.71081 mph
+  await page.getByRole('radio', { name: 'Imperial' }).check();
+  const windMph = page.getByLabel('Hot summer wind speed (mph)');
+  await expect(windMph).toHaveValue('-6.71081');
+  await expect(page.getByRole('alert').filter({ hasText: 'must be at least 0 mph' })).toBeVisible();
+  await page.getByRole('radio', { name: 'Metric (SI)' }).check();
+  await expect(wind).toHaveValue('-3');
+
   await position.fill('22');
   await wind.fill('5');
   await expect(page.getByRole('status')).toHaveText('Up to date.');

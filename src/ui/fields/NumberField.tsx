@@ -53,10 +53,23 @@ export function NumberField({
   }, [value, message]);
   useEffect(() => () => setInvalid(path, null), [path, setInvalid]);
 
+  // Switching units converts refused text too, so it keeps meaning what the person typed.
+  const shownUnits = useRef(units);
+  const refusedSi = useRef<number | undefined>(undefined);
+  useEffect(() => {
+    const before = shownUnits.current;
+    shownUnits.current = units;
+    const typedSi = refusedSi.current;
+    if (before === units || draft === null || message === null || typedSi === undefined) return;
+    change(fieldText(typedSi, quantity, units));
+    refusedSi.current = typedSi; // the value as first typed, not its rounded display
+  });
+
   function change(text: string) {
     setDraft(text);
     const shown = parseNumber(text);
     const si = shown === undefined ? undefined : toSi(shown, quantity, units);
+    refusedSi.current = si;
     let reason: string | null;
     if (si === undefined) reason = 'must be a number';
     else if (si === value) reason = null;

@@ -1,0 +1,108 @@
+/**
+ * Document edits and the edit check the input fields use: an edit is applied to a copy, the
+ * copy goes through the core's validator, and only a valid copy reaches the store. Rules
+ * quoted in refusals are the core validator's (src/core/validateProject.ts); unit bounds are
+ * converted with the NIST SP 811 exact factors (1 mph = 0.44704 m/s, 1 ft = 0.3048 m).
+ */
+import { describe, expect, it, vi } from 'vitest';
+import { validateProject } from '../src/core/index.ts';
+import { demoProject } from '../src/state/demoProject.ts';
+import * as edits from '../src/state/projectEdits.ts';
+
+async function fresh() {
+  vi.resetModules();
+  const store = await import('../src/state/projectStore.ts');
+  const check = await import('../src/ui/fields/useDocumentEdit.ts');
+  return { ...store, ...check };
+}
+
+describe('document edits keep the project valid and immutable', () => {
+  it('duplicating a case gives it a free name and leaves the original untouched', () => {
+    const before = structuredClone(demoProject);
+    const after = edits.duplicateCase(0)(demoProject);
+    expect(after.cases.map((c) => c.name)).toEqual([
+      'Hot summer',
+      'Hot summer (2)',
+      'Cold, iced, windy',
+      'Winter storm',
+    ]);
+    expect(validateProject(after).ok).toBe(true);
+    expect(demoProject).toEqual(before);
+  });
+
+  it('renaming or deleting the case a target is stated in keeps the target consistent', () => {
+    const stated = edits.setTarget({ maxTension: 1000, case: 'Cold, iced, windy' })(demoProject);
+    const renamed = edits.patchCase(1, { name: 'Ice storm' })(stated);
+    expect(renamed.installation.target.case).toBe('Ice storm');
+    expect(validateProject(renamed).ok).toBe(true);
+    const removed = edits.removeCase(1)(renamed);
+    expect('case' in removed.installation.target).toBe(false);
+    expect(validateProject(removed).ok).toBe(true);
+  });
+
+  it('added items are valid at once', () => {
+    let project = demoProject;
+    for (const edit of [
+      edits.addCase(),
+      edits.addCase(),
+      edits.addLoad('point'),
+      edits.addLoad('uniform'),
+      edits.addZone(),
+      edits.addSupport(),
+    ])
+      project = edit(project);
+    const checked = validateProject(project);
+    expect(checked.ok ? [] : checked.issues).toEqual([]);
+    expect(project.cases.map((c) => c.name).slice(-2)).toEqual(['New case', 'New case (2)']);
+  });
+});
+
+describe('tryEdit', () => {
+  it('commits a valid edit as one undoable step', async () => {
+    const { tryEdit, useProjectStore, undo } = await fresh();
+    expect(tryEdit('supports[1].x', edits.patchSupport(1, { x: 24 }), 'length', 'si')).toBeNull();
+    expect(useProjectStore.getState().project.supports[1].x).toBe(24);
+    undo();
+    expect(useProjectStore.getState().project.supports[1].x).toBe(22);
+  });
+
+  it('refuses an out-of-range value with the rule in the display unit and leaves the document', async () => {
+    const { tryEdit, useProjectStore } = await fresh();
+    const before = useProjectStore.getState().project;
+    const reason = tryEdit(
+      'cases[0].windSpeed',
+      edits.patchCase(0, { windSpeed: -1 }),
+      'speed',
+      'imperial',
+    );
+    expect(reason).toBe('must be at least 0 mph');
+    expect(useProjectStore.getState().project).toBe(before);
+  });
+
+  it('names the other field an edit would break', async () => {
+    const { tryEdit, useProjectStore } = await fresh();
+    const before = useProjectStore.getState().project;
+    // Shortening the span to 10 m leaves the 11 m lantern and the 21.5 m cable end outside it.
+    const reason = tryEdit('supports[1].x', edits.patchSupport(1, { x: 10 }), 'length', 'si');
+    expect(reason).toMatch(/^this would make loads\[\d\]\.\w+ invalid: it must be at most 10$/);
+    expect(useProjectStore.getState().project).toBe(before);
+  });
+
+  it('states the support-order rule at the field being typed', async () => {
+    const { tryEdit } = await fresh();
+    const reason = tryEdit('supports[1].x', edits.patchSupport(1, { x: -2 }), 'length', 'si');
+    expect(reason).toContain('must be greater than the previous support x');
+  });
+});
+
+describe('localiseRule', () => {
+  it('converts SI bounds to the display unit and leaves other text alone', async () => {
+    const { localiseRule } = await fresh();
+    expect(localiseRule('must be at most 0.2', 'diameter', 'si')).toBe('must be at most 200 mm');
+    // 100 m / 0.3048 = 328.084 ft
+    expect(localiseRule('must be at most 100', 'length', 'imperial')).toBe(
+      'must be at most 328.084 ft',
+    );
+    expect(localiseRule('must be a whole number', 'count', 'si')).toBe('must be a whole number');
+  });
+});
