@@ -67,6 +67,18 @@ export function resultsTable(title: string, results: ProjectResults): string {
   }
   lines.push(
     '',
+    `Set-up chart — tension and sag to set on the day (span ${results.setUpSpan + 1}, installation loads, still air):`,
+  );
+  const setUp = results.setUpChart.map((r) => [
+    `${n(r.temperature, 0)} °C`,
+    n(r.horizontalTension, 0),
+    n(r.maxTension, 0),
+    n(r.sag, 3),
+    n(r.returnTime, 2),
+  ]);
+  lines.push(pad([['Temperature', 'H (N)', 'T max (N)', 'Sag (m)', 'Pulse return (s)'], ...setUp]));
+  lines.push(
+    '',
     `Governing: tension in "${results.governing.tension}", clearance in "${results.governing.clearance}".`,
   );
   return lines.join('\n');

@@ -76,6 +76,11 @@ function spanResult({ span, tensionN }: SolvedSpan): SpanResult {
   return { horizontalTension: tensionN, sag: -sag.value, lowestPoint: { x: low.x, z: low.value } };
 }
 
+/** Sag of one solved span, m. */
+export function largestSpanSag(span: SolvedSpan): number {
+  return spanResult(span).sag;
+}
+
 /** Largest sag over the spans of a solved state, m. */
 export function largestSag(spans: readonly SolvedSpan[]): number {
   return Math.max(...spans.map((s) => spanResult(s).sag));

@@ -215,8 +215,24 @@ export interface Governing {
   clearance: string;
 }
 
+/** One row of the set-up chart: what the wire shows when tensioned at this temperature. */
+export interface SetUpRow {
+  temperature: number;
+  solved: boolean;
+  horizontalTension: number;
+  maxTension: number;
+  /** Sag of the reference span (the sag target's span, else the longest), m. */
+  sag: number;
+  /** Time for a pulse to run to the far fixing and back once, s. */
+  returnTime: number;
+}
+
 export interface ProjectResults {
   unstressedLength: number;
   cases: CaseResult[];
   governing: Governing;
+  /** What to set on the day at other temperatures (installation loads, cut length fixed). */
+  setUpChart: SetUpRow[];
+  /** The span whose sag the set-up chart lists (0-based). */
+  setUpSpan: number;
 }

@@ -6,10 +6,11 @@
  */
 
 import { checkCase, largestSag, largestStateTension } from './caseChecks.ts';
-import { findInstallationTension } from './installation.ts';
+import { findInstallationTension, targetSpanIndex } from './installation.ts';
 import { loadStateOfCase } from './loads.ts';
 import type { CaseResult, Project, ProjectResults } from './project.ts';
 import { buildProjectModel, type ProjectModel } from './projectModel.ts';
+import { setUpChart } from './setUpChart.ts';
 import { type StateSolution, solveChangeOfState, solveInstallation } from './states.ts';
 
 interface StateSummary {
@@ -107,9 +108,12 @@ export function solveProject(project: Project): ProjectResults {
   results.forEach((r, i) => {
     r.discretisationError = relativeChange(r, coarse[i]);
   });
+  const setUpSpan = targetSpanIndex(model, project.installation.target);
   return {
     unstressedLength: unstressed.reduce((a, b) => a + b, 0),
     cases: results,
     governing: governing(project, results),
+    setUpChart: setUpChart(model, unstressed, setUpSpan, target.tensionN),
+    setUpSpan,
   };
 }
