@@ -12,16 +12,28 @@ export interface ShapePoint {
   value: number;
 }
 
-function vertexValue(span: SpanModel, values: Float64Array, vertex: number): number {
-  return values[vertex * span.mesh.order];
+/**
+ * The element-wise parabola of a unit-tension solution u₁ (v₁ or y₁) with element chord slopes
+ * m and loads q, at x inside element e, divided by H: [u₁ₐ + m (x − xₐ) + q (x − xₐ)(x_b − x)/2]/H.
+ */
+function parabolaIn(
+  span: SpanModel,
+  unit: Float64Array,
+  slopes: Float64Array,
+  loads: Float64Array,
+  H: number,
+  e: number,
+  x: number,
+): number {
+  const xa = span.mesh.vertexX[e];
+  const xb = span.mesh.vertexX[e + 1];
+  const linear = unit[e * span.mesh.order] + slopes[e] * (x - xa);
+  return (linear + 0.5 * loads[e] * (x - xa) * (xb - x)) / H;
 }
 
 /** Deflection below the chord, v (m), inside element e at x. */
 function deflectionIn(span: SpanModel, H: number, e: number, x: number): number {
-  const xa = span.mesh.vertexX[e];
-  const xb = span.mesh.vertexX[e + 1];
-  const linear = vertexValue(span, span.v1, e) + span.slopeV1[e] * (x - xa);
-  return (linear + 0.5 * span.qVertical[e] * (x - xa) * (xb - x)) / H;
+  return parabolaIn(span, span.v1, span.slopeV1, span.qVertical, H, e, x);
 }
 
 /** Wire height z (m) at x. */
@@ -36,10 +48,7 @@ function heightIn(span: SpanModel, H: number, e: number, x: number): number {
 
 /** Sideways swing y (m) at x inside element e. */
 function swingIn(span: SpanModel, H: number, e: number, x: number): number {
-  const xa = span.mesh.vertexX[e];
-  const xb = span.mesh.vertexX[e + 1];
-  const linear = vertexValue(span, span.y1, e) + span.slopeY1[e] * (x - xa);
-  return (linear + 0.5 * span.qLateral[e] * (x - xa) * (xb - x)) / H;
+  return parabolaIn(span, span.y1, span.slopeY1, span.qLateral, H, e, x);
 }
 
 /** Sideways swing y (m) at x. */
