@@ -68,7 +68,9 @@ describe('npm run solve (src/cli/main.ts)', () => {
     () => {
       const run = solveCli('tests/fixtures/zero-span.json');
       expect(run.status).toBe(2);
-      expect(run.stderr).toMatch(/supports\[1\]\.x: must be greater than the previous support x/);
+      expect(run.stderr).toMatch(
+        /supports\[1\]\.x: must be further along the span than the previous support/,
+      );
       expect(run.stdout).toBe('');
     },
     TIMEOUT_MS,

@@ -91,7 +91,7 @@ describe('tryEdit', () => {
   it('states the support-order rule at the field being typed', async () => {
     const { tryEdit } = await fresh();
     const reason = tryEdit('supports[1].x', edits.patchSupport(1, { x: -2 }), 'length', 'si');
-    expect(reason).toContain('must be greater than the previous support x');
+    expect(reason).toContain('must be further along the span than the previous support');
   });
 });
 

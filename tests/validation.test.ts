@@ -59,8 +59,18 @@ function set(path: string, value: unknown, custom = false): (doc: Doc) => void {
 
 /** [what, edit, exact field path, a key word of the rule]. */
 const BAD_FILES: [string, (doc: Doc) => void, string, RegExp][] = [
-  ['zero span', set('supports[1].x', 0), 'supports[1].x', /greater than the previous/],
-  ['negative span', set('supports[1].x', -5), 'supports[1].x', /greater than the previous/],
+  [
+    'zero span',
+    set('supports[1].x', 0),
+    'supports[1].x',
+    /further along the span than the previous support/,
+  ],
+  [
+    'negative span',
+    set('supports[1].x', -5),
+    'supports[1].x',
+    /further along the span than the previous support/,
+  ],
   ['one support', (d) => d.supports.pop(), 'supports', /at least 2/],
   ['zero EA', set('wire.axialStiffness', 0, true), 'wire.axialStiffness', /greater than 0/],
   ['negative EA', set('wire.axialStiffness', -1e6, true), 'wire.axialStiffness', /greater than 0/],

@@ -55,7 +55,7 @@ function checkSupports(c: FieldChecker, raw: unknown): { x: number }[] {
       if (xs.length > 0 && x <= xs[xs.length - 1].x)
         c.fail(
           `${path}.x`,
-          'must be greater than the previous support x (supports in order along the span)',
+          'must be further along the span than the previous support (x increasing)',
         );
       xs.push({ x });
     }
@@ -73,7 +73,10 @@ function checkGround(c: FieldChecker, raw: unknown): void {
     const x = c.number(g.x, `ground[${i}].x`);
     c.number(g.z, `ground[${i}].z`, -1000, 10000);
     if (x !== undefined && x <= previous)
-      c.fail(`ground[${i}].x`, 'must be greater than the previous ground point x');
+      c.fail(
+        `ground[${i}].x`,
+        'must be further along the span than the previous ground point (x increasing)',
+      );
     if (x !== undefined) previous = x;
   });
 }
