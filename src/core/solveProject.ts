@@ -45,15 +45,16 @@ function solveStates<T>(
   model: ProjectModel,
   tensionN: number,
   finish: (name: string, temperature: number, state: StateSolution) => T,
+  caseTensionGuesses?: readonly number[],
 ): { results: T[]; unstressed: number[] } {
   const installed = solveInstallation(model, tensionN);
   const results = [finish(model.installation.name, model.installation.temperature, installed)];
-  for (const weather of model.project.cases) {
+  for (const [i, weather] of model.project.cases.entries()) {
     const state = solveChangeOfState(
       model,
       { ...loadStateOfCase(weather), name: weather.name },
       installed.unstressed,
-      tensionN,
+      caseTensionGuesses?.[i] ?? tensionN,
     );
     results.push(finish(weather.name, weather.temperature, state));
   }
@@ -104,7 +105,8 @@ export function solveProject(project: Project): ProjectResults {
   }
   const coarseCount = Math.max(2, Math.round(model.settings.elementsPerSpan / 2));
   const coarseModel = buildProjectModel(project, coarseCount);
-  const coarse = solveStates(coarseModel, target.tensionN, summarise).results;
+  const fineTensions = results.slice(1).map((r) => r.horizontalTension);
+  const coarse = solveStates(coarseModel, target.tensionN, summarise, fineTensions).results;
   results.forEach((r, i) => {
     r.discretisationError = relativeChange(r, coarse[i]);
   });
