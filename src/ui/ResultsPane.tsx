@@ -1,7 +1,8 @@
 /**
  * The output side: status (solving, out of date, refused input), the summary line, the sag
- * plot, the results and fixing tables, and the solver details. The last good results stay on
- * screen when the document changes or cannot be solved, marked out of date.
+ * plot, the results table, what to set on the day, the fixing loads and the solver details.
+ * The last good results stay on screen when the document changes or cannot be solved, marked
+ * out of date.
  */
 import { useDraftStore } from '../state/draftStore.ts';
 import { useProjectStore } from '../state/projectStore.ts';
@@ -9,6 +10,7 @@ import { useResultsStore } from '../state/resultsStore.ts';
 import { useUiStore } from '../state/uiStore.ts';
 import { ReactionsTable } from './results/ReactionsTable.tsx';
 import { ResultsTable } from './results/ResultsTable.tsx';
+import { SetUpChart } from './results/SetUpChart.tsx';
 import { SolverDetails } from './results/SolverDetails.tsx';
 import { summaryText } from './results/summaryText.ts';
 import { SagPlot } from './SagPlot.tsx';
@@ -64,6 +66,7 @@ export function ResultsPane() {
           </p>
           <SagPlot project={resultsProject} results={results} />
           <ResultsTable results={results} />
+          <SetUpChart project={resultsProject} results={results} />
           <ReactionsTable results={results} />
           <SolverDetails results={results} />
         </div>

@@ -1,0 +1,74 @@
+/**
+ * The words and table of the set-up chart ("Setting the wire on the day"), shared by the
+ * workbench and the PDF report: which span's sag it lists, the one-line explanation, the pulse
+ * check, and the report's table. Values are SI in the results, shown in the chosen units.
+ */
+import type { Project, ProjectResults, SetUpRow } from '../core/index.ts';
+import { formatQuantity as fq, toDisplay, type UnitSystem } from './displayUnits.ts';
+import type { Table } from './reportContent.ts';
+
+export const SET_UP_HEADING = 'Setting the wire on the day';
+
+/** A fixing's name as the person gave it, else its number from 1. */
+export function fixingName(project: Project, index: number): string {
+  return project.supports[index]?.label?.trim() || `Fixing ${index + 1}`;
+}
+
+/** The span by its two fixings, e.g. "Kitchen wall bracket – Studio wall bracket". */
+export function spanName(project: Project, spanIndex: number): string {
+  return `${fixingName(project, spanIndex)} – ${fixingName(project, spanIndex + 1)}`;
+}
+
+/** Whole degrees unless the temperature has a fraction in the units shown (59.9°F). */
+export function temperatureText(units: UnitSystem, celsius: number): string {
+  const shown = toDisplay(units, 'temperature', celsius);
+  return fq(units, 'temperature', celsius, Math.abs(shown - Math.round(shown)) < 1e-9 ? 0 : 1);
+}
+
+export function isInstallationRow(project: Project, row: SetUpRow): boolean {
+  return row.temperature === project.installation.temperature;
+}
+
+/** Why the chart exists and how to use it, given the cut length and temperature as shown. */
+export function setUpExplanation(cutLength: string, installationTemperature: string): string {
+  return (
+    `The design fixes the wire's cut length: ${cutLength} unstressed at ` +
+    `${installationTemperature}. On a warmer or colder day, tension the wire to the sag or ` +
+    "tension on that day's row, not to the design day's values; it then behaves as designed in " +
+    'every case.'
+  );
+}
+
+/** The field check by pulse return time, for the span the chart lists. */
+export function pulseCheck(span: string): string {
+  return (
+    `Pulse check: flick the wire near a fixing of ${span} and time the wave's first return to ` +
+    'that fixing; it takes about the time in the last column (a rough check: it follows the ' +
+    'sag alone).'
+  );
+}
+
+/** The set-up chart as a report table: temperature, H, largest tension, sag, pulse return. */
+export function setUpTable(project: Project, results: ProjectResults, units: UnitSystem): Table {
+  return {
+    head: [
+      'Temperature',
+      'Horizontal tension',
+      'Largest tension',
+      `Sag, ${spanName(project, results.setUpSpan)}`,
+      'Pulse return',
+    ],
+    rows: results.setUpChart.map((row) => {
+      const temperature = temperatureText(units, row.temperature);
+      const first = isInstallationRow(project, row) ? `${temperature} (installation)` : temperature;
+      if (!row.solved) return [first, 'not solved', '-', '-', '-'];
+      return [
+        first,
+        fq(units, 'force', row.horizontalTension),
+        fq(units, 'force', row.maxTension),
+        fq(units, 'length', row.sag),
+        `${row.returnTime.toFixed(2)} s`,
+      ];
+    }),
+  };
+}

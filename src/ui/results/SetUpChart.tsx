@@ -1,0 +1,101 @@
+/**
+ * "Setting the wire on the day": for a range of temperatures, the horizontal tension, largest
+ * tension, sag of the listed span and pulse return time that give the design's cut length. The
+ * installation temperature's row is marked in words and tinted.
+ */
+import { useId } from 'react';
+import type { Project, ProjectResults, SetUpRow } from '../../core/index.ts';
+import { fromSi, type UnitSystem, unitSymbol } from '../../core/units.ts';
+import {
+  isInstallationRow,
+  pulseCheck,
+  SET_UP_HEADING,
+  setUpExplanation,
+  spanName,
+} from '../../deliverables/setUpContent.ts';
+import { useUiStore } from '../../state/uiStore.ts';
+import { num, show } from '../format.ts';
+import './setUpChart.css';
+
+/** Whole degrees unless the temperature has a fraction in the units shown (59.9 °F). */
+function temperatureText(celsius: number, units: UnitSystem): string {
+  const shown = fromSi(celsius, 'temperature', units);
+  const whole = Math.abs(shown - Math.round(shown)) < 1e-9;
+  return show(celsius, 'temperature', units, whole ? 0 : 1);
+}
+
+function Row({ row, installation, units }: RowProps) {
+  const temperature = (
+    <th scope="row">
+      {temperatureText(row.temperature, units)}
+      {installation && <span className="badge">installation temperature</span>}
+    </th>
+  );
+  if (!row.solved)
+    return (
+      <tr>
+        {temperature}
+        <td colSpan={4}>Not solved at this temperature.</td>
+      </tr>
+    );
+  return (
+    <tr className={installation ? 'setup-installation' : undefined}>
+      {temperature}
+      <td>{num(row.horizontalTension, 'force', units)}</td>
+      <td>{num(row.maxTension, 'force', units)}</td>
+      <td>{num(row.sag, 'length', units)}</td>
+      <td>{row.returnTime.toFixed(2)}</td>
+    </tr>
+  );
+}
+
+interface RowProps {
+  row: SetUpRow;
+  installation: boolean;
+  units: UnitSystem;
+}
+
+export function SetUpChart({ project, results }: { project: Project; results: ProjectResults }) {
+  const units = useUiStore((s) => s.unitSystem);
+  const headingId = useId();
+  const lu = unitSymbol('length', units);
+  const fu = unitSymbol('force', units);
+  const span = spanName(project, results.setUpSpan);
+  return (
+    <section className="setup-chart" aria-labelledby={headingId}>
+      <h2 id={headingId}>{SET_UP_HEADING}</h2>
+      <p className="setup-note">
+        {setUpExplanation(
+          show(results.unstressedLength, 'length', units),
+          temperatureText(project.installation.temperature, units),
+        )}
+      </p>
+      <div className="table-scroll">
+        <table className="results setup-table" aria-labelledby={headingId}>
+          <thead>
+            <tr>
+              <th scope="col">Temperature</th>
+              <th scope="col">Horizontal tension ({fu})</th>
+              <th scope="col">Largest tension ({fu})</th>
+              <th scope="col">
+                Sag ({lu})<span className="case-meta">{span}</span>
+              </th>
+              <th scope="col">Pulse return (s)</th>
+            </tr>
+          </thead>
+          <tbody>
+            {results.setUpChart.map((row) => (
+              <Row
+                key={row.temperature}
+                row={row}
+                installation={isInstallationRow(project, row)}
+                units={units}
+              />
+            ))}
+          </tbody>
+        </table>
+      </div>
+      <p className="setup-note muted">{pulseCheck(span)}</p>
+    </section>
+  );
+}
