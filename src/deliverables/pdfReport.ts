@@ -1,12 +1,12 @@
 /**
  * The client report as a PDF: page 1 carries the title, date, client and site block, the
  * summary line, key numbers, the sag plot (vector, selectable text) and the case table; then
- * the inputs, fixing loads, method and cautions. jsPDF and svg2pdf.js load only when a report
+ * what to set on the day at other temperatures, the inputs, fixing loads, method and cautions. jsPDF and svg2pdf.js load only when a report
  * is asked for.
  */
 import type { jsPDF } from 'jspdf';
 import { CAUTION_SUMMARY, CAUTIONS, type Project, type ProjectResults } from '../core/index.ts';
-import type { UnitSystem } from './displayUnits.ts';
+import { formatQuantity as fq, type UnitSystem } from './displayUnits.ts';
 import { ACCENT, MUTED, PdfWriter, pdfText, RULE } from './pdfWriter.ts';
 import {
   caseMessages,
@@ -19,6 +19,15 @@ import {
   supportTable,
   wireLines,
 } from './reportContent.ts';
+import {
+  isInstallationRow,
+  pulseCheck,
+  SET_UP_HEADING,
+  setUpExplanation,
+  setUpTable,
+  spanName,
+  temperatureText,
+} from './setUpContent.ts';
 
 export type PaperSize = 'a4' | 'letter';
 
@@ -43,6 +52,7 @@ export interface ReportOptions {
 
 const PASS = [26, 122, 62] as const;
 const FAIL = [178, 34, 34] as const;
+const INSTALLATION_FILL = [227, 238, 248] as const;
 
 function header(w: PdfWriter, project: Project, options: ReportOptions): void {
   const { doc } = w;
@@ -168,13 +178,41 @@ function resultsSection(
       weight,
       align: i === 0 ? 'left' : 'right',
     })),
-    (row, col) => (col === verdictColumn ? (results.cases[row].ok ? PASS : FAIL) : undefined),
+    {
+      cellColour: (row, col) =>
+        col === verdictColumn ? (results.cases[row].ok ? PASS : FAIL) : undefined,
+    },
   );
   for (const message of caseMessages(results)) w.paragraph(message, 8);
   w.paragraph(
     'H: horizontal tension. Largest T: largest wire tension. Use: largest tension as a share of the working limit (minimum breaking load divided by the safety factor). Clearance: least height of the wire above the ground line. Swing: sideways movement in wind.',
     7.5,
   );
+}
+
+function setUpSection(
+  w: PdfWriter,
+  project: Project,
+  results: ProjectResults,
+  units: UnitSystem,
+): void {
+  w.heading(SET_UP_HEADING);
+  w.paragraph(
+    setUpExplanation(
+      fq(units, 'length', results.unstressedLength),
+      temperatureText(units, project.installation.temperature),
+    ),
+    8.5,
+  );
+  w.table(
+    setUpTable(project, results, units),
+    [1.5, 1.2, 1.2, 2.2, 1].map((weight, i) => ({ weight, align: i === 0 ? 'left' : 'right' })),
+    {
+      rowFill: (row) =>
+        isInstallationRow(project, results.setUpChart[row]) ? INSTALLATION_FILL : undefined,
+    },
+  );
+  w.paragraph(pulseCheck(spanName(project, results.setUpSpan)), 7.5);
 }
 
 function inputsSection(
@@ -249,6 +287,7 @@ export async function buildPdfReport(
   resultsSection(w, project, results, options.unitSystem);
   doc.addPage();
   w.y = w.margin;
+  setUpSection(w, project, results, options.unitSystem);
   inputsSection(w, project, results, options.unitSystem);
   closingSections(w, project, results, options);
   w.footers(`Sagwright report - ${project.title}`, `Caution: ${CAUTION_SUMMARY}`);

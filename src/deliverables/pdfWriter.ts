@@ -28,6 +28,13 @@ export interface ColumnSpec {
   align?: 'left' | 'right';
 }
 
+export interface TableStyle {
+  /** Text colour (drawn bold) of a body cell, e.g. PASS and FAIL. */
+  cellColour?: (row: number, col: number) => readonly number[] | undefined;
+  /** Background of a whole body row (its text bold), e.g. the installation temperature. */
+  rowFill?: (row: number) => readonly number[] | undefined;
+}
+
 export class PdfWriter {
   y: number;
   readonly left: number;
@@ -85,42 +92,52 @@ export class PdfWriter {
     this.y += 1.6;
   }
 
-  table(
-    table: Table,
-    columns: ColumnSpec[],
-    cellColour?: (row: number, col: number) => readonly number[] | undefined,
-  ): void {
+  table(table: Table, columns: ColumnSpec[], style: TableStyle = {}): void {
     const total = columns.reduce((sum, c) => sum + c.weight, 0);
     const widths = columns.map((c) => (c.weight / total) * this.width);
-    const drawRow = (cells: string[], header: boolean, rowIndex: number) => {
-      this.font(header ? 7.5 : 8, header ? 'bold' : 'normal', header ? MUTED : INK);
-      const wrapped = cells.map((cell, i) => this.lines(cell, widths[i] - 2.4));
-      const height = Math.max(...wrapped.map((w) => w.length)) * 3.4 + 2.4;
-      this.ensure(height + (header ? 8 : 0));
-      let x = this.left;
-      wrapped.forEach((cellLines, i) => {
-        const colour = header ? undefined : cellColour?.(rowIndex, i);
-        this.font(
-          header ? 7.5 : 8,
-          header || colour ? 'bold' : 'normal',
-          colour ?? (header ? MUTED : INK),
-        );
-        const right = columns[i].align === 'right';
-        const tx = right ? x + widths[i] - 1.2 : x + 1.2;
-        cellLines.forEach((line, k) => {
-          this.doc.text(line, tx, this.y + 3.6 + k * 3.4, { align: right ? 'right' : 'left' });
-        });
-        x += widths[i];
-      });
-      this.y += height;
-      const rule = header ? INK : RULE;
-      this.doc.setDrawColor(rule[0], rule[1], rule[2]);
-      this.doc.setLineWidth(header ? 0.3 : 0.15);
-      this.doc.line(this.left, this.y, this.left + this.width, this.y);
-    };
-    drawRow(table.head, true, -1);
-    for (const [i, row] of table.rows.entries()) drawRow(row, false, i);
+    this.tableRow(table.head, columns, widths, -1, style);
+    for (const [i, row] of table.rows.entries()) this.tableRow(row, columns, widths, i, style);
     this.y += 4;
+  }
+
+  /** One table row; rowIndex −1 is the header row. */
+  private tableRow(
+    cells: string[],
+    columns: ColumnSpec[],
+    widths: number[],
+    rowIndex: number,
+    style: TableStyle,
+  ): void {
+    const header = rowIndex < 0;
+    const fill = header ? undefined : style.rowFill?.(rowIndex);
+    this.font(header ? 7.5 : 8, header || fill ? 'bold' : 'normal');
+    const wrapped = cells.map((cell, i) => this.lines(cell, widths[i] - 2.4));
+    const height = Math.max(...wrapped.map((w) => w.length)) * 3.4 + 2.4;
+    this.ensure(height + (header ? 8 : 0));
+    if (fill) {
+      this.doc.setFillColor(fill[0], fill[1], fill[2]);
+      this.doc.rect(this.left, this.y, this.width, height, 'F');
+    }
+    let x = this.left;
+    wrapped.forEach((cellLines, i) => {
+      const colour = header ? undefined : style.cellColour?.(rowIndex, i);
+      this.font(
+        header ? 7.5 : 8,
+        header || colour || fill ? 'bold' : 'normal',
+        colour ?? (header ? MUTED : INK),
+      );
+      const right = columns[i].align === 'right';
+      const tx = right ? x + widths[i] - 1.2 : x + 1.2;
+      cellLines.forEach((line, k) => {
+        this.doc.text(line, tx, this.y + 3.6 + k * 3.4, { align: right ? 'right' : 'left' });
+      });
+      x += widths[i];
+    });
+    this.y += height;
+    const rule = header ? INK : RULE;
+    this.doc.setDrawColor(rule[0], rule[1], rule[2]);
+    this.doc.setLineWidth(header ? 0.3 : 0.15);
+    this.doc.line(this.left, this.y, this.left + this.width, this.y);
   }
 
   /** Footer on every page: the caution line, the report name and "Page i of n". */
