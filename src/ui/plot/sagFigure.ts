@@ -2,7 +2,8 @@
  * The sag plot as a pure Plotly figure spec (no DOM), so the workbench and exports draw the
  * same thing: each case's wire (solid) with its closed-form parabola (dashed), the ground
  * filled, clearance zones shaded at their required heights, supports, the lowest point and the
- * largest sag annotated. Values are converted to the chosen display units.
+ * largest sag annotated. Values are converted to the chosen display units. The plan view
+ * (options.view 'plan', planFigure.ts) shows the sideways swing in wind instead.
  */
 import type { Annotation, Data, Layout } from 'plotly.js';
 import type { CaseResult, Project, ProjectResults } from '../../core/index.ts';
@@ -10,11 +11,17 @@ import { fromSi, type UnitSystem, unitSymbol } from '../../core/units.ts';
 import { caseColour } from './colours.ts';
 import { groundHeightAt, groundTraces, supportTrace, zoneTraces } from './figureParts.ts';
 import { largestDifference, parabolaHeights } from './parabola.ts';
+import { planLayout, planTraces } from './planFigure.ts';
+
+/** Side view: height against distance. Plan view: sideways swing against distance. */
+export type PlotView = 'side' | 'plan';
 
 export interface SagFigureOptions {
   equalAspect?: boolean;
   /** Draw the dashed closed-form parabola beside each case (default true). */
   showParabola?: boolean;
+  /** Which view to draw (default 'side'). */
+  view?: PlotView;
 }
 
 export interface ParabolaComparison {
@@ -118,6 +125,12 @@ export function buildSagFigure(
   unitSystem: UnitSystem,
   options: SagFigureOptions = {},
 ): SagFigure {
+  if (options.view === 'plan')
+    return {
+      data: planTraces(project, results, unitSystem),
+      layout: planLayout(results, unitSystem, options.equalAspect === true),
+      parabola: null,
+    };
   const lu = unitSymbol('length', unitSystem);
   const data: Data[] = [...groundTraces(project, unitSystem), ...zoneTraces(project, unitSystem)];
   let parabola: ParabolaComparison | null = null;
