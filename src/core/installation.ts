@@ -94,10 +94,14 @@ export function findInstallationTension(
   // In logarithms the quantity is nearly linear with slope ±1 (sag ∝ 1/H, tension ∝ H).
   const sign = target.sag === undefined ? 1 : -1;
   const f = (lnH: number) => {
-    const q = measure(model, target, stateFor(model, target, Math.exp(lnH)));
+    const state = stateFor(model, target, Math.exp(lnH));
+    if (!state.solved) return Number.NaN;
+    const q = measure(model, target, state);
     return q > 0 && Number.isFinite(q) ? sign * (Math.log(q) - Math.log(value)) : Number.NaN;
   };
-  const start = Math.log(initialGuess(model, target, value));
+  // A parabola estimate can be too slack for a deep catenary: tighten until the state solves.
+  let start = Math.log(initialGuess(model, target, value));
+  for (let k = 0; k < 8 && !Number.isFinite(f(start)); k++) start += Math.LN2;
   const root = solveNearlyLinear(f, start, 1);
   if (root.converged)
     return { tensionN: Math.exp(root.x), evaluations: root.evaluations, ok: true };

@@ -133,18 +133,26 @@ export function solveNearlyLinear(
   maxStep = 3,
   range = 25,
 ): RootResult {
+  let evaluations = 0;
+  // Evaluate at `to`; where f has no value there (NaN), back off halfway towards `from`.
+  const toward = (from: number, to: number): { x: number; value: number } => {
+    let x = to;
+    for (let k = 0; k < 8; k++, x = from + (x - from) / 2) {
+      const value = f(x);
+      evaluations++;
+      if (Number.isFinite(value)) return { x, value };
+    }
+    return { x, value: Number.NaN };
+  };
   let a = x0;
   let fa = f(a);
-  let evaluations = 1;
+  evaluations++;
+  if (!Number.isFinite(fa)) return { x: a, evaluations, converged: false };
   if (fa === 0) return { x: a, evaluations, converged: true };
   const clampStep = (x: number, from: number) =>
     from + Math.max(-maxStep, Math.min(maxStep, x - from));
-  let b = clampStep(a - fa / slope, a);
-  let fb = f(b);
-  evaluations++;
-  if (Math.abs(fb) <= tolerance) return { x: b, evaluations, converged: true };
-  while (fa * fb > 0 && evaluations < 60) {
-    if (!Number.isFinite(fa) || !Number.isFinite(fb)) break;
+  let { x: b, value: fb } = toward(a, clampStep(a - fa / slope, a));
+  while (Number.isFinite(fb) && Math.abs(fb) > tolerance && fa * fb > 0 && evaluations < 60) {
     if (Math.abs(b - x0) > range) break;
     const secant = b - (fb * (b - a)) / (fb - fa);
     const progress = Math.abs(fb) < Math.abs(fa) && Number.isFinite(secant);
@@ -155,11 +163,9 @@ export function solveNearlyLinear(
     if (Math.abs(c - b) < tolerance) c = b + (fb > 0 ? -tolerance : tolerance) * 10;
     a = b;
     fa = fb;
-    b = c;
-    fb = f(b);
-    evaluations++;
-    if (Math.abs(fb) <= tolerance) return { x: b, evaluations, converged: true };
+    ({ x: b, value: fb } = toward(a, c));
   }
+  if (Math.abs(fb) <= tolerance) return { x: b, evaluations, converged: true };
   if (!(fa * fb < 0)) return { x: b, evaluations, converged: false };
   const root = brent(f, a, b, tolerance, 200, { fa, fb });
   return { x: root.x, evaluations: evaluations + root.evaluations, converged: root.converged };
