@@ -23,6 +23,7 @@ import {
   isInstallationRow,
   pulseCheck,
   SET_UP_HEADING,
+  sagSpanNote,
   setUpExplanation,
   setUpTable,
   spanName,
@@ -197,22 +198,21 @@ function setUpSection(
   units: UnitSystem,
 ): void {
   w.heading(SET_UP_HEADING);
-  w.paragraph(
-    setUpExplanation(
-      fq(units, 'length', results.unstressedLength),
-      temperatureText(units, project.installation.temperature),
-    ),
-    8.5,
+  const span = spanName(project, results.setUpSpan);
+  const explanation = setUpExplanation(
+    fq(units, 'length', results.unstressedLength),
+    temperatureText(units, project.installation.temperature),
   );
+  w.paragraph(`${explanation} ${sagSpanNote(span)}`, 8.5);
   w.table(
     setUpTable(project, results, units),
-    [1.5, 1.2, 1.2, 2.2, 1].map((weight, i) => ({ weight, align: i === 0 ? 'left' : 'right' })),
+    [1.5, 1.2, 1.2, 1.2, 1].map((weight, i) => ({ weight, align: i === 0 ? 'left' : 'right' })),
     {
       rowFill: (row) =>
         isInstallationRow(project, results.setUpChart[row]) ? INSTALLATION_FILL : undefined,
     },
   );
-  w.paragraph(pulseCheck(spanName(project, results.setUpSpan)), 7.5);
+  w.paragraph(pulseCheck(span), 7.5);
 }
 
 function inputsSection(

@@ -35,8 +35,13 @@ export function setUpExplanation(cutLength: string, installationTemperature: str
     `The design fixes the wire's cut length: ${cutLength} unstressed at ` +
     `${installationTemperature}. On a warmer or colder day, tension the wire to the sag or ` +
     "tension on that day's row, not to the design day's values; it then behaves as designed in " +
-    'every case.'
+    'every case. Rows are for the loads hung when tensioning, in still air.'
   );
+}
+
+/** Which span's sag the chart lists, as a sentence for the report. */
+export function sagSpanNote(span: string): string {
+  return `The sag listed is that of the span ${span}.`;
 }
 
 /** The field check by pulse return time, for the span the chart lists. */
@@ -51,13 +56,7 @@ export function pulseCheck(span: string): string {
 /** The set-up chart as a report table: temperature, H, largest tension, sag, pulse return. */
 export function setUpTable(project: Project, results: ProjectResults, units: UnitSystem): Table {
   return {
-    head: [
-      'Temperature',
-      'Horizontal tension',
-      'Largest tension',
-      `Sag, ${spanName(project, results.setUpSpan)}`,
-      'Pulse return',
-    ],
+    head: ['Temperature', 'Horizontal tension', 'Largest tension', 'Sag', 'Pulse return'],
     rows: results.setUpChart.map((row) => {
       const temperature = temperatureText(units, row.temperature);
       const first = isInstallationRow(project, row) ? `${temperature} (installation)` : temperature;
