@@ -54,7 +54,13 @@ export class SolverClient {
     worker.onmessage = (event) => this.receive(event.data);
     worker.onerror = (event) => {
       event.preventDefault?.();
-      this.restart(`the solver stopped: ${event.message || 'unknown error'}`);
+      // A script that fails to load or start gives a bare Event; an uncaught error in the
+      // worker gives an ErrorEvent with its message.
+      this.restart(
+        event.message
+          ? `the solver stopped: ${event.message}`
+          : 'the solver could not be loaded; the next change tries again',
+      );
     };
     worker.onmessageerror = () => this.restart('the solver sent an unreadable reply');
     this.worker = worker;
