@@ -100,7 +100,9 @@ export async function openProjectFile(file: Blob & { name?: string }): Promise<O
 
 /** Issues as lines a person can read: "supports[1].x: must be greater than ...". */
 export function describeIssues(issues: readonly ValidationIssue[], max = 8): string[] {
-  const lines = issues.slice(0, max).map((issue) => `${issue.path}: ${issue.message}`);
+  const lines = issues
+    .slice(0, max)
+    .map((issue) => (issue.path ? `${issue.path}: ${issue.message}` : issue.message));
   if (issues.length > max) lines.push(`… and ${issues.length - max} more`);
   return lines;
 }

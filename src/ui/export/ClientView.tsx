@@ -2,32 +2,33 @@
  * The client view: the sag plot full-window with large labels, the project title, the summary
  * line and the key numbers, and the cautions. No editing controls; Escape or Close returns.
  */
-import { useEffect, useRef } from 'react';
+import { type RefObject, useEffect, useRef, useState } from 'react';
 import { CAUTION_SUMMARY, type Project, type ProjectResults } from '../../core/index.ts';
 import type { UnitSystem } from '../../core/units.ts';
 import { keyNumbers, summaryLine } from '../../deliverables/reportContent.ts';
 import { loadPlotly } from '../plot/loadPlotly.ts';
 import { exportFigure } from './plotImage.ts';
+import { useModal } from './useModal.ts';
+
+/** The printed plot's drawing size in CSS px; the image then scales to the page width. */
+const PRINT_PLOT = { width: 1100, height: 560 } as const;
 
 export function ClientView({
   project,
   results,
   units,
   onClose,
+  returnFocus,
 }: {
   project: Project;
   results: ProjectResults;
   units: UnitSystem;
   onClose: () => void;
+  returnFocus?: RefObject<HTMLElement | null>;
 }) {
   const plotRef = useRef<HTMLDivElement>(null);
-  const closeRef = useRef<HTMLButtonElement>(null);
-  useEffect(() => {
-    closeRef.current?.focus();
-    const onKey = (event: KeyboardEvent) => event.key === 'Escape' && onClose();
-    window.addEventListener('keydown', onKey);
-    return () => window.removeEventListener('keydown', onKey);
-  }, [onClose]);
+  const [printImage, setPrintImage] = useState<string | null>(null);
+  const modal = useModal(onClose, returnFocus);
   useEffect(() => {
     const host = plotRef.current;
     if (!host) return;
@@ -39,23 +40,36 @@ export function ClientView({
       .then((Plotly) =>
         Plotly.newPlot(host, data, layout, { displayModeBar: false, responsive: true }),
       )
-      .then(() => {
-        drawn = true;
-        host.dataset.plotState = 'drawn';
-      })
-      .catch(() => {
-        host.dataset.plotState = 'failed';
-      });
+      .then(
+        async () => {
+          drawn = true;
+          host.dataset.plotState = 'drawn';
+          // Paper is narrower than the window and Plotly draws at fixed pixels, so the printed
+          // page gets the same figure as an SVG image that scales to the page width (without
+          // it, the live plot prints as it is).
+          const Plotly = await loadPlotly();
+          setPrintImage(await Plotly.toImage(host, { format: 'svg', ...PRINT_PLOT }));
+        },
+        () => {
+          host.dataset.plotState = 'failed';
+        },
+      )
+      .catch(() => setPrintImage(null));
     return () => {
       if (drawn) loadPlotly().then((Plotly) => Plotly.purge(host));
     };
   }, [project, results, units]);
 
   return (
-    <div className="presenter" role="dialog" aria-modal="true" aria-label="Client view">
+    <dialog
+      ref={modal.ref}
+      onCancel={modal.onCancel}
+      className="presenter"
+      aria-label="Client view"
+    >
       <header className="presenter-head">
         <h2>{project.title}</h2>
-        <button ref={closeRef} type="button" className="presenter-close" onClick={onClose}>
+        <button type="button" className="presenter-close" onClick={onClose}>
           Close client view
         </button>
       </header>
@@ -75,9 +89,10 @@ export function ClientView({
         role="img"
         aria-label="Sag plot for the client"
       />
+      {printImage && <img className="presenter-print-plot" src={printImage} alt="" />}
       <p className="presenter-caution" role="note">
         <strong>Caution:</strong> {CAUTION_SUMMARY}
       </p>
-    </div>
+    </dialog>
   );
 }

@@ -3,27 +3,45 @@
  * browser, PDF report, plot images, CSV and the client view; plus the shared-project banner.
  * Refused files list the field paths and leave the open project as it was.
  */
-import { useRef, useState } from 'react';
+import { useEffect, useMemo, useRef, useState } from 'react';
 import './export.css';
-import type { ValidationIssue } from '../../core/index.ts';
-import {
-  describeIssues,
-  type OpenResult,
-  PROJECT_FILE_EXTENSION,
-} from '../../deliverables/projectFile.ts';
+import { type OpenResult, PROJECT_FILE_EXTENSION } from '../../deliverables/projectFile.ts';
 import { useProjectStore } from '../../state/projectStore.ts';
 import { useUiStore } from '../../state/uiStore.ts';
 import { ClientView } from './ClientView.tsx';
+import { ExportNotice, type Notice, SharedBanner } from './ExportNotices.tsx';
 import * as actions from './exportActions.ts';
 import { LibraryDialog } from './LibraryDialog.tsx';
 import { ReportDialog } from './ReportDialog.tsx';
 import { useSharedProject } from './useSharedProject.ts';
 
 type Dialog = 'none' | 'report' | 'library' | 'client';
-type Notice =
-  | { kind: 'status'; text: string }
-  | { kind: 'refused'; title: string; issues: ValidationIssue[] }
-  | null;
+
+/** Escape or a click elsewhere closes the open menu; Escape also puts focus back on its button. */
+function useMenuDismiss(
+  open: boolean,
+  close: () => void,
+  root: React.RefObject<HTMLElement | null>,
+  button: React.RefObject<HTMLElement | null>,
+) {
+  useEffect(() => {
+    if (!open) return;
+    const onKey = (event: KeyboardEvent) => {
+      if (event.key !== 'Escape') return;
+      close();
+      button.current?.focus();
+    };
+    const onPointer = (event: PointerEvent) => {
+      if (!root.current?.contains(event.target as Node)) close();
+    };
+    document.addEventListener('keydown', onKey);
+    document.addEventListener('pointerdown', onPointer);
+    return () => {
+      document.removeEventListener('keydown', onKey);
+      document.removeEventListener('pointerdown', onPointer);
+    };
+  }, [open, close, root, button]);
+}
 
 export function ExportMenu() {
   const project = useProjectStore((s) => s.project);
@@ -34,23 +52,49 @@ export function ExportMenu() {
   const [busy, setBusy] = useState(false);
   const [notice, setNotice] = useState<Notice>(null);
   const fileInput = useRef<HTMLInputElement>(null);
+  const menuButton = useRef<HTMLButtonElement>(null);
+  const root = useRef<HTMLDivElement>(null);
   const shared = useSharedProject();
+  const closeMenu = useMemo(() => () => setOpen(false), []);
+  const closeDialog = useMemo(() => () => setDialog('none'), []);
+  useMenuDismiss(open, closeMenu, root, menuButton);
+  const clientResults = useMemo(
+    () => (dialog === 'client' ? actions.solved(project) : null),
+    [dialog, project],
+  );
 
-  const run = (label: string, work: () => unknown) => async () => {
+  /** `what` names the file made, e.g. "The plot SVG". */
+  const run = (what: string, work: () => unknown) => async () => {
     setOpen(false);
+    menuButton.current?.focus();
     setBusy(true);
     try {
       await work();
-      setNotice({ kind: 'status', text: `${label}: done.` });
+      setNotice({ kind: 'status', text: `${what} was saved.` });
     } catch (error) {
       setNotice({
         kind: 'refused',
-        title: `${label} failed`,
+        title: `${what} could not be made`,
         issues: [{ path: '', message: error instanceof Error ? error.message : String(error) }],
       });
     } finally {
       setBusy(false);
     }
+  };
+  const show = (next: Dialog) => () => {
+    setOpen(false);
+    setDialog(next);
+  };
+  const copyLink = async () => {
+    setOpen(false);
+    menuButton.current?.focus();
+    const url = actions.shareLinkFor(project);
+    const copied = await actions.copyText(url);
+    setNotice(
+      copied
+        ? { kind: 'status', text: 'Share link copied to the clipboard.' }
+        : { kind: 'link', url },
+    );
   };
   const applyOpened = (result: OpenResult, source: string) => {
     if (!result.ok) {
@@ -72,7 +116,7 @@ export function ExportMenu() {
   };
 
   const items: [string, () => void][] = [
-    ['Save file', run('Save file', () => actions.saveProjectFile(project))],
+    ['Save file', run('The project file', () => actions.saveProjectFile(project))],
     [
       'Open file…',
       () => {
@@ -80,40 +124,24 @@ export function ExportMenu() {
         fileInput.current?.click();
       },
     ],
-    ['Copy share link', run('Share link copied', () => actions.copyShareLink(project))],
-    [
-      'Projects in this browser…',
-      () => {
-        setOpen(false);
-        setDialog('library');
-      },
-    ],
-    [
-      'PDF report…',
-      () => {
-        setOpen(false);
-        setDialog('report');
-      },
-    ],
-    ['Plot as PNG', run('PNG', () => actions.savePlotImage(project, units, 'png', 1))],
+    ['Copy share link', copyLink],
+    ['Projects in this browser…', show('library')],
+    ['PDF report…', show('report')],
+    ['Plot as PNG', run('The plot PNG', () => actions.savePlotImage(project, units, 'png', 1))],
     [
       'Plot as PNG, 2× for slides',
-      run('PNG 2×', () => actions.savePlotImage(project, units, 'png', 2)),
+      run('The 2× plot PNG', () => actions.savePlotImage(project, units, 'png', 2)),
     ],
-    ['Plot as SVG', run('SVG', () => actions.savePlotImage(project, units, 'svg', 1))],
-    ['Wire profiles as CSV', run('CSV', () => actions.saveCsv(project, units))],
-    [
-      'Client view',
-      () => {
-        setOpen(false);
-        setDialog('client');
-      },
-    ],
+    ['Plot as SVG', run('The plot SVG', () => actions.savePlotImage(project, units, 'svg', 1))],
+    ['Wire profiles as CSV', run('The wire profiles CSV', () => actions.saveCsv(project, units))],
+    ['Client view', show('client')],
   ];
 
   return (
-    <div className="export-menu">
+    <div className="export-menu" ref={root}>
+      <p className="print-title">{project.title}</p>
       <button
+        ref={menuButton}
         type="button"
         aria-expanded={open}
         aria-controls="export-menu-items"
@@ -141,55 +169,21 @@ export function ExportMenu() {
         </ul>
       )}
       {busy && <p role="status">Working…</p>}
-      {notice?.kind === 'status' && (
-        <p role="status" className="export-notice">
-          {notice.text}
-        </p>
-      )}
-      {notice?.kind === 'refused' && (
-        <div role="alert" className="export-notice export-refused">
-          <p>{notice.title}:</p>
-          <ul>
-            {describeIssues(notice.issues).map((line) => (
-              <li key={line}>{line}</li>
-            ))}
-          </ul>
-          <button type="button" onClick={() => setNotice(null)}>
-            Dismiss
-          </button>
-        </div>
-      )}
-      {shared.state.kind === 'viewing' && (
-        <section aria-label="Shared project" className="share-banner">
-          Viewing a shared project, “{shared.state.title}”. Your own work is kept until you choose.
-          <button type="button" onClick={shared.keep}>
-            Keep it
-          </button>
-          <button type="button" onClick={shared.goBack}>
-            Go back to mine
-          </button>
-        </section>
-      )}
-      {shared.state.kind === 'refused' && (
-        <div role="alert" className="export-notice export-refused">
-          <p>The shared link was not opened; your project is unchanged:</p>
-          <ul>
-            {describeIssues(shared.state.issues).map((line) => (
-              <li key={line}>{line}</li>
-            ))}
-          </ul>
-          <button type="button" onClick={shared.dismiss}>
-            Dismiss
-          </button>
-        </div>
-      )}
+      <ExportNotice notice={notice} onDismiss={() => setNotice(null)} />
+      <SharedBanner
+        state={shared.state}
+        onKeep={shared.keep}
+        onGoBack={shared.goBack}
+        onDismiss={shared.dismiss}
+      />
       {dialog === 'report' && (
         <ReportDialog
           busy={busy}
-          onClose={() => setDialog('none')}
+          returnFocus={menuButton}
+          onClose={closeDialog}
           onCreate={(paper, details) => {
-            run('PDF report', () => actions.saveReport(project, units, paper, details))().then(() =>
-              setDialog('none'),
+            run('The PDF report', () => actions.saveReport(project, units, paper, details))().then(
+              closeDialog,
             );
           }}
         />
@@ -197,16 +191,18 @@ export function ExportMenu() {
       {dialog === 'library' && (
         <LibraryDialog
           project={project}
+          returnFocus={menuButton}
           onOpened={(r) => applyOpened(r, 'The saved project')}
-          onClose={() => setDialog('none')}
+          onClose={closeDialog}
         />
       )}
-      {dialog === 'client' && (
+      {dialog === 'client' && clientResults && (
         <ClientView
           project={project}
-          results={actions.solved(project)}
+          results={clientResults}
           units={units}
-          onClose={() => setDialog('none')}
+          returnFocus={menuButton}
+          onClose={closeDialog}
         />
       )}
     </div>

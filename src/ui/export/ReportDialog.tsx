@@ -2,8 +2,9 @@
  * The PDF report dialog: the client and site block the person fills in (remembered in this
  * browser) and the paper size. The report itself is built by the deliverables layer.
  */
-import { useId, useState } from 'react';
+import { type RefObject, useId, useState } from 'react';
 import type { PaperSize, ReportDetails } from '../../deliverables/pdfReport.ts';
+import { useModal } from './useModal.ts';
 
 const DETAILS_KEY = 'sagwright:report-details';
 const EMPTY: ReportDetails = { client: '', site: '', preparedBy: '', reference: '' };
@@ -34,11 +35,14 @@ export function ReportDialog({
   busy,
   onCreate,
   onClose,
+  returnFocus,
 }: {
   busy: boolean;
   onCreate: (paper: PaperSize, details: ReportDetails) => void;
   onClose: () => void;
+  returnFocus?: RefObject<HTMLElement | null>;
 }) {
+  const modal = useModal(onClose, returnFocus);
   const [details, setDetails] = useState(storedDetails);
   const [paper, setPaper] = useState<PaperSize>(() =>
     navigator.language === 'en-US' ? 'letter' : 'a4',
@@ -54,7 +58,12 @@ export function ReportDialog({
     onCreate(paper, details);
   };
   return (
-    <div className="export-dialog" role="dialog" aria-modal="true" aria-labelledby={`${id}-title`}>
+    <dialog
+      ref={modal.ref}
+      onCancel={modal.onCancel}
+      className="export-dialog"
+      aria-labelledby={`${id}-title`}
+    >
       <form onSubmit={submit}>
         <h2 id={`${id}-title`}>PDF report</h2>
         {FIELDS.map(([key, label]) => (
@@ -90,6 +99,6 @@ export function ReportDialog({
           </button>
         </div>
       </form>
-    </div>
+    </dialog>
   );
 }

@@ -30,10 +30,20 @@ export function saveProjectFile(project: Project): void {
 
 export { openProjectFile };
 
-export async function copyShareLink(project: Project): Promise<string> {
-  const url = shareUrl(project, window.location.href);
-  await navigator.clipboard.writeText(url);
-  return url;
+/** The share link for this page; any fragment of the current address is replaced. */
+export function shareLinkFor(project: Project): string {
+  return shareUrl(project, window.location.href);
+}
+
+/** Puts text on the clipboard; false when the browser does not allow it (the caller shows it). */
+export async function copyText(text: string): Promise<boolean> {
+  try {
+    if (!navigator.clipboard) return false;
+    await navigator.clipboard.writeText(text);
+    return true;
+  } catch {
+    return false;
+  }
 }
 
 export function saveCsv(project: Project, units: UnitSystem): void {

@@ -22,18 +22,30 @@ export function useSharedProject() {
   const [state, setState] = useState<SharedState>({ kind: 'none' });
   const [own, setOwn] = useState<{ project: Project; stored: string | null } | null>(null);
 
+  // On load, and when a link is pasted into a tab that already shows the app (only the
+  // fragment changes, so the page does not reload).
   useEffect(() => {
-    if (!hasSharedProject(location.hash)) return;
-    const opened = openShareFragment(location.hash);
-    if (!opened.ok) {
-      setState({ kind: 'refused', issues: opened.issues });
-      clearFragment();
-      return;
-    }
-    const stored = browserStorage()?.getItem(AUTOSAVE_KEY) ?? null;
-    setOwn({ project: useProjectStore.getState().project, stored });
-    useProjectStore.getState().setProject(opened.project);
-    setState({ kind: 'viewing', title: opened.project.title });
+    const openFromHash = () => {
+      if (!hasSharedProject(location.hash)) return;
+      const opened = openShareFragment(location.hash);
+      if (!opened.ok) {
+        setState({ kind: 'refused', issues: opened.issues });
+        clearFragment();
+        return;
+      }
+      // Taken before the shared project replaces it. A second link while viewing the first
+      // keeps the person's own work, not the first link.
+      const mine = {
+        project: useProjectStore.getState().project,
+        stored: browserStorage()?.getItem(AUTOSAVE_KEY) ?? null,
+      };
+      setOwn((previous) => previous ?? mine);
+      useProjectStore.getState().setProject(opened.project);
+      setState({ kind: 'viewing', title: opened.project.title });
+    };
+    openFromHash();
+    window.addEventListener('hashchange', openFromHash);
+    return () => window.removeEventListener('hashchange', openFromHash);
   }, []);
 
   // While viewing, every autosave of the shared project is put back to the person's own work.
@@ -54,12 +66,14 @@ export function useSharedProject() {
   const keep = () => {
     writeAutosave(browserStorage(), useProjectStore.getState().project);
     clearFragment();
+    setOwn(null);
     setState({ kind: 'none' });
   };
   const goBack = () => {
     if (own) {
       setState({ kind: 'none' });
       useProjectStore.getState().setProject(own.project);
+      setOwn(null);
     }
     clearFragment();
   };
