@@ -52,6 +52,7 @@ async function tabStaysInside(page: Page, scope: ReturnType<Page['getByRole']>, 
 test('the client view fills the window with the title, summary, key numbers and a large plot, and nothing to edit', async ({
   page,
 }) => {
+  test.slow(); // ends with an axe scan, slow on a busy 2-core machine
   await openDemo(page);
   const results = demoResults();
   const workbenchAxisPx = await page

@@ -87,6 +87,7 @@ test('Copy share link opens the same document in a new page; my autosave is unto
   page,
   context,
 }) => {
+  test.slow(); // two pages, two downloads and a dozen steps: tight in 30 s on a busy 2-core machine
   await context.grantPermissions(['clipboard-read', 'clipboard-write']);
   await openDemo(page);
   await page.getByLabel('Project title').fill('Shared terrace span');
@@ -309,6 +310,7 @@ test.describe('projects in this browser', () => {
   test('save, list with title and date, rename, duplicate, delete with undo, open; kept after reload', async ({
     page,
   }) => {
+    test.slow(); // one person's whole session with the list, a reload included
     await page.clock.setFixedTime(new Date('2025-03-12T14:05:00Z'));
     await openDemo(page);
     await page.getByLabel('Hot summer temperature (°C)').fill('45');
