@@ -105,6 +105,8 @@ test('the view choice survives a reload and side view draws heights again', asyn
   await page.getByLabel('Plan view (sideways swing)').check();
   await expect(plot(page).locator('.ytitle')).toHaveText('Sideways swing, downwind (m)');
   await page.reload();
+  await expect(page.getByRole('status')).toHaveText('Up to date.');
+  await expect(plot(page)).toHaveAttribute('data-plot-view', 'plan');
   await expect(page.getByLabel('Plan view (sideways swing)')).toBeChecked();
   await expect(plot(page).locator('.ytitle')).toHaveText('Sideways swing, downwind (m)');
 
