@@ -129,9 +129,11 @@ test('the PDF report carries the set-up chart after the case table', async ({ pa
   expect(heading).toBeGreaterThan(flat.indexOf('Results by case'));
   expect(flat).toContain('Pulse check');
   // Each row as pdftotext reads it: temperature, H, largest tension, sag, return time.
-  const results = solveProject(demoProject());
+  const project = demoProject();
+  const results = solveProject(project);
   for (const row of results.setUpChart) {
-    const first = `${row.temperature}°C${row.temperature === 15 ? ' (installation)' : ''}`;
+    const installation = row.temperature === project.installation.temperature;
+    const first = `${row.temperature}°C${installation ? ' (installation)' : ''}`;
     const cells = [
       first,
       `${row.horizontalTension.toFixed(0)} N`,
