@@ -7,16 +7,18 @@ import type { GroundPoint, Project } from '../../core/index.ts';
 import { fromSi, type UnitSystem, unitSymbol } from '../../core/units.ts';
 import { GROUND_FILL, GROUND_LINE, ZONE_FILL, ZONE_LINE } from './colours.ts';
 
+/**
+ * The ground as drawn: the project's points, extended level (as the solver reads it beyond the
+ * first and last points) so the line covers every support.
+ */
 export function groundLine(project: Project): GroundPoint[] {
   const first = project.supports[0].x;
   const last = project.supports[project.supports.length - 1].x;
-  const ground = project.ground?.length ? project.ground : [];
-  return ground.length >= 2
-    ? ground
-    : [
-        { x: first, z: ground[0]?.z ?? 0 },
-        { x: last, z: ground[0]?.z ?? 0 },
-      ];
+  const ground = project.ground?.length ? [...project.ground] : [{ x: first, z: 0 }];
+  if (ground[0].x > first) ground.unshift({ x: first, z: ground[0].z });
+  const end = ground[ground.length - 1];
+  if (end.x < last) ground.push({ x: last, z: end.z });
+  return ground;
 }
 
 /** Ground height at x, m: linear between points, level beyond the ends. */

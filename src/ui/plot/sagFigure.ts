@@ -95,8 +95,11 @@ function annotations(results: ProjectResults, units: UnitSystem): Partial<Annota
       text: `Lowest point ${len(lowest.lowestPoint.z).toFixed(2)} ${lu} (${lowest.name})`,
       showarrow: true,
       arrowhead: 2,
-      ax: 40,
-      ay: 40,
+      // Label and arrow wholly below-right of the point (anchored at the label's top-left corner).
+      ax: 24,
+      ay: 28,
+      xanchor: 'left',
+      yanchor: 'top',
       bgcolor: 'rgba(255,255,255,0.85)',
     },
   ];
@@ -111,8 +114,12 @@ function annotations(results: ProjectResults, units: UnitSystem): Partial<Annota
       text: `Largest sag ${len(sagging.sag).toFixed(3)} ${lu} (${sagging.name})`,
       showarrow: true,
       arrowhead: 2,
-      ax: -60,
-      ay: -45,
+      // Label straight above the point, arrow pointing down: it stays above every wire point
+      // of the lowest-point arrow, so the two never cross, and clear of the fixings' labels.
+      ax: 0,
+      ay: -30,
+      xanchor: 'center',
+      yanchor: 'bottom',
       bgcolor: 'rgba(255,255,255,0.85)',
     });
   }

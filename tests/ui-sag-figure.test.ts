@@ -1,0 +1,89 @@
+/**
+ * The side view (buildSagFigure, plain Node, no DOM): the ground and the minimum-clearance line
+ * cover every support when the ground points stop short (the ground is read as level beyond its
+ * first and last points, doc/model.md "Clearance"), and the "Largest sag" and "Lowest point"
+ * labels sit on opposite sides of their points so their arrows cannot cross.
+ */
+import type { Annotation } from 'plotly.js';
+import { describe, expect, it } from 'vitest';
+import demo from '../examples/courtyard-lights.json' with { type: 'json' };
+import inclined from '../examples/workshop-yard-inclined.json' with { type: 'json' };
+import { type Project, solveProject, validateProject } from '../src/core/index.ts';
+import { buildSagFigure } from '../src/ui/plot/sagFigure.ts';
+
+type Trace = { name?: string; x?: number[]; y?: number[] };
+
+function checked(input: unknown): Project {
+  const result = validateProject(input);
+  if (!result.ok) throw new Error('example project invalid');
+  return structuredClone(result.project);
+}
+
+const traceNamed = (data: unknown[], start: string) =>
+  (data as Trace[]).find((t) => t.name?.startsWith(start));
+
+describe('ground and minimum clearance over the whole span', () => {
+  const project = checked(demo);
+  project.supports[1].x = 26; // the ground points still end at 22 m
+  const figure = buildSagFigure(project, solveProject(project), 'si');
+
+  it('draws the ground from the first to the last support, level beyond its last point', () => {
+    const ground = traceNamed(figure.data, 'Ground');
+    const xs = ground?.x ?? [];
+    expect(Math.min(...xs)).toBeLessThanOrEqual(0);
+    expect(Math.max(...xs)).toBeGreaterThanOrEqual(26);
+    const at26 = xs.indexOf(26);
+    expect(ground?.y?.[at26]).toBe(0); // last ground point's height, 0 m in the example
+  });
+
+  it('draws the minimum-clearance line from the first to the last support', () => {
+    const line = traceNamed(figure.data, 'Minimum clearance');
+    expect(line?.x?.[0]).toBe(0);
+    expect(line?.x?.at(-1)).toBe(26);
+    expect(line?.y?.at(-1)).toBeCloseTo(project.limits.minClearance, 12);
+  });
+
+  it('extends the ground at the start too when it begins after the first support', () => {
+    const shifted = checked(demo);
+    shifted.ground = [
+      { x: 3, z: 0.5 },
+      { x: 22, z: 0 },
+    ];
+    const line = traceNamed(buildSagFigure(shifted, solveProject(shifted), 'si').data, 'Minimum');
+    expect(line?.x?.[0]).toBe(0);
+    expect(line?.y?.[0]).toBeCloseTo(0.5 + shifted.limits.minClearance, 12);
+  });
+});
+
+function labels(project: Project) {
+  const notes = (buildSagFigure(project, solveProject(project), 'si').layout.annotations ??
+    []) as Partial<Annotation>[];
+  const find = (start: string) => notes.find((n) => String(n.text).startsWith(start));
+  return { lowest: find('Lowest point'), sag: find('Largest sag') };
+}
+
+describe('sag and lowest-point labels do not cross', () => {
+  for (const [name, input] of [
+    ['courtyard example', demo],
+    ['inclined workshop example', inclined],
+  ] as const) {
+    it(`keeps the sag label above its point and the lowest-point label below-right (${name})`, () => {
+      const { lowest, sag } = labels(checked(input));
+      expect(lowest).toBeDefined();
+      // Lowest point: label anchored at its top-left corner, placed down and to the right, so
+      // arrow and label lie below and right of the point (screen y grows downwards).
+      expect(lowest?.xanchor).toBe('left');
+      expect(lowest?.yanchor).toBe('top');
+      expect(lowest?.ax).toBeGreaterThanOrEqual(0);
+      expect(lowest?.ay).toBeGreaterThan(0);
+      if (!sag) return;
+      // Largest sag: label anchored at its bottom edge straight above, arrow pointing down.
+      expect(sag.yanchor).toBe('bottom');
+      expect(sag.ax).toBe(0);
+      expect(sag.ay).toBeLessThan(0);
+      // The sag point is never below the lowest point, so the two arrows lie on either side of
+      // the height of the lowest point and cannot cross.
+      expect(Number(sag.y)).toBeGreaterThanOrEqual(Number(lowest?.y));
+    });
+  }
+});
