@@ -67,12 +67,13 @@ test('the client view fills the window with the title, summary, key numbers and 
   const headingPx = await heading.evaluate((h) => Number.parseFloat(getComputedStyle(h).fontSize));
   expect(headingPx).toBeGreaterThanOrEqual(32);
 
-  // The summary and key numbers carry the core's governing cases and values (SI display:
-  // force to the newton, lengths to the millimetre).
+  // The summary and key numbers carry the core's governing cases and values (SI display, the
+  // workbench's rule: forces from 1 kN in kN to two decimals, lengths to the millimetre).
   const tensionCase = results.cases.find((c) => c.name === results.governing.tension);
   const clearanceCase = results.cases.find((c) => c.name === results.governing.clearance);
   if (!tensionCase || !clearanceCase) throw new Error('core named no governing case');
-  const largestTension = `${tensionCase.maxTension.toFixed(0)} N`;
+  expect(tensionCase.maxTension).toBeGreaterThanOrEqual(1000);
+  const largestTension = `${(tensionCase.maxTension / 1000).toFixed(2)} kN`;
   const leastClearance = `${clearanceCase.clearance.toFixed(3)} m`;
   const summary = view.getByText(/cases pass/);
   await expect(summary).toContainText(`${largestTension} (${tensionCase.name})`);

@@ -41,3 +41,21 @@ export function formatQuantity(
   if (!symbol) return shown;
   return `${shown}${symbol.startsWith('°') ? '' : ' '}${symbol}`;
 }
+
+const wholeOrHundredths = [0, 2].map(
+  (digits) =>
+    new Intl.NumberFormat('en', { minimumFractionDigits: digits, maximumFractionDigits: digits }),
+);
+
+/**
+ * A force for summaries and key numbers, the one rule the workbench, the client view and the
+ * report share: from 1 000 N in kN with two decimals ("1.59 kN"), below in whole newtons
+ * ("441 N"); imperial in whole lbf ("1,234 lbf").
+ */
+export function formatForceShort(system: UnitSystem, newtons: number, space = ' '): string {
+  if (system === 'si')
+    return newtons >= 999.5
+      ? `${wholeOrHundredths[1].format(newtons / 1000)}${space}kN`
+      : `${wholeOrHundredths[0].format(newtons)}${space}N`;
+  return `${wholeOrHundredths[0].format(fromSi(newtons, 'force', system))}${space}${symbolOf('force', system)}`;
+}

@@ -5,7 +5,7 @@
  */
 import type { CaseResult, Project, ProjectResults } from '../core/index.ts';
 import { DEFAULT_MODEL, resolveWire } from '../core/index.ts';
-import { formatQuantity as fq, type UnitSystem } from './displayUnits.ts';
+import { formatForceShort, formatQuantity as fq, type UnitSystem } from './displayUnits.ts';
 
 export interface KeyNumber {
   label: string;
@@ -42,7 +42,7 @@ export function summaryLine(project: Project, results: ProjectResults, units: Un
   const tension = extreme(solved, (c) => c.maxTension, true);
   const clearance = extreme(solved, (c) => c.clearance, false);
   return (
-    `${verdict}: largest tension ${fq(units, 'force', tension.maxTension)} (${tension.name}) is ` +
+    `${verdict}: largest tension ${formatForceShort(units, tension.maxTension)} (${tension.name}) is ` +
     `${percent(tension.utilisation)} of the working limit; least clearance ` +
     `${fq(units, 'length', clearance.clearance)} (${clearance.name}) against ` +
     `${fq(units, 'length', project.limits.minClearance)} required.`
@@ -79,7 +79,7 @@ export function keyNumbers(
     numbers.push({
       label: 'Set on the day',
       value: `sag ${fq(units, 'length', install.sag)}`,
-      note: `H ${fq(units, 'force', install.horizontalTension)} at ${fq(units, 'temperature', project.installation.temperature)}`,
+      note: `horizontal pull ${formatForceShort(units, install.horizontalTension)} at ${fq(units, 'temperature', project.installation.temperature)}`,
     });
   if (solved.length > 0) {
     const t = extreme(solved, (c) => c.maxTension, true);
@@ -89,7 +89,7 @@ export function keyNumbers(
     numbers.push(
       {
         label: 'Largest tension',
-        value: fq(units, 'force', t.maxTension),
+        value: formatForceShort(units, t.maxTension),
         note: `${percent(t.utilisation)} of limit, ${t.name}`,
       },
       { label: 'Least clearance', value: fq(units, 'length', c.clearance), note: c.name },
@@ -97,7 +97,7 @@ export function keyNumbers(
     if (pull)
       numbers.push({
         label: 'Largest fixing load',
-        value: fq(units, 'force', pull.s.resultant),
+        value: formatForceShort(units, pull.s.resultant),
         note: `${pull.s.angle.toFixed(0)}° down, ${pull.r.name}`,
       });
   }

@@ -2,7 +2,9 @@
  * Number formatting for the workbench: values in the chosen display units with their symbol,
  * and the numbers put into input fields (enough digits to round-trip what a person typed).
  */
+
 import { fromSi, type Quantity, type UnitSystem, unitSymbol } from '../core/units.ts';
+import { formatForceShort } from '../deliverables/displayUnits.ts';
 
 // SI values are shown as typed (8 digits); converted imperial values are rounded to 6 digits so
 // a 22 m span reads 72.1785 ft, not 72.178478. The document keeps the exact SI value.
@@ -58,13 +60,9 @@ export function show(si: number, quantity: Quantity, units: UnitSystem, digits?:
   return symbol ? `${text}\u00a0${symbol}` : text;
 }
 
-/** Forces above 1 kN (or 1 000 lbf) in kN or kip, for summaries. */
+/** Forces from 1 kN in kN, for summaries (the rule shared with the client view and report). */
 export function showForceShort(newtons: number, units: UnitSystem): string {
-  if (units === 'si')
-    return newtons >= 1000
-      ? `${fixed(2).format(newtons / 1000)}\u00a0kN`
-      : `${fixed(0).format(newtons)}\u00a0N`;
-  return show(newtons, 'force', units, 0);
+  return formatForceShort(units, newtons, '\u00a0');
 }
 
 export function percent(fraction: number): string {
