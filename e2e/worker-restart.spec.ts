@@ -155,6 +155,9 @@ test('a worker that cannot start at all is reported, the page stays usable and r
   await page.goto('/');
   // One start and three restarts (doc/ui.md), then the failure is reported by name.
   await expect(page.getByRole('status')).toContainText('the solver could not be loaded');
+  // The status blames the solver, not the design, and says nothing typed is lost.
+  await expect(page.getByRole('status')).toContainText('Your inputs are kept');
+  await expect(page.getByRole('status')).not.toContainText('design could not be solved');
   expect(attempts).toBe(4);
   await expect(page.getByLabel('Project title')).toHaveValue(demo.title);
 

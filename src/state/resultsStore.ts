@@ -13,6 +13,8 @@ export interface ResultsState {
   stale: boolean;
   /** Why the current document could not be solved, or null. */
   error: string | null;
+  /** Whose the error is: the design's (cannot be solved) or the solver's (could not run). */
+  errorCause: 'design' | 'solver' | null;
 }
 
 export const useResultsStore = create<ResultsState>()(() => ({
@@ -20,4 +22,5 @@ export const useResultsStore = create<ResultsState>()(() => ({
   resultsProject: null,
   stale: true,
   error: null,
+  errorCause: null,
 }));

@@ -14,10 +14,12 @@ import { SetUpChart } from './results/SetUpChart.tsx';
 import { SolverDetails } from './results/SolverDetails.tsx';
 import { summaryText } from './results/summaryText.ts';
 import { SagPlot } from './SagPlot.tsx';
+import { errorStatusText } from './statusText.ts';
 
 function Status() {
   const stale = useResultsStore((s) => s.stale);
   const error = useResultsStore((s) => s.error);
+  const errorCause = useResultsStore((s) => s.errorCause);
   const hasResults = useResultsStore((s) => s.results !== null);
   const invalid = Object.values(useDraftStore((s) => s.invalid));
   if (invalid.length > 0)
@@ -31,8 +33,7 @@ function Status() {
   if (error)
     return (
       <p className="status status-stale" role="status">
-        Out of date: this design could not be solved ({error}). The results shown are for the last
-        design that could.
+        {errorStatusText(error, errorCause)}
       </p>
     );
   if (stale)

@@ -21,9 +21,10 @@ function applyOutcome(outcome: SolveOutcome): void {
       resultsProject: outcome.project,
       stale: outcome.project !== current,
       error: null,
+      errorCause: null,
     });
   } else {
-    useResultsStore.setState({ stale: true, error: outcome.message });
+    useResultsStore.setState({ stale: true, error: outcome.message, errorCause: outcome.cause });
   }
 }
 

@@ -9,7 +9,14 @@ import type { SolveReply, SolveRequest, WorkerLike } from './protocol.ts';
 
 export type SolveOutcome =
   | { ok: true; results: ProjectResults; project: Project }
-  | { ok: false; message: string; project: Project };
+  | {
+      ok: false;
+      message: string;
+      project: Project;
+      /** 'design': the solver answered that this document cannot be solved; 'solver': the
+       * solver itself could not load or run (the document may be fine). */
+      cause: 'design' | 'solver';
+    };
 
 export interface SolverClientOptions {
   createWorker: () => WorkerLike;
@@ -57,9 +64,7 @@ export class SolverClient {
       // A script that fails to load or start gives a bare Event; an uncaught error in the
       // worker gives an ErrorEvent with its message.
       this.restart(
-        event.message
-          ? `the solver stopped: ${event.message}`
-          : 'the solver could not be loaded; the next change tries again',
+        event.message ? `the solver stopped: ${event.message}` : 'the solver could not be loaded',
       );
     };
     worker.onmessageerror = () => this.restart('the solver sent an unreadable reply');
@@ -86,7 +91,7 @@ export class SolverClient {
       this.options.onOutcome(
         reply.ok
           ? { ok: true, results: reply.results, project: request.project }
-          : { ok: false, message: reply.message, project: request.project },
+          : { ok: false, message: reply.message, project: request.project, cause: 'design' },
       );
     } else {
       this.dropped += 1;
@@ -105,7 +110,12 @@ export class SolverClient {
     this.restarts += 1;
     if (this.restarts > (this.options.maxRestarts ?? 3)) {
       this.restarts = 0;
-      this.options.onOutcome({ ok: false, message: reason, project: latest.project });
+      this.options.onOutcome({
+        ok: false,
+        message: reason,
+        project: latest.project,
+        cause: 'solver',
+      });
       return;
     }
     this.send(latest);
