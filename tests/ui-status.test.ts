@@ -7,41 +7,10 @@
 import { describe, expect, it } from 'vitest';
 import { demoProject } from '../src/state/demoProject.ts';
 import { errorStatusText } from '../src/ui/statusText.ts';
-import type { SolveReply, SolveRequest, WorkerLike } from '../src/worker/protocol.ts';
-import { type SolveOutcome, SolverClient } from '../src/worker/solverClient.ts';
+import type { SolveOutcome } from '../src/worker/solverClient.ts';
+import { standInClient } from './helpers/standInWorker.ts';
 
-class StandInWorker implements WorkerLike {
-  received: SolveRequest[] = [];
-  onmessage: ((event: MessageEvent<SolveReply>) => void) | null = null;
-  onerror: ((event: ErrorEvent) => void) | null = null;
-  postMessage(message: SolveRequest): void {
-    this.received.push(message);
-  }
-  terminate(): void {}
-  /** A script that fails to load gives a bare Event with no message. */
-  failToLoad(): void {
-    this.onerror?.({ preventDefault() {} } as ErrorEvent);
-  }
-  refuse(message: string): void {
-    const id = this.received[this.received.length - 1].id;
-    this.onmessage?.({ data: { id, ok: false, message } } as MessageEvent<SolveReply>);
-  }
-}
-
-function setup() {
-  const workers: StandInWorker[] = [];
-  const outcomes: SolveOutcome[] = [];
-  const client = new SolverClient({
-    createWorker: () => {
-      const worker = new StandInWorker();
-      workers.push(worker);
-      return worker;
-    },
-    onOutcome: (outcome) => outcomes.push(outcome),
-    watchdogMs: 60_000,
-  });
-  return { client, workers, outcomes };
-}
+const setup = standInClient;
 
 const statusOf = (outcome: SolveOutcome) =>
   outcome.ok ? '' : errorStatusText(outcome.message, outcome.cause);

@@ -5,43 +5,9 @@
 import { describe, expect, it } from 'vitest';
 import { type Project, solveProject } from '../src/core/index.ts';
 import { demoProject } from '../src/state/demoProject.ts';
-import type { SolveReply, SolveRequest, WorkerLike } from '../src/worker/protocol.ts';
-import { type SolveOutcome, SolverClient } from '../src/worker/solverClient.ts';
+import { standInClient } from './helpers/standInWorker.ts';
 
-class StandInWorker implements WorkerLike {
-  received: SolveRequest[] = [];
-  terminated = false;
-  onmessage: ((event: MessageEvent<SolveReply>) => void) | null = null;
-  onerror: ((event: ErrorEvent) => void) | null = null;
-  postMessage(message: SolveRequest): void {
-    this.received.push(message);
-  }
-  terminate(): void {
-    this.terminated = true;
-  }
-  answer(request: SolveRequest): void {
-    const reply: SolveReply = { id: request.id, ok: true, results: solveProject(request.project) };
-    this.onmessage?.({ data: reply } as MessageEvent<SolveReply>);
-  }
-  die(message: string): void {
-    this.onerror?.({ message, preventDefault() {} } as ErrorEvent);
-  }
-}
-
-function setup() {
-  const workers: StandInWorker[] = [];
-  const outcomes: SolveOutcome[] = [];
-  const client = new SolverClient({
-    createWorker: () => {
-      const worker = new StandInWorker();
-      workers.push(worker);
-      return worker;
-    },
-    onOutcome: (outcome) => outcomes.push(outcome),
-    watchdogMs: 60_000,
-  });
-  return { client, workers, outcomes };
-}
+const setup = standInClient;
 
 const spanOf = (lengthM: number): Project => ({
   ...demoProject,
