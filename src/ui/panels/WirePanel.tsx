@@ -7,6 +7,7 @@ import {
   WIRE_CATALOG,
   type WireProperties,
 } from '../../core/index.ts';
+import type { Quantity } from '../../core/units.ts';
 import { setWire } from '../../state/projectEdits.ts';
 import { useProjectStore } from '../../state/projectStore.ts';
 import { useUiStore } from '../../state/uiStore.ts';
@@ -67,9 +68,18 @@ function CataloguePicker({ selectedId }: { selectedId: string }) {
   );
 }
 
+type WireNumber = keyof Omit<CustomWire, 'label'>;
+
+/** The wire's numbers, in the order shown, with their quantity and the digits for display. */
+const WIRE_NUMBERS: { key: WireNumber; label: string; quantity: Quantity; digits?: number }[] = [
+  { key: 'diameter', label: 'Diameter', quantity: 'diameter' },
+  { key: 'massPerLength', label: 'Mass', quantity: 'massPerLength', digits: 3 },
+  { key: 'breakingLoad', label: 'Minimum breaking load', quantity: 'force' },
+  { key: 'axialStiffness', label: 'Axial stiffness EA', quantity: 'stiffness', digits: 0 },
+  { key: 'thermalExpansion', label: 'Thermal expansion', quantity: 'expansion' },
+];
+
 function CustomValues({ wire }: { wire: CustomWire }) {
-  const field = (key: keyof Omit<CustomWire, 'label'>) => (value: number) =>
-    setWire({ ...wire, [key]: value });
   return (
     <div className="field-grid">
       <TextField
@@ -78,57 +88,32 @@ function CustomValues({ wire }: { wire: CustomWire }) {
         value={wire.label}
         edit={(label) => setWire({ ...wire, label })}
       />
-      <NumberField
-        path="wire.diameter"
-        label="Diameter"
-        quantity="diameter"
-        value={wire.diameter}
-        edit={field('diameter')}
-      />
-      <NumberField
-        path="wire.massPerLength"
-        label="Mass"
-        quantity="massPerLength"
-        value={wire.massPerLength}
-        edit={field('massPerLength')}
-      />
-      <NumberField
-        path="wire.breakingLoad"
-        label="Minimum breaking load"
-        quantity="force"
-        value={wire.breakingLoad}
-        edit={field('breakingLoad')}
-      />
-      <NumberField
-        path="wire.axialStiffness"
-        label="Axial stiffness EA"
-        quantity="stiffness"
-        value={wire.axialStiffness}
-        edit={field('axialStiffness')}
-      />
-      <NumberField
-        path="wire.thermalExpansion"
-        label="Thermal expansion"
-        quantity="expansion"
-        value={wire.thermalExpansion}
-        edit={field('thermalExpansion')}
-      />
+      {WIRE_NUMBERS.map(({ key, label, quantity }) => (
+        <NumberField
+          key={key}
+          path={`wire.${key}`}
+          label={label}
+          quantity={quantity}
+          value={wire[key]}
+          edit={(value) => setWire({ ...wire, [key]: value })}
+        />
+      ))}
     </div>
   );
 }
 
+/** A catalogue wire's data (thermal expansion is in the catalogue listing and the report). */
 function WireFacts({ wire }: { wire: WireProperties }) {
   const units = useUiStore((s) => s.unitSystem);
+  const shown = WIRE_NUMBERS.filter((n) => n.key !== 'thermalExpansion');
   return (
     <dl className="facts">
-      <dt>Diameter</dt>
-      <dd>{show(wire.diameter, 'diameter', units)}</dd>
-      <dt>Mass</dt>
-      <dd>{show(wire.massPerLength, 'massPerLength', units, 3)}</dd>
-      <dt>Minimum breaking load</dt>
-      <dd>{show(wire.breakingLoad, 'force', units)}</dd>
-      <dt>Axial stiffness EA</dt>
-      <dd>{show(wire.axialStiffness, 'stiffness', units, 0)}</dd>
+      {shown.map(({ key, label, quantity, digits }) => (
+        <div key={key} className="fact">
+          <dt>{label}</dt>
+          <dd>{show(wire[key], quantity, units, digits)}</dd>
+        </div>
+      ))}
     </dl>
   );
 }
