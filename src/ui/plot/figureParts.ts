@@ -84,19 +84,30 @@ export function zoneTraces(project: Project, units: UnitSystem): Data[] {
   });
 }
 
-export function supportTrace(project: Project, units: UnitSystem): Data {
+/**
+ * The fixings: at their heights in the side view, or on the line of the fixings (y = 0) seen
+ * from above in the plan view.
+ */
+export function supportTrace(
+  project: Project,
+  units: UnitSystem,
+  view: 'side' | 'plan' = 'side',
+): Data {
   const len = (m: number) => fromSi(m, 'length', units);
+  const plan = view === 'plan';
   return {
     type: 'scatter',
     mode: 'text+markers',
     name: 'Supports',
     x: project.supports.map((s) => len(s.x)),
-    y: project.supports.map((s) => len(s.z)),
+    y: project.supports.map((s) => (plan ? 0 : len(s.z))),
     text: project.supports.map((s, i) => s.label || `Support ${i + 1}`),
     textposition: project.supports.map((_, i) =>
       i === 0 ? 'top right' : i === project.supports.length - 1 ? 'top left' : 'top center',
     ),
-    marker: { symbol: 'triangle-down', size: 12, color: '#333333' },
+    marker: plan
+      ? { symbol: 'square', size: 10, color: '#333333' }
+      : { symbol: 'triangle-down', size: 12, color: '#333333' },
     hovertemplate: '%{text}<extra></extra>',
   };
 }

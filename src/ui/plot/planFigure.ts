@@ -7,6 +7,7 @@ import type { Annotation, Data, Layout } from 'plotly.js';
 import type { CaseResult, Project, ProjectResults } from '../../core/index.ts';
 import { fromSi, type UnitSystem, unitSymbol } from '../../core/units.ts';
 import { caseColour } from './colours.ts';
+import { supportTrace } from './figureParts.ts';
 
 function swingTrace(result: CaseResult, index: number, units: UnitSystem): Data | null {
   const profile = result.profile;
@@ -26,23 +27,6 @@ function swingTrace(result: CaseResult, index: number, units: UnitSystem): Data 
     hovertemplate:
       `x %{x:.2f} ${lu}<br>swing %{y:.3f} ${lu}<br>tension %{customdata:.0f} ${fu}` +
       '<extra>%{fullData.name}</extra>',
-  };
-}
-
-function fixingTrace(project: Project, units: UnitSystem): Data {
-  const len = (m: number) => fromSi(m, 'length', units);
-  return {
-    type: 'scatter',
-    mode: 'text+markers',
-    name: 'Supports',
-    x: project.supports.map((s) => len(s.x)),
-    y: project.supports.map(() => 0),
-    text: project.supports.map((s, i) => s.label || `Support ${i + 1}`),
-    textposition: project.supports.map((_, i) =>
-      i === 0 ? 'top right' : i === project.supports.length - 1 ? 'top left' : 'top center',
-    ),
-    marker: { symbol: 'square', size: 10, color: '#333333' },
-    hovertemplate: '%{text}<extra></extra>',
   };
 }
 
@@ -91,7 +75,7 @@ export function planTraces(project: Project, results: ProjectResults, units: Uni
     const trace = swingTrace(result, index, units);
     if (trace) data.push(trace);
   });
-  data.push(fixingTrace(project, units));
+  data.push(supportTrace(project, units, 'plan'));
   return data;
 }
 
