@@ -6,7 +6,8 @@
 import { existsSync } from 'node:fs';
 import { defineConfig, devices } from '@playwright/test';
 
-const PORT = 4317;
+// E2E_PORT lets several checkouts run their browser tests side by side.
+const PORT = Number(process.env.E2E_PORT ?? 4317);
 const isCi = Boolean(process.env.CI);
 
 function systemChromium(): string | undefined {
