@@ -1,5 +1,13 @@
 /** Public entry of the Sagwright core: the project contract, the solver, the catalogue, validation. */
 
+export {
+  AS_BUILT_KINDS,
+  type AsBuiltKind,
+  type AsBuiltMeasurement,
+  type AsBuiltResult,
+  solveAsBuilt,
+  validateAsBuilt,
+} from './asBuilt.ts';
 export { CAUTION_SUMMARY, CAUTIONS } from './cautions.ts';
 export * from './project.ts';
 export { solveProject } from './solveProject.ts';

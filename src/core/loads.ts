@@ -2,7 +2,8 @@
  * Loads per metre for one weather case (SI). Wire: self weight w = m g and radial ice
  * ρ_ice g π t (d + t) per metre of wire; wind q C_f (d + 2t) with q = ρ_air V² / 2 (N/m).
  * Hung uniform loads act per horizontal metre (with ice and wind on their own diameter);
- * point loads are vertical forces (N). Cases may leave the hung loads out.
+ * point loads are vertical forces (N). Cases may leave the hung loads out. Moving loads are
+ * not here: movingLoads.ts places them one position at a time.
  */
 import type { Environment, Load, WeatherCase } from './project.ts';
 import type { WireProperties } from './wireCatalog.ts';
@@ -81,7 +82,7 @@ export function caseLoads(
     if (load.type === 'point') {
       const forceN = load.force ?? (load.mass ?? 0) * env.gravity;
       result.points.push({ x: load.x, forceN });
-    } else {
+    } else if (load.type === 'uniform') {
       const d = load.diameter ?? 0;
       const hasArea = d > 0;
       result.uniform.push({
@@ -100,7 +101,7 @@ export function loadBreakpoints(loads: readonly Load[]): number[] {
   const points: number[] = [];
   for (const load of loads) {
     if (load.type === 'point') points.push(load.x);
-    else points.push(load.from, load.to);
+    else if (load.type === 'uniform') points.push(load.from, load.to);
   }
   return points;
 }

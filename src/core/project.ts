@@ -64,7 +64,23 @@ export interface UniformLoad {
   label?: string;
 }
 
-export type Load = PointLoad | UniformLoad;
+/**
+ * A point load that travels along [from, to] (a pulley basket, a trolley, a sign being hauled
+ * across). It is not on the wire when the wire is set up; each case reports its envelope.
+ */
+export interface MovingLoad {
+  type: 'moving';
+  /** m along the line. */
+  from: number;
+  to: number;
+  /** kg (exactly one of mass or force). */
+  mass?: number;
+  /** N, downward. */
+  force?: number;
+  label?: string;
+}
+
+export type Load = PointLoad | UniformLoad | MovingLoad;
 
 export interface InstallationTarget {
   horizontalTension?: number;
@@ -188,6 +204,23 @@ export interface CaseProfile {
   tension: number[];
 }
 
+/** The envelope of one moving load over its path in one case (positions in m along the line). */
+export interface MovingLoadResult {
+  label: string;
+  maxTension: number;
+  maxTensionAt: number;
+  /** Lowest clearance of the wire over the ground line while the load travels, m. */
+  clearance: number;
+  clearanceAt: number;
+  utilisation: number;
+  zoneClearances: (ZoneClearance & { at: number })[];
+  ok: boolean;
+  /** Number of positions solved (scan and refinement). */
+  positions: number;
+  /** Lowest and highest wire height at each x over the scanned positions (for the plot). */
+  band: { x: number[]; zLow: number[]; zHigh: number[] };
+}
+
 export interface CaseResult {
   name: string;
   /** False when the state could not be solved; messages say why. */
@@ -208,6 +241,8 @@ export interface CaseResult {
   iterations: number;
   temperature: number;
   profile?: CaseProfile;
+  /** One entry per moving load when the case carries the hung loads (else empty). */
+  movingLoads?: MovingLoadResult[];
 }
 
 export interface Governing {

@@ -8,6 +8,7 @@
 import { checkCase, largestSag, largestStateTension } from './caseChecks.ts';
 import { findInstallationTension, targetSpanIndex } from './installation.ts';
 import { loadStateOfCase } from './loads.ts';
+import { addMovingLoads } from './movingLoads.ts';
 import type { CaseResult, Project, ProjectResults } from './project.ts';
 import { buildProjectModel, type ProjectModel } from './projectModel.ts';
 import { setUpChart } from './setUpChart.ts';
@@ -110,6 +111,7 @@ export function solveProject(project: Project): ProjectResults {
   results.forEach((r, i) => {
     r.discretisationError = relativeChange(r, coarse[i]);
   });
+  if (target.ok) addMovingLoads(model, results, unstressed);
   const setUpSpan = targetSpanIndex(model, project.installation.target);
   return {
     unstressedLength: unstressed.reduce((a, b) => a + b, 0),

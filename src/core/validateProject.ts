@@ -123,10 +123,32 @@ function checkLoads(c: FieldChecker, raw: unknown, first: number, last: number):
       c.number(u.massPerLength, `${path}.massPerLength`, 0, 1000);
       if (u.diameter !== undefined) c.number(u.diameter, `${path}.diameter`, 0, 1);
       c.string(u.label, `${path}.label`, 100, false);
+    } else if (kind === 'moving') {
+      checkMovingLoad(c, item, path, first, last);
     } else {
-      c.fail(`${path}.type`, 'must be "point" or "uniform"');
+      c.fail(`${path}.type`, 'must be "point", "uniform" or "moving"');
     }
   });
+}
+
+function checkMovingLoad(
+  c: FieldChecker,
+  item: unknown,
+  path: string,
+  first: number,
+  last: number,
+) {
+  const m = c.object(item, path, ['type', 'from', 'to', 'mass', 'force', 'label']);
+  if (!m) return;
+  const from = c.number(m.from, `${path}.from`, first, last);
+  const to = c.number(m.to, `${path}.to`, first, last);
+  if (from !== undefined && to !== undefined && to <= from)
+    c.fail(`${path}.to`, 'must be greater than from');
+  c.string(m.label, `${path}.label`, 100, false);
+  if ((m.mass === undefined) === (m.force === undefined))
+    c.fail(path, 'needs exactly one of mass (kg) or force (N)');
+  else if (m.mass !== undefined) c.number(m.mass, `${path}.mass`, 0, 1e5);
+  else c.number(m.force, `${path}.force`, 0, 1e6);
 }
 
 function checkCases(c: FieldChecker, raw: unknown): string[] {

@@ -207,6 +207,15 @@ export function loadTable(project: Project, units: UnitSystem): Table {
             ? fq(units, 'mass', load.mass)
             : fq(units, 'force', load.force ?? 0),
         ];
+      if (load.type === 'moving')
+        return [
+          label,
+          'moving',
+          `travels ${fq(units, 'length', load.from)} to ${fq(units, 'length', load.to)}`,
+          load.mass !== undefined
+            ? fq(units, 'mass', load.mass)
+            : fq(units, 'force', load.force ?? 0),
+        ];
       return [
         label,
         'uniform',
