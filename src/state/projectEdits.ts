@@ -118,10 +118,12 @@ export const addLoad =
   (p) => {
     const first = p.supports[0].x;
     const last = p.supports[p.supports.length - 1].x;
-    const load: Load =
-      kind === 'point'
-        ? { type: 'point', x: (first + last) / 2, mass: 1, label: 'Lamp' }
-        : { type: 'uniform', from: first, to: last, massPerLength: 0.1, label: 'Cable' };
+    const loads: Record<Load['type'], Load> = {
+      point: { type: 'point', x: (first + last) / 2, mass: 1, label: 'Lamp' },
+      uniform: { type: 'uniform', from: first, to: last, massPerLength: 0.1, label: 'Cable' },
+      moving: { type: 'moving', from: first, to: last, mass: 10, label: 'Trolley' },
+    };
+    const load = loads[kind];
     return { ...p, loads: [...p.loads, load] };
   };
 

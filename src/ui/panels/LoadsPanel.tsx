@@ -1,10 +1,14 @@
-/** What hangs on the wire: point loads (lamps, signs) and part-span loads (cables), add/remove/edit. */
+/**
+ * What hangs on the wire: point loads (lamps, signs), part-span loads (cables) and moving loads
+ * (a basket or trolley that travels along the wire); add/remove/edit.
+ */
 import type { Load, PointLoad, UniformLoad } from '../../core/index.ts';
 import * as edits from '../../state/projectEdits.ts';
 import { useProjectStore } from '../../state/projectStore.ts';
 import { applyEdit } from '../fields/ChoiceFields.tsx';
 import { NumberField } from '../fields/NumberField.tsx';
 import { TextField } from '../fields/TextField.tsx';
+import { MovingLoadRow } from './MovingLoadRow.tsx';
 import { Row } from './Row.tsx';
 
 function PointRow({ load, index }: { load: PointLoad; index: number }) {
@@ -84,8 +88,14 @@ function UniformRow({ load, index }: { load: UniformLoad; index: number }) {
   );
 }
 
+const LOAD_KIND_NAMES: Record<Load['type'], string> = {
+  point: 'Point load',
+  uniform: 'Part-span load',
+  moving: 'Moving load',
+};
+
 function LoadRow({ load, index }: { load: Load; index: number }) {
-  const kind = load.type === 'point' ? 'Point load' : 'Part-span load';
+  const kind = LOAD_KIND_NAMES[load.type];
   const name = load.label || `Load ${index + 1}`;
   return (
     <Row label={`${kind} ${index + 1}`}>
@@ -96,11 +106,9 @@ function LoadRow({ load, index }: { load: Load; index: number }) {
         value={load.label ?? ''}
         edit={(label) => edits.patchLoad(index, { label })}
       />
-      {load.type === 'point' ? (
-        <PointRow load={load} index={index} />
-      ) : (
-        <UniformRow load={load} index={index} />
-      )}
+      {load.type === 'point' && <PointRow load={load} index={index} />}
+      {load.type === 'uniform' && <UniformRow load={load} index={index} />}
+      {load.type === 'moving' && <MovingLoadRow load={load} index={index} />}
       <button type="button" onClick={() => applyEdit(edits.removeLoad(index))}>
         Remove {name}
       </button>
@@ -124,6 +132,9 @@ export function LoadsPanel() {
         </button>
         <button type="button" onClick={() => applyEdit(edits.addLoad('uniform'))}>
           Add a part-span load
+        </button>
+        <button type="button" onClick={() => applyEdit(edits.addLoad('moving'))}>
+          Add a moving load
         </button>
       </div>
     </section>

@@ -1,0 +1,51 @@
+/** The fields of a moving load: the path it travels (from, to) and its mass or force. */
+import type { MovingLoad } from '../../core/index.ts';
+import * as edits from '../../state/projectEdits.ts';
+import { NumberField } from '../fields/NumberField.tsx';
+
+export function MovingLoadRow({ load, index }: { load: MovingLoad; index: number }) {
+  const path = `loads[${index}]`;
+  const name = load.label || `Load ${index + 1}`;
+  return (
+    <>
+      <NumberField
+        path={`${path}.from`}
+        context={name}
+        label="Travels from"
+        quantity="length"
+        value={load.from}
+        edit={(from) => edits.patchLoad(index, { from })}
+      />
+      <NumberField
+        path={`${path}.to`}
+        context={name}
+        label="To"
+        quantity="length"
+        value={load.to}
+        edit={(to) => edits.patchLoad(index, { to })}
+      />
+      {load.force !== undefined ? (
+        <NumberField
+          path={`${path}.force`}
+          context={name}
+          label="Force"
+          quantity="force"
+          value={load.force}
+          edit={(force) => edits.patchLoad(index, { force })}
+        />
+      ) : (
+        <NumberField
+          path={`${path}.mass`}
+          context={name}
+          label="Mass"
+          quantity="mass"
+          value={load.mass ?? 0}
+          edit={(mass) => edits.patchLoad(index, { mass })}
+        />
+      )}
+      <p className="muted moving-caution" data-testid="moving-caution">
+        The envelope shows the worst position for the wire; never for carrying people.
+      </p>
+    </>
+  );
+}
