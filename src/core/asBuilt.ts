@@ -67,16 +67,29 @@ export function validateAsBuilt(project: Project, raw: unknown): ValidationIssue
   if (!m) return c.issues;
   c.number(m.temperature, 'asBuilt.temperature', -80, 80);
   const kind = c.oneOf(m.kind, 'asBuilt.kind', AS_BUILT_KINDS);
-  c.positive(m.value, 'asBuilt.value');
-  if (m.x === undefined) return c.issues;
-  if (kind !== 'sag') c.fail('asBuilt.x', 'applies to a sag measurement only');
+  const value = c.positive(m.value, 'asBuilt.value');
   const xs = project.supports.map((s) => s.x);
-  const x = c.number(m.x, 'asBuilt.x', xs[0], xs[xs.length - 1], {
-    minExclusive: true,
-    maxExclusive: true,
-  });
-  if (x !== undefined && xs.some((s) => Math.abs(s - x) < 1e-6))
-    c.fail('asBuilt.x', 'must be inside a span, not at a support');
+  let x: number | undefined;
+  if (m.x !== undefined) {
+    if (kind !== 'sag') c.fail('asBuilt.x', 'applies to a sag measurement only');
+    const at = c.number(m.x, 'asBuilt.x', xs[0], xs[xs.length - 1], {
+      minExclusive: true,
+      maxExclusive: true,
+    });
+    if (at !== undefined && xs.some((s) => Math.abs(s - at) < 1e-6))
+      c.fail('asBuilt.x', 'must be inside a span, not at a support');
+    x = at;
+  }
+  if (kind === 'sag' && value !== undefined) {
+    const lengths = xs.slice(1).map((s, j) => s - xs[j]);
+    const target = project.installation.target;
+    const j =
+      x !== undefined
+        ? Math.max(0, xs.findIndex((s) => s > x) - 1)
+        : (target.span ?? lengths.indexOf(Math.max(...lengths)));
+    if (value >= lengths[j] / 2)
+      c.fail('asBuilt.value', `must be less than half the span (${(lengths[j] / 2).toFixed(3)} m)`);
+  }
   return c.issues;
 }
 
