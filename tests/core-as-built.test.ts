@@ -9,7 +9,7 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { largestSpanSag } from '../src/core/caseChecks.ts';
-import { pluckFrequency, pulseReturnTime } from '../src/core/fieldChecks.ts';
+import { pulseReturnTime, type WaveWire } from '../src/core/fieldChecks.ts';
 import {
   type AsBuiltMeasurement,
   type Project,
@@ -47,8 +47,11 @@ describe.each([['examples/courtyard-lights.json'], ['examples/workshop-yard-incl
     const T = 8;
     const loaded = stateAt(project, design.unstressedLength, T, project.installation.withLoads);
     const bare = stateAt(project, design.unstressedLength, T, false);
-    const mass = bare.model.wire.massPerLength / thermalFactor(bare.model, T);
-    const EA = bare.model.wire.axialStiffness;
+    const wave: WaveWire = {
+      massPerLength: bare.model.wire.massPerLength,
+      axialStiffness: bare.model.wire.axialStiffness,
+      thermalFactor: thermalFactor(bare.model, T),
+    };
     const x = 0.37 * (project.supports[1].x - project.supports[0].x) + project.supports[0].x;
     const s = loaded.span;
     const measurements: AsBuiltMeasurement[] = [
@@ -60,8 +63,8 @@ describe.each([['examples/courtyard-lights.json'], ['examples/workshop-yard-incl
         value: s.z0 + s.chordSlope * (x - s.x0) - heightAt(s, loaded.H, x),
         x,
       },
-      { temperature: T, kind: 'returnTime', value: pulseReturnTime(bare.span, bare.H, mass, EA) },
-      { temperature: T, kind: 'frequency', value: pluckFrequency(bare.span, bare.H, mass, EA) },
+      { temperature: T, kind: 'returnTime', value: pulseReturnTime(bare.span, bare.H, wave) },
+      { temperature: T, kind: 'frequency', value: 1 / pulseReturnTime(bare.span, bare.H, wave) },
     ];
     for (const m of measurements) {
       it(`${m.kind}${m.x !== undefined ? ' at x' : ''} gives back the cut length to 1e-9 m`, () => {
@@ -160,11 +163,12 @@ describe('wave field checks against closed forms', () => {
     solveSectionForLength(model.spans, wire, solveProject(project).unstressedLength, H);
     const span = model.spans[0];
     const f = largestSpanSag({ span, tensionN: H });
-    const t = pulseReturnTime(span, H, mu, 1e15);
+    const stiff = { massPerLength: mu, axialStiffness: 1e15, thermalFactor: 1 };
+    const t = pulseReturnTime(span, H, stiff);
     const closed = 2 * Math.sqrt(mu / H) * (l + (4 * f * f) / (3 * l));
     expect(Math.abs(t / closed - 1)).toBeLessThan(1e-6);
     const taut = Math.sqrt(H / mu) / (2 * l);
-    expect(Math.abs(pluckFrequency(span, H, mu, 1e15) / taut - 1)).toBeLessThan(1e-4);
+    expect(Math.abs(1 / pulseReturnTime(span, H, stiff) / taut - 1)).toBeLessThan(1e-4);
   });
 
   it('the stretch slows the wave by 1/√(1 + T/EA) (mass per stretched metre)', () => {
@@ -180,8 +184,16 @@ describe('wave field checks against closed forms', () => {
     solveSectionForLength(model.spans, wire, solveProject(project).unstressedLength, 5000);
     const span = model.spans[0];
     const H = solveProject(project).cases[0].horizontalTension;
-    const stiff = pulseReturnTime(span, H, 0.05, 1e15);
-    const soft = pulseReturnTime(span, H, 0.05, 2e5);
+    const stiff = pulseReturnTime(span, H, {
+      massPerLength: 0.05,
+      axialStiffness: 1e15,
+      thermalFactor: 1,
+    });
+    const soft = pulseReturnTime(span, H, {
+      massPerLength: 0.05,
+      axialStiffness: 2e5,
+      thermalFactor: 1,
+    });
     expect(soft / stiff).toBeCloseTo(1 / Math.sqrt(1 + 5000 / 2e5), 5);
   });
 });

@@ -106,8 +106,11 @@ function measureAt(model: ProjectModel, m: AsBuiltMeasurement, spanIndex: number
     if (m.x === undefined) return largestSpanSag({ span, tensionN: H });
     return span.z0 + span.chordSlope * (m.x - span.x0) - heightAt(span, H, m.x);
   }
-  const mass = model.wire.massPerLength / thermalFactor(model, m.temperature);
-  const time = pulseReturnTime(span, H, mass, model.wire.axialStiffness);
+  const time = pulseReturnTime(span, H, {
+    massPerLength: model.wire.massPerLength,
+    axialStiffness: model.wire.axialStiffness,
+    thermalFactor: thermalFactor(model, m.temperature),
+  });
   return m.kind === 'returnTime' ? time : 1 / time;
 }
 
