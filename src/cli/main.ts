@@ -1,14 +1,16 @@
 /**
  * Sagwright command line: `solve FILE... [--table]` prints results (JSON, or a table for people);
- * `--catalog` lists the wire catalogue. Exit 0 solved, 2 invalid file, 1 a case not solved.
+ * `--as-built TEMP:KIND=VALUE[@X]` adds the as-built check; `--catalog` lists the wire catalogue.
+ * Exit 0 solved, 2 invalid file, 1 a case not solved.
  */
 import { readFileSync } from 'node:fs';
 import { solveProject, validateProject, WIRE_CATALOG } from '../core/index.ts';
+import { addAsBuilt, asBuiltLines, takeAsBuiltFlag } from './asBuiltFlag.ts';
 import { catalogTable, resultsTable } from './table.ts';
 
 const MAX_FILE_BYTES = 5 * 1024 * 1024;
 const USAGE =
-  'usage: npm run solve -- FILE.json [FILE.json ...] [--table]\n       npm run solve -- --catalog';
+  'usage: npm run solve -- FILE.json [FILE.json ...] [--table] [--as-built TEMP:KIND=VALUE[@X]]\n       npm run solve -- --catalog';
 
 function readProject(file: string): { ok: true; value: unknown } | { ok: false; message: string } {
   let text: string;
@@ -26,7 +28,13 @@ function readProject(file: string): { ok: true; value: unknown } | { ok: false; 
   }
 }
 
-function main(args: string[]): number {
+function main(allArgs: string[]): number {
+  const asBuilt = takeAsBuiltFlag(allArgs);
+  if (asBuilt.error) {
+    process.stderr.write(`${asBuilt.error}\n${USAGE}\n`);
+    return 2;
+  }
+  const args = asBuilt.rest;
   if (args.includes('--catalog')) {
     process.stdout.write(`${catalogTable(WIRE_CATALOG)}\n`);
     return 0;
@@ -61,7 +69,14 @@ function main(args: string[]): number {
         status = 1;
       }
     }
-    if (table) process.stdout.write(`${resultsTable(checked.project.title, results)}\n\n`);
+    if (asBuilt.spec !== undefined) {
+      const asBuiltStatus = addAsBuilt(file, checked.project, results, asBuilt.spec);
+      if (asBuiltStatus === 2) return 2;
+      status = Math.max(status, asBuiltStatus);
+    }
+    const asBuiltText = results.asBuilt ? asBuiltLines(results.asBuilt).join('\n') : '';
+    if (table)
+      process.stdout.write(`${resultsTable(checked.project.title, results)}${asBuiltText}\n\n`);
     else outputs.push(files.length === 1 ? results : { file, results });
   }
   if (!table)

@@ -1,5 +1,5 @@
 /** Plain-text tables for people: the results of a project and the wire catalogue. */
-import type { ProjectResults, WireProperties } from '../core/index.ts';
+import type { MovingLoadResult, ProjectResults, WireProperties } from '../core/index.ts';
 
 /** Columns padded to a common width: the first `leftColumns` left-aligned; a free-text last column. */
 function pad(cells: string[][], leftColumns = 1, freeLast = false): string {
@@ -13,6 +13,10 @@ function pad(cells: string[][], leftColumns = 1, freeLast = false): string {
 }
 
 const n = (value: number, digits: number) => value.toFixed(digits);
+
+function movingLoadLine(m: MovingLoadResult): string {
+  return `  ${m.label} (moving): largest tension ${n(m.maxTension, 0)} N with the load at ${n(m.maxTensionAt, 2)} m; lowest clearance ${n(m.clearance, 3)} m with the load at ${n(m.clearanceAt, 2)} m — ${m.ok ? 'pass' : 'FAIL'}`;
+}
 
 export function resultsTable(title: string, results: ProjectResults): string {
   const header = [
@@ -62,6 +66,7 @@ export function resultsTable(title: string, results: ProjectResults): string {
         `  ${z.label}: clearance ${n(z.clearance, 3)} m, required ${n(z.required, 3)} m — ${z.ok ? 'pass' : 'FAIL'}`,
       );
     }
+    for (const m of c.movingLoads ?? []) lines.push(movingLoadLine(m));
     for (const m of c.messages) lines.push(`  ! ${m}`);
     lines.push(`  estimated discretisation error ${c.discretisationError.toExponential(1)}`);
   }

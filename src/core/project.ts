@@ -3,6 +3,7 @@
  * SI units everywhere: m, kg, N, °C, m/s. This is a contract shared by the CLI, the core,
  * the UI, saved files and share links: extend it, never rename or re-unit a field.
  */
+import type { AsBuiltResult } from './asBuilt.ts';
 
 export const PROJECT_FORMAT = 'sagwright-project';
 export const PROJECT_VERSION = 1;
@@ -270,4 +271,6 @@ export interface ProjectResults {
   setUpChart: SetUpRow[];
   /** The span whose sag the set-up chart lists (0-based). */
   setUpSpan: number;
+  /** The as-built check, when a site measurement was given (CLI --as-built, workbench). */
+  asBuilt?: AsBuiltResult;
 }
