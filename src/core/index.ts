@@ -8,7 +8,13 @@ export {
   solveAsBuilt,
   validateAsBuilt,
 } from './asBuilt.ts';
-export { CAUTION_SUMMARY, CAUTIONS } from './cautions.ts';
+export {
+  CAUTION_SUMMARY,
+  CAUTIONS,
+  type Caution,
+  cautionsFor,
+  MOVING_LOAD_CAUTION,
+} from './cautions.ts';
 export * from './project.ts';
 export { solveProject } from './solveProject.ts';
 export { type ValidationIssue, type ValidationResult, validateProject } from './validateProject.ts';

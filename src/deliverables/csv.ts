@@ -3,7 +3,7 @@
  * clearance above the ground line and wire tension, with units in the headers. The cautions
  * head the file as '#' comment lines so the data never travels without them.
  */
-import { CAUTIONS, type Project, type ProjectResults } from '../core/index.ts';
+import { cautionsFor, type Project, type ProjectResults } from '../core/index.ts';
 import { toDisplay, type UnitSystem, unitSymbol } from './displayUnits.ts';
 import { groundHeightAt } from './groundLine.ts';
 
@@ -35,7 +35,7 @@ function commentLines(project: Project, generatedAt: Date): string[] {
   return [
     `# Sagwright wire profiles: ${project.title.replace(/[\r\n]+/g, ' ')}`,
     `# Generated ${generatedAt.toISOString()}; heights above the ground datum, clearance above the ground line.`,
-    ...CAUTIONS.map((caution) => `# Caution - ${caution.title}: ${caution.text}`),
+    ...cautionsFor(project).map((caution) => `# Caution - ${caution.title}: ${caution.text}`),
   ];
 }
 

@@ -5,7 +5,7 @@
  * is asked for.
  */
 import type { jsPDF } from 'jspdf';
-import { CAUTION_SUMMARY, CAUTIONS, type Project, type ProjectResults } from '../core/index.ts';
+import { CAUTION_SUMMARY, cautionsFor, type Project, type ProjectResults } from '../core/index.ts';
 import { formatQuantity as fq, type UnitSystem } from './displayUnits.ts';
 import { ACCENT, MUTED, PdfWriter, pdfText, RULE } from './pdfWriter.ts';
 import {
@@ -258,7 +258,7 @@ function closingSections(
   for (const text of methodParagraphs(project, results, options.parabola, options.unitSystem))
     w.paragraph(text);
   w.heading('Cautions');
-  for (const caution of CAUTIONS) w.paragraph(`${caution.title}. ${caution.text}`);
+  for (const caution of cautionsFor(project)) w.paragraph(`${caution.title}. ${caution.text}`);
 }
 
 export async function buildPdfReport(

@@ -2,6 +2,7 @@
  * Wires the document store to the solver worker and the results store: every new document is
  * sent; the newest reply lands in the results store; a failure keeps the last good results.
  */
+import { useAsBuiltStore } from '../state/asBuiltStore.ts';
 import { useProjectStore } from '../state/projectStore.ts';
 import { useResultsStore } from '../state/resultsStore.ts';
 import type { WorkerLike } from './protocol.ts';
@@ -31,14 +32,24 @@ function applyOutcome(outcome: SolveOutcome): void {
 /** Starts solving the current document and every later one; returns a stop function. */
 export function connectSolver(createWorker: () => WorkerLike = createSolverWorker): () => void {
   const client = new SolverClient({ createWorker, onOutcome: applyOutcome });
-  client.solve(useProjectStore.getState().project);
+  const send = () =>
+    client.solve(
+      useProjectStore.getState().project,
+      useAsBuiltStore.getState().measurement ?? undefined,
+    );
+  send();
   const unsubscribe = useProjectStore.subscribe((state, previous) => {
     if (state.project === previous.project) return;
     useResultsStore.setState({ stale: true });
-    client.solve(state.project);
+    send();
+  });
+  const unsubscribeAsBuilt = useAsBuiltStore.subscribe((state, previous) => {
+    if (state.measurement === previous.measurement) return;
+    send();
   });
   return () => {
     unsubscribe();
+    unsubscribeAsBuilt();
     client.dispose();
   };
 }

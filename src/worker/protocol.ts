@@ -2,11 +2,13 @@
  * Messages between the main thread and the solver worker: a request carries an id and the
  * document; the reply carries the same id and either the results or the reason for failure.
  */
-import type { Project, ProjectResults } from '../core/index.ts';
+import type { AsBuiltMeasurement, Project, ProjectResults } from '../core/index.ts';
 
 export interface SolveRequest {
   id: number;
   project: Project;
+  /** A site measurement: the reply's results then carry `asBuilt`. */
+  asBuilt?: AsBuiltMeasurement;
 }
 
 export type SolveReply =

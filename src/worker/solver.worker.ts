@@ -2,7 +2,7 @@
  * The solver worker: validates and solves each document it is sent and replies with the
  * request's id, so the main thread can drop replies to requests it no longer wants.
  */
-import { solveProject, validateProject } from '../core/index.ts';
+import { solveAsBuilt, solveProject, validateAsBuilt, validateProject } from '../core/index.ts';
 import type { SolveReply, SolveRequest } from './protocol.ts';
 
 function solve(request: SolveRequest): SolveReply {
@@ -12,7 +12,11 @@ function solve(request: SolveRequest): SolveReply {
     return { id: request.id, ok: false, message: reasons };
   }
   try {
-    return { id: request.id, ok: true, results: solveProject(checked.project) };
+    const results = solveProject(checked.project);
+    const m = request.asBuilt;
+    if (m && validateAsBuilt(checked.project, m).length === 0)
+      results.asBuilt = solveAsBuilt(checked.project, m, results);
+    return { id: request.id, ok: true, results };
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);
     return { id: request.id, ok: false, message };

@@ -4,7 +4,7 @@
  * superseded requests are dropped, and a worker that dies or stops answering is replaced and
  * the latest request sent again. Nothing here blocks: every call returns at once.
  */
-import type { Project, ProjectResults } from '../core/index.ts';
+import type { AsBuiltMeasurement, Project, ProjectResults } from '../core/index.ts';
 import type { SolveReply, SolveRequest, WorkerLike } from './protocol.ts';
 
 export type SolveOutcome =
@@ -40,8 +40,8 @@ export class SolverClient {
 
   constructor(private readonly options: SolverClientOptions) {}
 
-  solve(project: Project): void {
-    const request = { id: this.nextId++, project };
+  solve(project: Project, asBuilt?: AsBuiltMeasurement): void {
+    const request: SolveRequest = { id: this.nextId++, project, ...(asBuilt ? { asBuilt } : {}) };
     this.latestId = request.id;
     if (this.inFlight) this.pending = request;
     else this.send(request);

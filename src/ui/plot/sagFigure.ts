@@ -2,14 +2,16 @@
  * The sag plot as a pure Plotly figure spec (no DOM), so the workbench and exports draw the
  * same thing: each case's wire (solid) with its closed-form parabola (dashed), the ground
  * filled, clearance zones shaded at their required heights, supports, the lowest point and the
- * largest sag annotated. Values are converted to the chosen display units. The plan view
- * (options.view 'plan', planFigure.ts) shows the sideways swing in wind instead.
+ * largest sag annotated, and the band a moving load sweeps (movingBand.ts). Values are
+ * converted to the chosen display units. The plan view (options.view 'plan', planFigure.ts)
+ * shows the sideways swing in wind instead.
  */
 import type { Annotation, Data, Layout } from 'plotly.js';
 import type { CaseResult, Project, ProjectResults } from '../../core/index.ts';
 import { fromSi, type UnitSystem, unitSymbol } from '../../core/units.ts';
 import { caseColour } from './colours.ts';
 import { groundHeightAt, groundTraces, supportTrace, zoneTraces } from './figureParts.ts';
+import { movingLoadBands } from './movingBand.ts';
 import { largestDifference, parabolaHeights } from './parabola.ts';
 import { planLayout, planTraces } from './planFigure.ts';
 
@@ -139,7 +141,11 @@ export function buildSagFigure(
       parabola: null,
     };
   const lu = unitSymbol('length', unitSystem);
-  const data: Data[] = [...groundTraces(project, unitSystem), ...zoneTraces(project, unitSystem)];
+  const data: Data[] = [
+    ...groundTraces(project, unitSystem),
+    ...zoneTraces(project, unitSystem),
+    ...movingLoadBands(results, unitSystem),
+  ];
   let parabola: ParabolaComparison | null = null;
   results.cases.forEach((result, index) => {
     const drawn = caseTraces(project, result, index, unitSystem);
