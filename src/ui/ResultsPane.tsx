@@ -8,6 +8,8 @@ import { useDraftStore } from '../state/draftStore.ts';
 import { useProjectStore } from '../state/projectStore.ts';
 import { useResultsStore } from '../state/resultsStore.ts';
 import { useUiStore } from '../state/uiStore.ts';
+import { AsBuiltPanel } from './results/AsBuiltPanel.tsx';
+import { MovingLoadsTable } from './results/MovingLoadsTable.tsx';
 import { ReactionsTable } from './results/ReactionsTable.tsx';
 import { ResultsTable } from './results/ResultsTable.tsx';
 import { SetUpChart } from './results/SetUpChart.tsx';
@@ -67,7 +69,9 @@ export function ResultsPane() {
           </p>
           <SagPlot project={resultsProject} results={results} />
           <ResultsTable results={results} />
+          <MovingLoadsTable results={results} />
           <SetUpChart project={resultsProject} results={results} />
+          <AsBuiltPanel project={resultsProject} results={results} />
           <ReactionsTable results={results} />
           <SolverDetails results={results} />
         </div>
