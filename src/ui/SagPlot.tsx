@@ -69,6 +69,9 @@ function Caption({ id, figure, view, units }: CaptionProps) {
         ? ` — largest difference ${show(figure.parabola.differenceM, 'length', units, 4)} (${figure.parabola.caseName}).`
         : '.'}{' '}
       Shaded: ground and clearance zones at their required heights.
+      {figure.movingBands
+        ? ' Lightly shaded with a dotted lower edge: the heights each case’s wire takes while a moving load travels its path.'
+        : ''}
     </figcaption>
   );
 }

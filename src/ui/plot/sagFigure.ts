@@ -36,6 +36,8 @@ export interface SagFigure {
   data: Data[];
   layout: Partial<Layout>;
   parabola: ParabolaComparison | null;
+  /** True when the figure draws a moving-load band. */
+  movingBands?: boolean;
 }
 
 function caseTraces(
@@ -141,10 +143,11 @@ export function buildSagFigure(
       parabola: null,
     };
   const lu = unitSymbol('length', unitSystem);
+  const bands = movingLoadBands(results, unitSystem);
   const data: Data[] = [
     ...groundTraces(project, unitSystem),
     ...zoneTraces(project, unitSystem),
-    ...movingLoadBands(results, unitSystem),
+    ...bands,
   ];
   let parabola: ParabolaComparison | null = null;
   results.cases.forEach((result, index) => {
@@ -169,5 +172,5 @@ export function buildSagFigure(
     paper_bgcolor: '#ffffff',
     plot_bgcolor: '#ffffff',
   };
-  return { data, layout, parabola };
+  return { data, layout, parabola, movingBands: bands.length > 0 };
 }

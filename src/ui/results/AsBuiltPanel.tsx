@@ -38,7 +38,8 @@ function lengthChangeText(
   units: ReturnType<typeof useUiStore.getState>['unitSystem'],
 ) {
   const mm = a.lengthDifference * 1000;
-  const size = show(Math.abs(a.lengthDifference), 'length', units, units === 'si' ? 4 : 3);
+  // Millimetres (or inches): the differences a site tape measures.
+  const size = show(Math.abs(a.lengthDifference), 'diameter', units, 1);
   if (Math.abs(mm) < 0.05) return 'the same as the design';
   return `${size} ${mm > 0 ? 'longer' : 'shorter'} than the design's ${show(a.designUnstressedLength, 'length', units, 3)}`;
 }
