@@ -6,6 +6,7 @@
  */
 
 import { checkCase, largestSag, largestStateTension } from './caseChecks.ts';
+import { caseResultId, INSTALLATION_ID } from './caseIds.ts';
 import { findInstallationTension, targetSpanIndex } from './installation.ts';
 import { loadStateOfCase } from './loads.ts';
 import type { CaseResult, Project, ProjectResults } from './project.ts';
@@ -20,12 +21,14 @@ interface StateSummary {
 
 function checkState(
   model: ProjectModel,
+  id: string,
   name: string,
   temperature: number,
   state: StateSolution,
 ): CaseResult {
   const p = model.project;
   return checkCase({
+    id,
     name,
     temperature,
     spans: state.spans,
@@ -44,11 +47,12 @@ function checkState(
 function solveStates<T>(
   model: ProjectModel,
   tensionN: number,
-  finish: (name: string, temperature: number, state: StateSolution) => T,
+  finish: (id: string, name: string, temperature: number, state: StateSolution) => T,
   caseTensionGuesses?: readonly number[],
 ): { results: T[]; unstressed: number[] } {
   const installed = solveInstallation(model, tensionN);
-  const results = [finish(model.installation.name, model.installation.temperature, installed)];
+  const installation = model.installation;
+  const results = [finish(INSTALLATION_ID, installation.name, installation.temperature, installed)];
   for (const [i, weather] of model.project.cases.entries()) {
     const state = solveChangeOfState(
       model,
@@ -56,13 +60,18 @@ function solveStates<T>(
       installed.unstressed,
       caseTensionGuesses?.[i] ?? tensionN,
     );
-    results.push(finish(weather.name, weather.temperature, state));
+    results.push(finish(caseResultId(i), weather.name, weather.temperature, state));
   }
   return { results, unstressed: installed.unstressed };
 }
 
 /** Sag and largest tension only: what the discretisation estimate compares. */
-function summarise(_name: string, _temperature: number, state: StateSolution): StateSummary {
+function summarise(
+  _id: string,
+  _name: string,
+  _temperature: number,
+  state: StateSolution,
+): StateSummary {
   return { sag: largestSag(state.spans), maxTension: largestStateTension(state.spans) };
 }
 
@@ -84,15 +93,18 @@ function governing(project: Project, results: CaseResult[]) {
     if (r.utilisation > tension.utilisation) tension = r;
     if (margin(r) < margin(clearance)) clearance = r;
   }
-  return { tension: tension.name, clearance: clearance.name };
+  return {
+    governing: { tension: tension.name, clearance: clearance.name },
+    governingIds: { tension: tension.id, clearance: clearance.id },
+  };
 }
 
 /** Solve a project that has passed validateProject. Never throws for physical failures. */
 export function solveProject(project: Project): ProjectResults {
   const model = buildProjectModel(project);
   const target = findInstallationTension(model, project.installation.target);
-  const finish = (name: string, temperature: number, state: StateSolution) =>
-    checkState(model, name, temperature, state);
+  const finish = (id: string, name: string, temperature: number, state: StateSolution) =>
+    checkState(model, id, name, temperature, state);
   const { results, unstressed } = solveStates(model, target.tensionN, finish);
   results[0].iterations += target.evaluations;
   if (!target.ok) {
@@ -114,7 +126,7 @@ export function solveProject(project: Project): ProjectResults {
   return {
     unstressedLength: unstressed.reduce((a, b) => a + b, 0),
     cases: results,
-    governing: governing(project, results),
+    ...governing(project, results),
     setUpChart: setUpChart(model, unstressed, setUpSpan, target.tensionN),
     setUpSpan,
   };
