@@ -3,7 +3,8 @@
  * target fixes the installation tension and so each span's cut length; every weather case is a
  * change of state at those lengths. Each case's discretisation error is estimated against a mesh
  * with every element split in two (discretisation.ts); while the largest estimate is above
- * 1e-4 the whole project is solved again on that finer mesh (at most three times).
+ * 1e-4 the whole project is solved again on that finer mesh (at most six times, and never past
+ * 20 000 elements in a span).
  */
 
 import { checkCase } from './caseChecks.ts';
@@ -21,7 +22,7 @@ import { setUpChart } from './setUpChart.ts';
 import { type StateSolution, solveChangeOfState, solveInstallation } from './states.ts';
 
 /** Largest refinement of the project's mesh (each element split into this many at most). */
-const MAX_REFINEMENT = 8;
+const MAX_REFINEMENT = 64;
 /** No refinement beyond this many elements in one span (the comparison mesh has twice that). */
 const MAX_REFINED_ELEMENTS = 20000;
 
