@@ -186,7 +186,7 @@ export function sampleProfile(spans: readonly SolvedSpan[]): CaseProfile {
 
 const fmt = (value: number, digits = 2) => value.toFixed(digits);
 
-/** Above this sag/span the parabolic theory's H is visibly low (≈ 0.4 % at 5 %, 4.8 % at 20 %). */
+/** Above this sag/span the parabolic theory's H is visibly low (0.3 % at 5 %, 4.7 % at 20 %). */
 export const PARABOLIC_SAG_RATIO_LIMIT = 0.05;
 
 function parabolicNotes(spans: readonly SolvedSpan[], results: readonly SpanResult[]): string[] {
