@@ -1,5 +1,5 @@
 /**
- * The command line as a user runs it (DESIGN.md, "The project file and the CLI"): results JSON
+ * The command line as a user runs it (README.md, "Command line"): results JSON
  * equal to solveProject on the same file, a table with units, the catalogue, and exit codes
  * 0 solved and every check passes, 3 solved but a check fails, 2 invalid or unreadable file
  * (field path on stderr), 1 a case not solved.

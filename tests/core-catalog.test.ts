@@ -1,7 +1,7 @@
 /**
  * Wire catalogue: the factor method against published tables, and every entry's data sourced.
  * Sources: API Spec 9A Table C.1 (6x7 fibre core, grade 1770) [V]; ASTM A586-98 Table 1,
- * 1/2-in strand 96.8 mm², 0.774 kg/m [V] (REFERENCE.md).
+ * 1/2-in strand 96.8 mm², 0.774 kg/m [V] (doc/sources.md).
  */
 import { describe, expect, it } from 'vitest';
 import { ropeByFactors, WIRE_CATALOG } from '../src/core/wireCatalog.ts';
