@@ -4,6 +4,7 @@
  */
 import { useProjectStore } from '../state/projectStore.ts';
 import { useResultsStore } from '../state/resultsStore.ts';
+import { EDIT_MARK, markRevision, RESULT_MARK } from '../state/revision.ts';
 import type { WorkerLike } from './protocol.ts';
 import { type SolveOutcome, SolverClient } from './solverClient.ts';
 
@@ -16,6 +17,7 @@ function createSolverWorker(): WorkerLike {
 function applyOutcome(outcome: SolveOutcome): void {
   const current = useProjectStore.getState().project;
   if (outcome.ok) {
+    markRevision(RESULT_MARK, outcome.project);
     useResultsStore.setState({
       results: outcome.results,
       resultsProject: outcome.project,
@@ -34,6 +36,7 @@ export function connectSolver(createWorker: () => WorkerLike = createSolverWorke
   client.solve(useProjectStore.getState().project);
   const unsubscribe = useProjectStore.subscribe((state, previous) => {
     if (state.project === previous.project) return;
+    markRevision(EDIT_MARK, state.project);
     useResultsStore.setState({ stale: true });
     client.solve(state.project);
   });
