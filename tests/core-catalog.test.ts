@@ -42,3 +42,25 @@ describe('catalogue entries', () => {
     });
   }
 });
+
+describe('fibre rope stiffness at working load, not a secant to break', () => {
+  // Elongation of new 3-strand rope at 20 % of its breaking load (the working load at safety
+  // factor 5): nylon ≈ 12 %, polyester ≈ 5 % [M]; at break 25–35 % and 15–25 % [V].
+  const fibre = WIRE_CATALOG.filter((w) => w.kind === 'nylon rope' || w.kind === 'polyester rope');
+
+  it('every fibre rope: working load / EA gives the working elongation, and the source says so', () => {
+    expect(fibre.length).toBe(8);
+    for (const rope of fibre) {
+      const strain = rope.kind === 'nylon rope' ? 0.12 : 0.05;
+      expect((0.2 * rope.breakingLoad) / rope.axialStiffness).toBeCloseTo(strain, 12);
+      expect(rope.sources.axialStiffness).toMatch(/working load.*\[M\]/);
+    }
+  });
+
+  it('is softer than the secant to break (EA = F / strain at break) it replaces', () => {
+    for (const rope of fibre) {
+      const strainAtBreak = rope.kind === 'nylon rope' ? 0.3 : 0.2;
+      expect(rope.axialStiffness).toBeLessThan(rope.breakingLoad / strainAtBreak);
+    }
+  });
+});

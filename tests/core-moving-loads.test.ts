@@ -49,6 +49,8 @@ describe('moving load parked at one position', () => {
           unstressed: [results.unstressedLength],
           state,
           tensionGuessN: results.cases[i].horizontalTension,
+          refinement: results.mesh.refinement,
+          endFittingEfficiency: results.endFittings.efficiency,
         };
         const parked = solveMovingLoadAt(ctx, BASKET, x);
         const expected = staticResults.cases[i];

@@ -1,7 +1,8 @@
 /**
  * Sagwright command line: `solve FILE... [--table]` prints results (JSON, or a table for people);
  * `--as-built TEMP:KIND=VALUE[@X]` adds the as-built check; `--catalog` lists the wire catalogue.
- * Exit 0 solved, 2 invalid file, 1 a case not solved.
+ * Exit 0 every case solved and every check passes, 3 every case solved but a check fails (as
+ * designed, or as built with --as-built), 2 invalid file, 1 a case not solved.
  */
 import { readFileSync } from 'node:fs';
 import { solveProject, validateProject, WIRE_CATALOG } from '../core/index.ts';
@@ -67,12 +68,13 @@ function main(allArgs: string[]): number {
           `${file}: case "${c.name}" could not be solved: ${c.messages.join(' ')}\n`,
         );
         status = 1;
-      }
+      } else if (!c.ok && status === 0) status = 3;
     }
     if (asBuilt.spec !== undefined) {
       const asBuiltStatus = addAsBuilt(file, checked.project, results, asBuilt.spec);
       if (asBuiltStatus === 2) return 2;
-      status = Math.max(status, asBuiltStatus);
+      if (asBuiltStatus === 1) status = 1;
+      else if (results.asBuilt && !results.asBuilt.ok && status === 0) status = 3;
     }
     const asBuiltText = results.asBuilt ? asBuiltLines(results.asBuilt).join('\n') : '';
     if (table)

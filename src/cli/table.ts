@@ -1,5 +1,11 @@
 /** Plain-text tables for people: the results of a project and the wire catalogue. */
-import type { MovingLoadResult, ProjectResults, WireProperties } from '../core/index.ts';
+import {
+  CAUTIONS,
+  MOVING_LOAD_CAUTION,
+  type MovingLoadResult,
+  type ProjectResults,
+  type WireProperties,
+} from '../core/index.ts';
 
 /** Columns padded to a common width: the first `leftColumns` left-aligned; a free-text last column. */
 function pad(cells: string[][], leftColumns = 1, freeLast = false): string {
@@ -13,6 +19,12 @@ function pad(cells: string[][], leftColumns = 1, freeLast = false): string {
 }
 
 const n = (value: number, digits: number) => value.toFixed(digits);
+
+/** The general cautions, and the moving-load one when the results carry a moving load. */
+function tableCautions(results: ProjectResults) {
+  const moving = results.cases.some((c) => c.movingLoads !== undefined);
+  return moving ? [...CAUTIONS, MOVING_LOAD_CAUTION] : CAUTIONS;
+}
 
 function movingLoadLine(m: MovingLoadResult): string {
   return `  ${m.label} (moving): largest tension ${n(m.maxTension, 0)} N with the load at ${n(m.maxTensionAt, 2)} m; lowest clearance ${n(m.clearance, 3)} m with the load at ${n(m.clearanceAt, 2)} m — ${m.ok ? 'pass' : 'FAIL'}`;
@@ -43,9 +55,14 @@ export function resultsTable(title: string, results: ProjectResults): string {
     String(c.iterations),
     c.ok ? 'pass' : 'FAIL',
   ]);
+  const fittings = results.endFittings;
+  const fittingLine = fittings.stated
+    ? `End fittings: start ${fittings.start.label} (${n(fittings.start.efficiency * 100, 0)} %), end ${fittings.end.label} (${n(fittings.end.efficiency * 100, 0)} %); utilisation uses ${n(fittings.efficiency * 100, 0)} % of the breaking load.`
+    : 'End fittings: not stated; utilisation assumes terminations as strong as the wire.';
   const lines = [
     title,
     `Cut (unstressed) length at installation: ${n(results.unstressedLength, 4)} m`,
+    fittingLine,
     '',
     pad([header, ...rows]),
     '',
@@ -82,9 +99,14 @@ export function resultsTable(title: string, results: ProjectResults): string {
     n(r.returnTime, 2),
   ]);
   lines.push(pad([['Temperature', 'H (N)', 'T max (N)', 'Sag (m)', 'Pulse return (s)'], ...setUp]));
+  const mesh = results.mesh;
   lines.push(
     '',
     `Governing: tension in "${results.governing.tension}", clearance in "${results.governing.clearance}".`,
+    `Mesh: ${mesh.elementsPerSpan} elements per span${mesh.refinement > 1 ? ` (refined ×${mesh.refinement} automatically)` : ''}; largest estimated discretisation error ${mesh.largestError.toExponential(1)}${mesh.reached ? '' : ` — above the ${mesh.errorTarget.toExponential(0)} target`}.`,
+    '',
+    'Cautions:',
+    ...tableCautions(results).map((c) => `  - ${c.title}: ${c.text}`),
   );
   return lines.join('\n');
 }

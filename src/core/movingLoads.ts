@@ -5,7 +5,7 @@
  * Brent's bounded local minimiser on the two steps either side of the worst scanned position.
  */
 import { clearanceOver, largestStateTension } from './caseChecks.ts';
-import { loadStateOfCase } from './loads.ts';
+import { hungDrops, loadStateOfCase } from './loads.ts';
 import { localMinimum } from './localMinimum.ts';
 import type { CaseResult, MovingLoad, MovingLoadResult, PointLoad, Project } from './project.ts';
 import { buildProjectModel, type NamedState, type ProjectModel } from './projectModel.ts';
@@ -22,7 +22,13 @@ export interface MovingContext {
   unstressed: readonly number[];
   state: NamedState;
   tensionGuessN: number;
+  /** Mesh refinement of the solve the envelope belongs to (each element split this many times). */
+  refinement: number;
+  /** End-fitting efficiency: the utilisation's capacity is breaking load × efficiency. */
+  endFittingEfficiency: number;
 }
+
+export type MovingOptions = Pick<MovingContext, 'refinement' | 'endFittingEfficiency'>;
 
 interface PositionSolve {
   x: number;
@@ -44,7 +50,7 @@ export function parkedProject(project: Project, load: MovingLoad, x: number): Pr
 
 /** The state of a case with the moving load at x, at the fixed cut lengths. */
 export function solveMovingLoadAt(ctx: MovingContext, load: MovingLoad, x: number): StateSolution {
-  const model = buildProjectModel(parkedProject(ctx.project, load, x));
+  const model = buildProjectModel(parkedProject(ctx.project, load, x), ctx.refinement);
   return solveChangeOfState(model, ctx.state, ctx.unstressed, ctx.tensionGuessN);
 }
 
@@ -73,6 +79,8 @@ export function movingLoadEnvelope(
 ): MovingLoadResult {
   const { project } = ctx;
   const ground = project.ground ?? [];
+  // Hung items that hang below the wire count in the clearance, as in the case itself.
+  const drops = hungDrops(project.loads, ctx.state.withLoads);
   const zones = project.limits.zones ?? [];
   const grid = bandGrid(project);
   const band = { x: grid, zLow: grid.map(() => Infinity), zHigh: grid.map(() => -Infinity) };
@@ -85,8 +93,8 @@ export function movingLoadEnvelope(
       x,
       solved: state.solved,
       maxTension: largestStateTension(state.spans),
-      clearance: clearanceOver(state.spans, ground, -Infinity, Infinity).value,
-      zones: zones.map((z) => clearanceOver(state.spans, ground, z.from, z.to).value),
+      clearance: clearanceOver(state.spans, ground, -Infinity, Infinity, drops).value,
+      zones: zones.map((z) => clearanceOver(state.spans, ground, z.from, z.to, drops).value),
     };
     solves.set(x, result);
     if (inBand && state.solved) {
@@ -130,7 +138,8 @@ export function movingLoadEnvelope(
     };
   });
   const solved = [...solves.values()].every((p) => p.solved);
-  const utilisation = (tension.maxTension * project.limits.safetyFactor) / breakingLoadOf(ctx);
+  const capacityN = breakingLoadOf(ctx) * ctx.endFittingEfficiency;
+  const utilisation = (tension.maxTension * project.limits.safetyFactor) / capacityN;
   return {
     label: load.label ?? `Moving load ${index + 1}`,
     maxTension: tension.maxTension,
@@ -181,6 +190,7 @@ export function addMovingLoads(
   model: ProjectModel,
   results: CaseResult[],
   unstressed: readonly number[],
+  options: MovingOptions,
 ): void {
   const project = model.project;
   const moving = project.loads.filter((l): l is MovingLoad => l.type === 'moving');
@@ -193,7 +203,7 @@ export function addMovingLoads(
     const state = states[i];
     r.movingLoads = [];
     if (!state?.withLoads || !r.solved) return;
-    const ctx = { project, unstressed, state, tensionGuessN: r.horizontalTension };
+    const ctx = { project, unstressed, state, tensionGuessN: r.horizontalTension, ...options };
     r.movingLoads = moving.map((load, k) => movingLoadEnvelope(ctx, load, k));
     for (const m of r.movingLoads) {
       if (m.ok) continue;

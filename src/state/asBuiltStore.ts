@@ -11,7 +11,13 @@ export interface AsBuiltState {
   setMeasurement(measurement: AsBuiltMeasurement | null): void;
 }
 
-export const useAsBuiltStore = create<AsBuiltState>()((set) => ({
-  measurement: null,
-  setMeasurement: (measurement) => set({ measurement }),
-}));
+export function createAsBuiltStore() {
+  return create<AsBuiltState>()((set) => ({
+    measurement: null,
+    setMeasurement: (measurement) => set({ measurement }),
+  }));
+}
+
+export type AsBuiltStore = ReturnType<typeof createAsBuiltStore>;
+
+export const useAsBuiltStore: AsBuiltStore = createAsBuiltStore();

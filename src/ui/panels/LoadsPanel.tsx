@@ -109,7 +109,7 @@ function LoadRow({ load, index }: { load: Load; index: number }) {
       {load.type === 'point' && <PointRow load={load} index={index} />}
       {load.type === 'uniform' && <UniformRow load={load} index={index} />}
       {load.type === 'moving' && <MovingLoadRow load={load} index={index} />}
-      <button type="button" onClick={() => applyEdit(edits.removeLoad(index))}>
+      <button type="button" onClick={() => applyEdit(edits.removeLoad(index), `Remove ${name}`)}>
         Remove {name}
       </button>
     </Row>
@@ -127,13 +127,19 @@ export function LoadsPanel() {
         <LoadRow key={index} load={load} index={index} />
       ))}
       <div className="actions">
-        <button type="button" onClick={() => applyEdit(edits.addLoad('point'))}>
+        <button type="button" onClick={() => applyEdit(edits.addLoad('point'), 'Add a point load')}>
           Add a point load
         </button>
-        <button type="button" onClick={() => applyEdit(edits.addLoad('uniform'))}>
+        <button
+          type="button"
+          onClick={() => applyEdit(edits.addLoad('uniform'), 'Add a part-span load')}
+        >
           Add a part-span load
         </button>
-        <button type="button" onClick={() => applyEdit(edits.addLoad('moving'))}>
+        <button
+          type="button"
+          onClick={() => applyEdit(edits.addLoad('moving'), 'Add a moving load')}
+        >
           Add a moving load
         </button>
       </div>

@@ -1,0 +1,57 @@
+/**
+ * Document → solver → results: every new document is sent to the solver client; the newest
+ * reply lands in the results store; a failure keeps the last good results, marked out of date.
+ */
+import type { SolveOutcome, SolverClient } from '../worker/solverClient.ts';
+import { type AsBuiltStore, useAsBuiltStore } from './asBuiltStore.ts';
+import type { ProjectStore } from './projectStore.ts';
+import type { ResultsStore } from './resultsStore.ts';
+
+export type SolverPort = Pick<SolverClient, 'solve' | 'dispose'>;
+
+export function applyOutcome(
+  outcome: SolveOutcome,
+  store: ProjectStore,
+  results: ResultsStore,
+): void {
+  const current = store.getState().project;
+  if (outcome.ok) {
+    results.setState({
+      results: outcome.results,
+      resultsProject: outcome.project,
+      stale: outcome.project !== current,
+      error: null,
+      errorCause: null,
+    });
+  } else {
+    results.setState({ stale: true, error: outcome.message, errorCause: outcome.cause });
+  }
+}
+
+/**
+ * Sends the current document and every later one to `solver`, with the as-built measurement
+ * while one is set (a new measurement is sent too); returns a stop function.
+ */
+export function linkSolver(
+  store: ProjectStore,
+  results: ResultsStore,
+  solver: SolverPort,
+  asBuilt: AsBuiltStore = useAsBuiltStore,
+) {
+  const send = () =>
+    solver.solve(store.getState().project, asBuilt.getState().measurement ?? undefined);
+  send();
+  const unsubscribe = store.subscribe((state, previous) => {
+    if (state.project === previous.project) return;
+    results.setState({ stale: true });
+    send();
+  });
+  const unsubscribeAsBuilt = asBuilt.subscribe((state, previous) => {
+    if (state.measurement !== previous.measurement) send();
+  });
+  return () => {
+    unsubscribe();
+    unsubscribeAsBuilt();
+    solver.dispose();
+  };
+}
