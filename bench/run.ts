@@ -19,6 +19,7 @@ import { buildProjectModel, prepareState } from '../src/core/projectModel.ts';
 import { setUpChart } from '../src/core/setUpChart.ts';
 import { solveChangeOfState, solveInstallation } from '../src/core/states.ts';
 import { browserLines, measureBrowser } from './browser.ts';
+import { movingAsBuiltLines } from './movingAsBuilt.ts';
 
 const RUNS = 7;
 /** doc/benchmarks.md keeps everything from this heading on when rewritten. */
@@ -177,6 +178,12 @@ say('| demo project stage (examples/courtyard-lights.json) | time (µs) |');
 say('|---|---:|');
 for (const [stage, micros] of demoBreakdown('examples/courtyard-lights.json'))
   say(`| ${stage} | ${f1(micros)} |`);
+
+say('');
+for (const line of movingAsBuiltLines('examples/courtyard-lights.json', (call) =>
+  timeCall(call, 400),
+))
+  say(line);
 
 say('');
 if (process.argv.includes('--no-browser')) say('(browser figures skipped: --no-browser)');
