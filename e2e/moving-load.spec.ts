@@ -35,6 +35,7 @@ async function expectTable(page: Page, load: MovingLoad) {
 }
 
 test('a moving load added in the loads panel: envelope, caution and band', async ({ page }) => {
+  test.slow(); // two edits, each solved with every moving-load position
   await page.goto('/');
   await expect(page.getByRole('status')).toHaveText('Up to date.');
   await expect(page.getByTestId('moving-load-caution')).toHaveCount(0);
