@@ -84,6 +84,24 @@ describe.each([['examples/courtyard-lights.json'], ['examples/workshop-yard-incl
   },
 );
 
+describe('as-built on an automatically refined mesh', () => {
+  it('a set-up chart reading gives back the refined design’s cut length to 1e-9 m', () => {
+    const coarse = load('examples/courtyard-lights.json');
+    coarse.model = { ...coarse.model, elementsPerSpan: 2 };
+    const design = solveProject(coarse);
+    expect(design.mesh.refinement).toBeGreaterThan(1);
+    const row = design.setUpChart.find((r) => r.temperature === 0);
+    if (!row) throw new Error('no 0 °C row');
+    for (const m of [
+      { temperature: 0, kind: 'sag' as const, value: row.sag },
+      { temperature: 0, kind: 'horizontalTension' as const, value: row.horizontalTension },
+    ]) {
+      const r = solveAsBuilt(coarse, m, design);
+      expect(Math.abs(r.unstressedLength - design.unstressedLength)).toBeLessThan(1e-9);
+    }
+  });
+});
+
 describe('as-built: what the measurement says', () => {
   const project = load('examples/courtyard-lights.json');
   const design = solveProject(project);

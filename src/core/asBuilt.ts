@@ -167,7 +167,9 @@ export function solveAsBuilt(
   m: AsBuiltMeasurement,
   design: ProjectResults = solveProject(project),
 ): AsBuiltResult {
-  const model = buildProjectModel(project);
+  // The design's own mesh (after its automatic refinement), so a reading of the design gives
+  // back the design's cut length exactly.
+  const model = buildProjectModel(project, design.mesh?.refinement ?? 1);
   const wave = m.kind === 'returnTime' || m.kind === 'frequency';
   const withLoads = wave ? false : project.installation.withLoads;
   const guess = design.cases[0]?.horizontalTension;
