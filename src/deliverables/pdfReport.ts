@@ -212,7 +212,13 @@ function setUpSection(
         isInstallationRow(project, results.setUpChart[row]) ? INSTALLATION_FILL : undefined,
     },
   );
-  w.paragraph(pulseCheck(span), 7.5);
+  w.paragraph(
+    pulseCheck(
+      span,
+      results.setUpChart.some((row) => row.returnTime !== null),
+    ),
+    7.5,
+  );
 }
 
 function inputsSection(
