@@ -1,6 +1,16 @@
 /** Public entry of the Sagwright core: the project contract, the solver, the catalogue, validation. */
 
 export { CAUTION_SUMMARY, CAUTIONS } from './cautions.ts';
+export { type DaySetting, type SagPosition, settingAt } from './design/daySetting.ts';
+export { type TensionWindow, tensionWindow, type WindowEnd } from './design/tensionWindow.ts';
+export { type WindowCurve, windowCurve, windowPosition } from './design/windowPosition.ts';
+export {
+  chooseWires,
+  SUGGESTION_RULE,
+  type WireChoice,
+  type WireFamily,
+  wireFamily,
+} from './design/wireChooser.ts';
 export * from './project.ts';
 export { solveProject } from './solveProject.ts';
 export { type ValidationIssue, type ValidationResult, validateProject } from './validateProject.ts';
