@@ -7,6 +7,7 @@
 import { useEffect } from 'react';
 import { setTitle } from '../state/projectEdits.ts';
 import { useProjectStore } from '../state/projectStore.ts';
+import { connectDesign } from '../worker/connectDesign.ts';
 import { connectSolver } from '../worker/connectSolver.ts';
 import { CautionsStrip } from './CautionsStrip.tsx';
 import { ExportMenu } from './export/ExportMenu.tsx';
@@ -35,6 +36,7 @@ function Inputs() {
 
 export function App() {
   useEffect(() => connectSolver(), []);
+  useEffect(() => connectDesign(), []);
   const title = useProjectStore((s) => s.project.title);
   return (
     <div className="app">
