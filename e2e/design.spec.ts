@@ -3,6 +3,7 @@
  * setting show the core's numbers for the document on screen (expected values from the core run
  * here in Node); "Use" applies a wire and its suggested tension as one undo step.
  */
+import { execFileSync } from 'node:child_process';
 import { expect, type Page, test } from '@playwright/test';
 import demo from '../examples/courtyard-lights.json' with { type: 'json' };
 import {
@@ -120,4 +121,34 @@ test("today's setting at 8 °C shows the core's tension, sag and where to measur
   await page.getByLabel('Temperature now (°C)').fill('hot');
   await expect(page.getByRole('alert')).toHaveText('Temperature now must be a number');
   await expect(shown).toContainText(`${whole.format(s.horizontalTension)}\u00a0N`);
+});
+
+test("the PDF report carries the window and today's setting at the temperature typed", async ({
+  page,
+}, info) => {
+  await openDemo(page);
+  const project = demoProject();
+  const window = tensionWindow(project);
+  const s = settingAt(project, 8);
+  await page.getByLabel('Temperature now (°C)').fill('8');
+  await expect(page.getByTestId('today-setting')).toContainText(
+    `${whole.format(s.horizontalTension)}\u00a0N`,
+    SLOW,
+  );
+  await page.getByRole('button', { name: 'File and export' }).click();
+  await page.getByRole('button', { name: 'PDF report…', exact: true }).click();
+  const downloadPromise = page.waitForEvent('download');
+  await page.getByRole('button', { name: 'Create PDF' }).click();
+  const pdfPath = info.outputPath('report.pdf');
+  await (await downloadPromise).saveAs(pdfPath);
+  const text = execFileSync('pdftotext', ['-layout', pdfPath, '-'], { encoding: 'utf8' });
+  const flat = text.replace(/\s+/g, ' ');
+  expect(flat).toContain("Tension window and today's setting");
+  expect(flat).toContain(
+    `Lowest: ${(window.low?.horizontalTension ?? 0).toFixed(0)} N, set by the clearance over Walkway in "Hot summer".`,
+  );
+  expect(flat).toContain(
+    `At 8°C: set a horizontal tension of ${s.horizontalTension.toFixed(0)} N (largest tension ${s.maxTension.toFixed(0)} N).`,
+  );
+  expect(flat).toContain('Pulse and pluck checks do not hold');
 });
