@@ -16,6 +16,7 @@ import { loadStateOfCase } from '../src/core/loads.ts';
 import { buildProjectModel, prepareState } from '../src/core/projectModel.ts';
 import { setUpChart } from '../src/core/setUpChart.ts';
 import { solveChangeOfState, solveInstallation } from '../src/core/states.ts';
+import { designRows } from './designBench.ts';
 
 const RUNS = 7;
 
@@ -172,6 +173,13 @@ say('| demo project stage (examples/courtyard-lights.json) | time (µs) |');
 say('|---|---:|');
 for (const [stage, micros] of demoBreakdown('examples/courtyard-lights.json'))
   say(`| ${stage} | ${f1(micros)} |`);
+
+say('');
+for (const row of designRows(timeCall, [
+  'examples/courtyard-lights.json',
+  'examples/workshop-yard-inclined.json',
+]))
+  say(row);
 
 if (process.argv.includes('--write')) {
   const header = [

@@ -3,10 +3,18 @@
  * temperature and loads) for which every case passes every check. The worst utilisation u(H₀)
  * and the worst clearance margin m(H₀) both rise with H₀, so the high end is the root of
  * ln u = 0 and the low end the root of m = 0, each found in ln H₀ by a bracketing root find.
+ * Each root is first found for the case that governs at the start only (two states per step
+ * instead of all), then checked with every case; a case that governs there joins and the root
+ * is found again from that point, until the governing case is among those solved.
  */
 import { type ProjectModel, prepareState } from '../projectModel.ts';
-import { rootInRange } from './rangeRoot.ts';
-import { createWindowResponse, TENSION_CHECK, type WindowResponse } from './windowResponse.ts';
+import { type RangeRoot, rootInRange } from './rangeRoot.ts';
+import {
+  type CaseSubset,
+  createWindowResponse,
+  TENSION_CHECK,
+  type WindowResponse,
+} from './windowResponse.ts';
 
 export interface WindowEnd {
   horizontalTension: number;
@@ -30,7 +38,7 @@ export interface WindowEnds {
   atLow: WindowResponse | null;
   atHigh: WindowResponse | null;
   atFloor: WindowResponse | null;
-  response: (tensionN: number) => WindowResponse;
+  response: (tensionN: number, only?: CaseSubset) => WindowResponse;
   evaluations: number;
 }
 
@@ -39,6 +47,8 @@ export interface WindowOptions {
   tolerance?: number;
   /** Stop as soon as the window is known to be empty (the chooser needs no more). */
   stopWhenEmpty?: boolean;
+  /** Where to start looking for the low end (N), e.g. a similar wire's low end. */
+  lowGuessN?: number;
 }
 
 /** Slackest tension searched: the parabola's H for a sag of a quarter of each span, H = q l / 2. */
@@ -54,28 +64,63 @@ function floorTension(model: ProjectModel): number {
   return floor;
 }
 
+type Kind = 'tension' | 'clearance';
+
+interface WorstRoot {
+  status: RangeRoot['status'];
+  x: number;
+  /** Every case evaluated at x (null when a state could not be solved). */
+  full: WindowResponse | null;
+}
+
+/**
+ * Root in ln H₀ of the worst check of one kind over every case: found for the governing cases
+ * only, then checked with all of them (see the file header).
+ */
+function worstRoot(
+  ends: WindowEnds,
+  kind: Kind,
+  x0: number,
+  range: [number, number],
+  tolerance: number,
+  count: { evaluations: number },
+): WorstRoot {
+  const at = (x: number, only?: CaseSubset) => {
+    count.evaluations++;
+    return ends.response(Math.exp(x), only);
+  };
+  let full = at(x0);
+  if (!full.solved) return { status: 'failed', x: x0, full: null };
+  const scale = Math.max(full.clearanceSagM, 1e-3);
+  const value = (r: WindowResponse) =>
+    kind === 'tension' ? Math.log(r.utilisation) : r.clearanceMargin / scale;
+  const governing = (r: WindowResponse) => (kind === 'tension' ? r.tensionIndex : r.clearanceIndex);
+  const focus = new Set<number>();
+  let x = x0;
+  for (let round = 0; round < 60; round++) {
+    const g = governing(full);
+    if (g >= 0) focus.add(g);
+    const f = (t: number) => {
+      const r = at(t, focus);
+      return r.solved ? value(r) : Number.NaN;
+    };
+    const root = rootInRange(f, x, range[0], range[1], tolerance);
+    if (root.status === 'failed') return { status: 'failed', x: root.x, full: null };
+    full = at(root.x);
+    if (!full.solved) return { status: 'failed', x: root.x, full: null };
+    const now = governing(full);
+    if (now < 0 || focus.has(now)) return { status: root.status, x: root.x, full };
+    x = root.x;
+  }
+  return { status: 'failed', x, full: null };
+}
+
 /** The window's two ends for a built model. */
 export function findWindowEnds(model: ProjectModel, options: WindowOptions = {}): WindowEnds {
   const tolerance = options.tolerance ?? 1e-12;
-  const response = createWindowResponse(model);
   const floorN = floorTension(model);
   const ceilingN = Math.max(2 * model.wire.breakingLoad, 4 * floorN);
-  const lo = Math.log(floorN);
-  const hi = Math.log(ceilingN);
-  let evaluations = 0;
-  const at = (x: number) => {
-    evaluations++;
-    return response(Math.exp(x));
-  };
-  const tension = (x: number) => {
-    const r = at(x);
-    return r.solved ? Math.log(r.utilisation) : Number.NaN;
-  };
-  const start = Math.min(
-    hi,
-    Math.max(lo, Math.log(model.wire.breakingLoad / model.project.limits.safetyFactor / 2)),
-  );
-  const high = rootInRange(tension, start, lo, hi, tolerance);
+  const range: [number, number] = [Math.log(floorN), Math.log(ceilingN)];
   const ends: WindowEnds = {
     low: null,
     high: null,
@@ -86,54 +131,47 @@ export function findWindowEnds(model: ProjectModel, options: WindowOptions = {})
     atLow: null,
     atHigh: null,
     atFloor: null,
-    response,
+    response: createWindowResponse(model),
     evaluations: 0,
   };
-  if (high.status === 'root') {
-    const r = at(high.x);
-    ends.atHigh = r;
-    ends.high = { horizontalTension: Math.exp(high.x), case: r.tensionCase, check: TENSION_CHECK };
+  const count = { evaluations: 0 };
+  const allowed = model.wire.breakingLoad / model.project.limits.safetyFactor / 2;
+  const start = Math.min(range[1], Math.max(range[0], Math.log(allowed)));
+  const high = worstRoot(ends, 'tension', start, range, tolerance, count);
+  if (high.status === 'root' && high.full) {
+    ends.atHigh = high.full;
+    ends.high = {
+      horizontalTension: Math.exp(high.x),
+      case: high.full.tensionCase,
+      check: TENSION_CHECK,
+    };
+    if (high.full.clearanceMargin < 0) {
+      ends.empty = true;
+      ends.reason = 'overlap';
+    }
   } else {
-    ends.atFloor = at(lo);
+    ends.atFloor = high.status === 'positive' ? high.full : null;
     ends.empty = true;
     ends.reason = 'tension';
   }
-  if (ends.atHigh && ends.atHigh.clearanceMargin < 0) {
-    ends.empty = true;
-    ends.reason = 'overlap';
+  if (!(ends.empty && options.stopWhenEmpty)) {
+    let from = high.status === 'root' ? high.x : range[0];
+    if (options.lowGuessN !== undefined && options.lowGuessN > 0)
+      from = Math.min(from, Math.log(options.lowGuessN));
+    const low = worstRoot(ends, 'clearance', from, range, tolerance, count);
+    if (low.status === 'root' && low.full) {
+      ends.atLow = low.full;
+      ends.low = {
+        horizontalTension: Math.exp(low.x),
+        case: low.full.clearanceCase,
+        check: low.full.clearanceCheck,
+      };
+    } else if (low.status === 'negative' || low.status === 'failed') {
+      // Not even the tightest wire searched clears: no tension opens the window.
+      ends.empty = true;
+      if (ends.reason !== 'tension') ends.reason = 'clearance';
+    }
   }
-  if (!(ends.empty && options.stopWhenEmpty))
-    findLowEnd(ends, at, high.status === 'root' ? high.x : lo, lo, hi, tolerance);
-  ends.evaluations = evaluations;
+  ends.evaluations = count.evaluations;
   return ends;
-}
-
-function findLowEnd(
-  ends: WindowEnds,
-  at: (x: number) => WindowResponse,
-  start: number,
-  lo: number,
-  hi: number,
-  tolerance: number,
-): void {
-  const first = at(start);
-  const scale = Math.max(first.clearanceSagM, 1e-3);
-  const clearance = (x: number) => {
-    const r = x === start ? first : at(x);
-    return r.solved ? r.clearanceMargin / scale : Number.NaN;
-  };
-  const low = rootInRange(clearance, start, lo, hi, tolerance);
-  if (low.status === 'root') {
-    const r = at(low.x);
-    ends.atLow = r;
-    ends.low = {
-      horizontalTension: Math.exp(low.x),
-      case: r.clearanceCase,
-      check: r.clearanceCheck,
-    };
-  } else if (low.status === 'negative') {
-    // Not even the tightest wire searched clears: no tension opens the window.
-    ends.empty = true;
-    if (ends.reason !== 'tension') ends.reason = 'clearance';
-  }
 }

@@ -32,6 +32,9 @@ export interface WindowResponse {
   clearanceCase: string;
   clearanceCheck: string;
   clearanceSagM: number;
+  /** The governing cases by index (−1 the installation). */
+  tensionIndex: number;
+  clearanceIndex: number;
 }
 
 /** Every check of one solved state, in the contract's words. */
@@ -60,24 +63,31 @@ function stateChecks(model: ProjectModel, name: string, spans: SolvedSpan[]): Ch
   return checks;
 }
 
+/** Weather cases to solve, by index; the installation (index −1) is always solved. */
+export type CaseSubset = ReadonlySet<number> | undefined;
+
 /**
- * An evaluator of every check at installation tension H₀, warm-starting each case from its
- * last solved tension. Calls `visit` with each solved state's name, spans and checks.
+ * An evaluator of every check at installation tension H₀ (of the installation and the weather
+ * cases in `only`, default all), warm-starting each case from its last solved tension. Calls
+ * `visit` with each solved state's index (−1 the installation), name, spans and checks.
  */
 export function createCheckEvaluator(model: ProjectModel) {
   const guesses = model.project.cases.map(() => Number.NaN);
   return (
     tensionN: number,
-    visit: (name: string, spans: SolvedSpan[], checks: CheckValue[]) => void,
+    visit: (index: number, name: string, spans: SolvedSpan[], checks: CheckValue[]) => void,
+    only?: CaseSubset,
   ): boolean => {
     const installed = solveInstallation(model, tensionN);
     if (!installed.solved) return false;
     visit(
+      -1,
       model.installation.name,
       installed.spans,
       stateChecks(model, model.installation.name, installed.spans),
     );
     for (const [i, weather] of model.project.cases.entries()) {
+      if (only && !only.has(i)) continue;
       const guess = Number.isFinite(guesses[i]) ? guesses[i] : tensionN;
       const state = solveChangeOfState(
         model,
@@ -87,16 +97,18 @@ export function createCheckEvaluator(model: ProjectModel) {
       );
       if (!state.solved) return false;
       guesses[i] = Math.max(...state.spans.map((s) => s.tensionN));
-      visit(weather.name, state.spans, stateChecks(model, weather.name, state.spans));
+      visit(i, weather.name, state.spans, stateChecks(model, weather.name, state.spans));
     }
     return true;
   };
 }
 
-/** Worst utilisation and worst clearance margin at installation tension H₀. */
-export function createWindowResponse(model: ProjectModel): (tensionN: number) => WindowResponse {
+/** Worst utilisation and worst clearance margin at installation tension H₀ (cases in `only`). */
+export function createWindowResponse(
+  model: ProjectModel,
+): (tensionN: number, only?: CaseSubset) => WindowResponse {
   const evaluate = createCheckEvaluator(model);
-  return (tensionN) => {
+  return (tensionN, only) => {
     const r: WindowResponse = {
       solved: true,
       utilisation: -Infinity,
@@ -105,22 +117,27 @@ export function createWindowResponse(model: ProjectModel): (tensionN: number) =>
       clearanceCase: '',
       clearanceCheck: '',
       clearanceSagM: 0,
+      tensionIndex: -1,
+      clearanceIndex: -1,
     };
-    r.solved = evaluate(tensionN, (name, spans, checks) => {
+    const visit = (index: number, name: string, spans: SolvedSpan[], checks: CheckValue[]) => {
       for (const c of checks) {
         if (c.check === TENSION_CHECK) {
           if (c.value > r.utilisation) {
             r.utilisation = c.value;
             r.tensionCase = name;
+            r.tensionIndex = index;
           }
         } else if (c.value - c.limit < r.clearanceMargin) {
           r.clearanceMargin = c.value - c.limit;
           r.clearanceCase = name;
+          r.clearanceIndex = index;
           r.clearanceCheck = c.check;
           r.clearanceSagM = largestSag(spans);
         }
       }
-    });
+    };
+    r.solved = evaluate(tensionN, visit, only);
     return r;
   };
 }

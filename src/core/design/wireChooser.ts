@@ -43,14 +43,19 @@ function candidates(project: Project): { spec: WireSpec; wire: WireProperties }[
   return list;
 }
 
-/** The window of one wire for this project, or null when it is shut. */
+/**
+ * The window of one wire for this project, or null when it is shut. The ends are found to
+ * 1e-9 relative; `lowGuessN` starts the low-end search (a similar wire's low end: the slack
+ * limit depends mostly on the hung loads, not on the wire).
+ */
 export function chooseWire(
   project: Project,
   spec: WireSpec,
   wire: WireProperties,
+  lowGuessN?: number,
 ): WireChoice | null {
   const model = buildProjectModel({ ...project, wire: spec });
-  const ends = findWindowEnds(model, { stopWhenEmpty: true, tolerance: 1e-10 });
+  const ends = findWindowEnds(model, { stopWhenEmpty: true, tolerance: 1e-9, lowGuessN });
   if (ends.empty || !ends.high) return null;
   const high = ends.high.horizontalTension;
   const low = ends.low?.horizontalTension ?? null;
@@ -68,10 +73,12 @@ export function chooseWire(
 /** Every wire that works, lightest first; optionally only some families. */
 export function chooseWires(project: Project, families?: readonly WireFamily[]): WireChoice[] {
   const choices: WireChoice[] = [];
+  let lowGuessN: number | undefined;
   for (const { spec, wire } of candidates(project)) {
     if (families && !families.includes(wireFamily(wire.kind))) continue;
-    const choice = chooseWire(project, spec, wire);
+    const choice = chooseWire(project, spec, wire, lowGuessN);
     if (choice) choices.push(choice);
+    if (choice?.low) lowGuessN = choice.low;
   }
   return choices.sort(
     (a, b) => a.massPerLength - b.massPerLength || a.label.localeCompare(b.label),
