@@ -31,6 +31,8 @@ export interface SolvedSpan {
 }
 
 export interface CheckInput {
+  /** The state's identity in the results: see caseIds.ts. */
+  id: string;
   name: string;
   temperature: number;
   spans: SolvedSpan[];
@@ -255,6 +257,7 @@ export function checkCase(input: CheckInput): CaseResult {
     clearance >= input.minClearance &&
     zoneClearances.every((z) => z.ok);
   return {
+    id: input.id,
     name: input.name,
     solved: input.solved,
     horizontalTension,

@@ -1,5 +1,6 @@
 /** Public entry of the Sagwright core: the project contract, the solver, the catalogue, validation. */
 
+export { caseIndexOfId, caseResultId, INSTALLATION_ID, weatherCaseOfId } from './caseIds.ts';
 export { CAUTION_SUMMARY, CAUTIONS } from './cautions.ts';
 export {
   END_FITTING_KINDS,

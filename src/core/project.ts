@@ -221,6 +221,9 @@ export interface CaseProfile {
 }
 
 export interface CaseResult {
+  /** Identity of the state: "installation", or "cases[i]" for the document's i-th weather case
+   * (0-based). Names are labels only and may repeat the installation's. */
+  id: string;
   name: string;
   /** False when the state could not be solved; messages say why. */
   solved: boolean;
@@ -294,7 +297,10 @@ export interface MeshResult {
 export interface ProjectResults {
   unstressedLength: number;
   cases: CaseResult[];
+  /** Names of the governing cases (labels; see governingIds for their identities). */
   governing: Governing;
+  /** Identities (CaseResult.id) of the governing cases. */
+  governingIds: Governing;
   /** What to set on the day at other temperatures (installation loads, cut length fixed). */
   setUpChart: SetUpRow[];
   /** The span whose sag the set-up chart lists (0-based). */

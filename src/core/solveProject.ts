@@ -8,6 +8,7 @@
  */
 
 import { checkCase } from './caseChecks.ts';
+import { caseResultId, INSTALLATION_ID } from './caseIds.ts';
 import { ERROR_TARGET, estimateErrors, type StateSummary, summarise } from './discretisation.ts';
 import { resolveEndFittings } from './endFittings.ts';
 import {
@@ -43,6 +44,7 @@ interface MeshRun {
 function checkState(
   model: ProjectModel,
   fittings: EndFittingsResult,
+  id: string,
   name: string,
   temperature: number,
   withLoads: boolean,
@@ -50,6 +52,7 @@ function checkState(
 ): CaseResult {
   const p = model.project;
   return checkCase({
+    id,
     name,
     temperature,
     spans: state.spans,
@@ -73,18 +76,25 @@ function solveOnMesh(project: Project, refinement: number, fittings: EndFittings
   const target = findInstallationTension(model, project.installation.target);
   const installed = solveInstallation(model, target.tensionN);
   const inst = model.installation;
-  const finish = (name: string, temperature: number, withLoads: boolean, s: StateSolution) =>
-    checkState(model, fittings, name, temperature, withLoads, s);
-  const results = [finish(inst.name, inst.temperature, inst.withLoads, installed)];
+  const finish = (
+    id: string,
+    name: string,
+    temperature: number,
+    withLoads: boolean,
+    s: StateSolution,
+  ) => checkState(model, fittings, id, name, temperature, withLoads, s);
+  const results = [finish(INSTALLATION_ID, inst.name, inst.temperature, inst.withLoads, installed)];
   const summaries = [summarise(installed)];
-  for (const weather of project.cases) {
+  for (const [i, weather] of project.cases.entries()) {
     const state = solveChangeOfState(
       model,
       { ...loadStateOfCase(weather), name: weather.name },
       installed.unstressed,
       target.tensionN,
     );
-    results.push(finish(weather.name, weather.temperature, weather.withLoads, state));
+    results.push(
+      finish(caseResultId(i), weather.name, weather.temperature, weather.withLoads, state),
+    );
     summaries.push(summarise(state));
   }
   results[0].iterations += target.evaluations;
@@ -115,7 +125,10 @@ function governing(project: Project, results: CaseResult[]) {
     if (r.utilisation > tension.utilisation) tension = r;
     if (margin(r) < margin(clearance)) clearance = r;
   }
-  return { tension: tension.name, clearance: clearance.name };
+  return {
+    governing: { tension: tension.name, clearance: clearance.name },
+    governingIds: { tension: tension.id, clearance: clearance.id },
+  };
 }
 
 /** Solve a project that has passed validateProject. Never throws for physical failures. */
@@ -147,7 +160,7 @@ export function solveProject(project: Project, options: SolveOptions = {}): Proj
   return {
     unstressedLength: unstressed.reduce((a, b) => a + b, 0),
     cases: results,
-    governing: governing(project, results),
+    ...governing(project, results),
     setUpChart: setUpChart(model, unstressed, setUpSpan, run.target.tensionN),
     setUpSpan,
     endFittings: fittings,

@@ -1,7 +1,8 @@
 /**
  * Immutable edits of the project document, one small function per kind of change. Each returns
  * a function from the old document to the new one, so an edit can be validated on a copy
- * before it is committed.
+ * before it is committed (src/state/commit.ts, the only way an edit reaches the document).
+ * What depends on a removed item is carried along there (dependants.ts), not here.
  */
 import type {
   ClearanceZone,
@@ -198,22 +199,10 @@ export const duplicateCase =
     return { ...p, cases: insertAt(p.cases, index + 1, copy) };
   };
 
-function withoutCase(target: InstallationTarget): InstallationTarget {
-  const { case: _dropped, ...rest } = target;
-  return rest;
-}
-
+/** A target stated in the removed case is carried back to the installation by commit(). */
 export const removeCase =
   (index: number): Edit =>
-  (p) => {
-    const removed = p.cases[index];
-    const target = p.installation.target;
-    const installation =
-      target.case === removed.name
-        ? { ...p.installation, target: withoutCase(target) }
-        : p.installation;
-    return { ...p, cases: removeAt(p.cases, index), installation };
-  };
+  (p) => ({ ...p, cases: removeAt(p.cases, index) });
 
 export const patchLimits =
   (patch: Partial<Limits>): Edit =>

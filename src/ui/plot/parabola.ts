@@ -10,6 +10,7 @@ import {
   type Project,
   resolveWire,
   type WeatherCase,
+  weatherCaseOfId,
 } from '../../core/index.ts';
 import { type CaseLoads, caseLoads, loadStateOfCase } from '../../core/loads.ts';
 
@@ -50,7 +51,8 @@ function spanMoment(loads: CaseLoads, span: SpanEnds, x: number): number {
 }
 
 function weatherOf(project: Project, result: CaseResult): WeatherCase {
-  const found = project.cases.find((c) => c.name === result.name);
+  // By identity, never by name: a case may be named like the installation state.
+  const found = weatherCaseOfId(project.cases, result.id);
   if (found) return found;
   const inst = project.installation;
   return {
