@@ -1,8 +1,8 @@
 /**
  * Sagwright command line: `solve FILE... [--table]` prints results (JSON, or a table for people);
  * `--catalog` lists the wire catalogue. Design aids add to the JSON: `--window` (tension window),
- * `--choose` (wires that work), `--at TEMP` (today's setting). Exit 0 solved, 2 invalid file or
- * option, 1 a case not solved.
+ * `--choose` (wires that work), `--at TEMP` (today's setting). Exit 0 every case solved and every
+ * check passes, 3 every case solved but a check fails, 2 invalid file or option, 1 a case not solved.
  */
 import { readFileSync } from 'node:fs';
 import {
@@ -121,7 +121,7 @@ function main(args: string[]): number {
           `${file}: case "${c.name}" could not be solved: ${c.messages.join(' ')}\n`,
         );
         status = 1;
-      }
+      } else if (!c.ok && status === 0) status = 3;
     }
     const output: Record<string, unknown> = { ...results };
     for (const add of additions) add(checked.project, output);

@@ -4,14 +4,9 @@
  */
 import { useDesignStore } from '../state/designStore.ts';
 import { useProjectStore } from '../state/projectStore.ts';
+import { createSolverWorker } from './createSolverWorker.ts';
 import type { WorkerLike } from './protocol.ts';
 import { type SolveOutcome, SolverClient } from './solverClient.ts';
-
-function createDesignWorker(): WorkerLike {
-  return new Worker(new URL('./solver.worker.ts', import.meta.url), {
-    type: 'module',
-  }) as unknown as WorkerLike;
-}
 
 function applyOutcome(outcome: SolveOutcome): void {
   const { project } = useProjectStore.getState();
@@ -29,7 +24,7 @@ function applyOutcome(outcome: SolveOutcome): void {
 }
 
 /** Starts answering for the current document and every later one; returns a stop function. */
-export function connectDesign(createWorker: () => WorkerLike = createDesignWorker): () => void {
+export function connectDesign(createWorker: () => WorkerLike = createSolverWorker): () => void {
   const client = new SolverClient({ createWorker, onOutcome: applyOutcome, watchdogMs: 60_000 });
   const ask = () => {
     useDesignStore.setState({ stale: true });
