@@ -3,6 +3,7 @@
  * Plotly goes into its own chunk that loads only when the first plot is drawn,
  * so the shell and the numbers appear before the charting code arrives.
  */
+import { fileURLToPath } from 'node:url';
 import react from '@vitejs/plugin-react';
 import { defineConfig } from 'vite';
 
@@ -10,6 +11,16 @@ export default defineConfig({
   plugins: [react()],
   // plotly.js reads the Node-style `global`; in the browser that is globalThis.
   define: { global: 'globalThis' },
+  resolve: {
+    alias: [
+      // Plotly's registry imports the map library's style sheet (10 KB gzip) whether or not a
+      // map is ever drawn; the sag plot draws none.
+      {
+        find: /^maplibre-gl\/dist\/maplibre-gl\.css$/,
+        replacement: fileURLToPath(new URL('./src/ui/plot/no-map-styles.css', import.meta.url)),
+      },
+    ],
+  },
   server: { host: 'localhost', port: 5173, strictPort: true },
   preview: { host: 'localhost' },
   worker: { format: 'es' },
@@ -22,7 +33,11 @@ export default defineConfig({
       output: {
         codeSplitting: {
           groups: [
-            { name: 'plotly', test: /node_modules[\\/]plotly\.js[\\/]/, priority: 2 },
+            {
+              name: 'plotly',
+              test: /node_modules[\\/]plotly\.js[\\/]|plotlyLean\.ts/,
+              priority: 2,
+            },
             {
               name: 'react',
               test: /node_modules[\\/](react|react-dom|scheduler)[\\/]/,
