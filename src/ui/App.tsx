@@ -19,6 +19,7 @@ import { SpanPanel } from './panels/SpanPanel.tsx';
 import { WirePanel } from './panels/WirePanel.tsx';
 import { ResultsPane } from './ResultsPane.tsx';
 import { Toolbar } from './Toolbar.tsx';
+import { UpdateNotice } from './UpdateNotice.tsx';
 
 function Inputs() {
   return (
@@ -46,6 +47,7 @@ export function App() {
         <Toolbar />
         <ExportMenu />
       </header>
+      <UpdateNotice />
       <CautionsStrip />
       <main className="layout-split">
         <Inputs />
