@@ -54,5 +54,6 @@ export function pulseReturnTime(span: SpanModel, tensionN: number, wire: WaveWir
  * it while it is tensioned (installation without loads, or a project with no hung loads).
  */
 export function fieldChecksHold(project: Project): boolean {
-  return !project.installation.withLoads || project.loads.length === 0;
+  // A moving load is not on the wire while it is set.
+  return !project.installation.withLoads || project.loads.every((l) => l.type === 'moving');
 }

@@ -6,6 +6,7 @@ import type { SolveOutcome, SolverClient } from '../worker/solverClient.ts';
 import { type AsBuiltStore, useAsBuiltStore } from './asBuiltStore.ts';
 import type { ProjectStore } from './projectStore.ts';
 import type { ResultsStore } from './resultsStore.ts';
+import { EDIT_MARK, markRevision, RESULT_MARK } from './revision.ts';
 
 export type SolverPort = Pick<SolverClient, 'solve' | 'dispose'>;
 
@@ -16,6 +17,7 @@ export function applyOutcome(
 ): void {
   const current = store.getState().project;
   if (outcome.ok) {
+    markRevision(RESULT_MARK, outcome.project);
     results.setState({
       results: outcome.results,
       resultsProject: outcome.project,
@@ -39,10 +41,11 @@ export function linkSolver(
   asBuilt: AsBuiltStore = useAsBuiltStore,
 ) {
   const send = () =>
-    solver.solve(store.getState().project, asBuilt.getState().measurement ?? undefined);
+    solver.solve(store.getState().project, undefined, asBuilt.getState().measurement ?? undefined);
   send();
   const unsubscribe = store.subscribe((state, previous) => {
     if (state.project === previous.project) return;
+    markRevision(EDIT_MARK, state.project);
     results.setState({ stale: true });
     send();
   });

@@ -3,6 +3,7 @@
  * request's id, so the main thread can drop replies to requests it no longer wants.
  */
 import { solveAsBuilt, solveProject, validateAsBuilt, validateProject } from '../core/index.ts';
+import { answerDesign } from './designAnswers.ts';
 import type { SolveReply, SolveRequest, WorkerMessage } from './protocol.ts';
 
 function solve(request: SolveRequest): SolveReply {
@@ -16,7 +17,9 @@ function solve(request: SolveRequest): SolveReply {
     const m = request.asBuilt;
     if (m && validateAsBuilt(checked.project, m).length === 0)
       results.asBuilt = solveAsBuilt(checked.project, m, results);
-    return { id: request.id, ok: true, results };
+    if (!request.design) return { id: request.id, ok: true, results };
+    const design = answerDesign(checked.project, results, request.design);
+    return { id: request.id, ok: true, results, design };
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);
     return { id: request.id, ok: false, message };
