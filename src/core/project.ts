@@ -122,6 +122,32 @@ export interface Environment {
   dragCoefficient: number;
 }
 
+/** Who prepared, checked or approved the design, and when (ISO date, YYYY-MM-DD). */
+export interface ReportSignatory {
+  name: string;
+  date?: string;
+}
+
+/** One line of the report's revision table. */
+export interface ReportRevision {
+  revision: string;
+  /** YYYY-MM-DD. */
+  date: string;
+  description: string;
+}
+
+/** The design record the PDF report prints: reference, people, revisions. Optional. */
+export interface ReportRecord {
+  reference?: string;
+  client?: string;
+  site?: string;
+  preparedBy?: ReportSignatory;
+  checkedBy?: ReportSignatory;
+  approvedBy?: ReportSignatory;
+  /** Oldest first; the last one is the report's current revision. */
+  revisions?: ReportRevision[];
+}
+
 export interface Project {
   format: typeof PROJECT_FORMAT;
   version: number;
@@ -135,6 +161,7 @@ export interface Project {
   limits: Limits;
   model?: Partial<ModelSettings>;
   environment?: Partial<Environment>;
+  report?: ReportRecord;
 }
 
 export const DEFAULT_MODEL: ModelSettings = {

@@ -6,6 +6,7 @@
 
 import { PROJECT_FORMAT, PROJECT_VERSION, type Project } from './project.ts';
 import { FieldChecker, type Json, type ValidationIssue } from './validateFields.ts';
+import { checkReportRecord } from './validateReport.ts';
 import { findCatalogWire } from './wireCatalog.ts';
 
 export type { ValidationIssue } from './validateFields.ts';
@@ -26,6 +27,7 @@ const TOP_FIELDS = [
   'limits',
   'model',
   'environment',
+  'report',
 ];
 const CUSTOM_WIRE = [
   'label',
@@ -265,6 +267,7 @@ export function validateProject(raw: unknown): ValidationResult {
   checkInstallation(c, doc.installation, spanLengths, caseNames);
   checkLimits(c, doc.limits);
   checkSettings(c, doc.model, doc.environment);
+  checkReportRecord(c, doc.report);
   return c.issues.length === 0
     ? { ok: true, project: raw as Project }
     : { ok: false, issues: c.issues };

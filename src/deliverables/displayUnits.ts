@@ -59,3 +59,25 @@ export function formatForceShort(system: UnitSystem, newtons: number, space = ' 
       : `${wholeOrHundredths[0].format(newtons)}${space}N`;
   return `${wholeOrHundredths[0].format(fromSi(newtons, 'force', system))}${space}${symbolOf('force', system)}`;
 }
+
+/**
+ * A length as installers read it: metres with millimetres in SI; in imperial units feet and
+ * inches to the nearest eighth of an inch ("12 ft 3 1/4 in", "5 3/8 in"), joined by
+ * no-break spaces so a length never parts at a line end.
+ */
+export function formatLength(system: UnitSystem, metres: number): string {
+  if (system === 'si') return formatQuantity('si', 'length', metres);
+  const eighths = Math.round(Math.abs(metres / 0.0254) * 8);
+  const sign = metres < 0 && eighths > 0 ? '−' : '';
+  const feet = Math.floor(eighths / 96);
+  const inches = Math.floor((eighths % 96) / 8);
+  let fraction = eighths % 8;
+  let denominator = 8;
+  while (fraction > 0 && fraction % 2 === 0) {
+    fraction /= 2;
+    denominator /= 2;
+  }
+  const inchText = `${inches}${fraction ? `\u00a0${fraction}/${denominator}` : ''}\u00a0in`;
+  if (feet === 0) return `${sign}${inchText}`;
+  return `${sign}${feet}\u00a0ft\u00a0${inchText}`;
+}

@@ -178,13 +178,13 @@ export function ExportMenu() {
       />
       {dialog === 'report' && (
         <ReportDialog
+          project={project}
           busy={busy}
           returnFocus={menuButton}
           onClose={closeDialog}
-          onCreate={(paper, details) => {
-            run('The PDF report', () => actions.saveReport(project, units, paper, details))().then(
-              closeDialog,
-            );
+          onCreate={(request) => {
+            if (request.project !== project) setProject(request.project);
+            run('The PDF report', () => actions.saveReport(request, units))().then(closeDialog);
           }}
         />
       )}

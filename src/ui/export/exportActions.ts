@@ -3,10 +3,11 @@
  * spot (so an export always matches the document, never a stale result) and hands a file to the
  * browser. Opening a file goes through the deliverables' guards and changes nothing on refusal.
  */
+
+import { version as appVersion } from '../../../package.json';
 import { type Project, type ProjectResults, solveProject } from '../../core/index.ts';
 import type { UnitSystem } from '../../core/units.ts';
 import { profilesCsv } from '../../deliverables/csv.ts';
-import type { PaperSize, ReportDetails } from '../../deliverables/pdfReport.ts';
 import {
   openProjectFile,
   projectFileName,
@@ -15,9 +16,10 @@ import {
 import { shareUrl } from '../../deliverables/shareLink.ts';
 import { downloadBlob, downloadUrl, fileStem } from './download.ts';
 import { parseSvg, renderPlotImage, svgMarkupFromDataUrl } from './plotImage.ts';
+import type { ReportRequest } from './ReportDialog.tsx';
 
 export const PLOT_IMAGE_SIZE = { width: 1200, height: 700 } as const;
-const PDF_PLOT = { width: 900, height: 500 } as const;
+const PDF_PLOT = { width: 1000, height: 470 } as const;
 
 export function solved(project: Project): ProjectResults {
   return solveProject(project);
@@ -70,16 +72,13 @@ export async function savePlotImage(
   downloadUrl(url, `${fileStem(projectFileName(project.title))}${suffix}`);
 }
 
-export async function buildReportBlob(
-  project: Project,
-  units: UnitSystem,
-  paper: PaperSize,
-  details: ReportDetails,
-): Promise<Blob> {
+export async function buildReportBlob(request: ReportRequest, units: UnitSystem): Promise<Blob> {
+  const { project } = request;
   const results = solved(project);
-  const [{ buildPdfReport }, { exportFigure }] = await Promise.all([
+  const [{ buildPdfReport }, { exportFigure }, { browserFontSource }] = await Promise.all([
     import('../../deliverables/pdfReport.ts'),
     import('./plotImage.ts'),
+    import('./reportFonts.ts'),
   ]);
   const url = await renderPlotImage(project, results, units, {
     format: 'svg',
@@ -95,13 +94,15 @@ export async function buildReportBlob(
   document.body.append(host);
   try {
     const doc = await buildPdfReport(project, results, {
-      paper,
+      paper: request.paper,
       unitSystem: units,
-      details,
       generatedAt: new Date(),
       plot: svg,
       plotAspect: PDF_PLOT.width / PDF_PLOT.height,
       parabola: exportFigure(project, results, units, false).parabola,
+      fonts: browserFontSource,
+      appVersion,
+      appendix: request.appendix,
     });
     return doc.output('blob');
   } finally {
@@ -109,12 +110,7 @@ export async function buildReportBlob(
   }
 }
 
-export async function saveReport(
-  project: Project,
-  units: UnitSystem,
-  paper: PaperSize,
-  details: ReportDetails,
-): Promise<void> {
-  const blob = await buildReportBlob(project, units, paper, details);
-  downloadBlob(blob, `${fileStem(projectFileName(project.title))}-report.pdf`);
+export async function saveReport(request: ReportRequest, units: UnitSystem): Promise<void> {
+  const blob = await buildReportBlob(request, units);
+  downloadBlob(blob, `${fileStem(projectFileName(request.project.title))}-report.pdf`);
 }
