@@ -114,10 +114,11 @@ test('a new installation temperature re-solves the chart and adds its row', asyn
   await expect(marked.getByRole('rowheader')).toContainText('12.5\u00a0°C');
 });
 
-test('the PDF report carries the set-up chart after the case table', async ({ page }, info) => {
+test('the PDF report carries the set-up chart as a ticked appendix', async ({ page }, info) => {
   await openDemo(page);
   await page.getByRole('button', { name: 'File and export' }).click();
   await page.getByRole('button', { name: 'PDF report…', exact: true }).click();
+  await page.getByLabel('Set-up chart (what to set on other days)').check();
   const downloadPromise = page.waitForEvent('download');
   await page.getByRole('button', { name: 'Create PDF' }).click();
   const pdfPath = info.outputPath('report.pdf');
@@ -125,8 +126,9 @@ test('the PDF report carries the set-up chart after the case table', async ({ pa
 
   const text = execFileSync('pdftotext', ['-layout', pdfPath, '-'], { encoding: 'utf8' });
   const flat = text.replace(/\s+/g, ' ');
-  const heading = flat.indexOf('Setting the wire on the day');
+  const heading = flat.indexOf('Appendix A. Set-up chart');
   expect(heading).toBeGreaterThan(flat.indexOf('Results by case'));
+  expect(flat).toContain('On a warmer or colder day');
   expect(flat).toContain('Pulse check');
   // Each row as pdftotext reads it: temperature, H, largest tension, sag, return time.
   const project = demoProject();
