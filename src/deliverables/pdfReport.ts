@@ -162,7 +162,7 @@ function keyNumberRow(
   w.y += height + 3;
 }
 
-export const CASE_COLUMNS: ColumnSpec[] = [1.6, 1.9, 0.9, 1, 0.6, 0.9, 1.15, 0.9, 0.8, 3.3].map(
+export const CASE_COLUMNS: ColumnSpec[] = [1.6, 1.9, 0.9, 1, 0.7, 0.9, 1.15, 0.9, 0.8, 3.2].map(
   (weight, i) => ({ weight, align: i >= 2 && i <= 7 ? 'right' : 'left' }),
 );
 

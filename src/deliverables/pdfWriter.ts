@@ -19,12 +19,9 @@ export const GROUP_FILL: Colour = [238, 241, 245];
 /** Line height in mm for a font size in pt (1.2 × the size; 1 pt = 0.3528 mm). */
 export const lineHeight = (sizePt: number) => sizePt * 0.42;
 
-/** Simplifies characters no embedded font draws (combining marks stay as typed). */
+/** Text as the report draws it: numbers kept with their units. */
 export function pdfText(text: string): string {
-  return glueUnits(text).replace(
-    /[\u2070-\u209f]/g,
-    (ch) => '⁰¹²³⁴⁵⁶⁷⁸⁹'.charAt('⁰¹²³⁴⁵⁶⁷⁸⁹'.indexOf(ch)) || '',
-  );
+  return glueUnits(text);
 }
 
 /** A number and its unit never part at a line end: the space between them becomes a no-break space. */

@@ -253,9 +253,9 @@ export function caseTable(project: Project, results: ProjectResults, units: Unit
         blank(formatForceShort(units, c.horizontalTension)),
         blank(formatForceShort(units, c.maxTension)),
         blank(percent(c.utilisation)),
-        blank(formatLength(units, c.sag)),
-        blank(formatLength(units, c.clearance)),
-        blank(formatLength(units, c.swing)),
+        blank(formatLength(units, c.sag, true)),
+        blank(formatLength(units, c.clearance, true)),
+        blank(formatLength(units, c.swing, true)),
         caseVerdict(c),
         caseFindings(project, results, c, units),
       ];
