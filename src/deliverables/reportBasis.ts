@@ -6,7 +6,7 @@
  * cautions. Values are SI in the project and results, shown in the chosen units.
  */
 import type { Project, ProjectResults, WeatherCase } from '../core/index.ts';
-import { DEFAULT_MODEL, resolveWire } from '../core/index.ts';
+import { caseResultId, DEFAULT_MODEL, resolveEndFittings, resolveWire } from '../core/index.ts';
 import {
   formatForceShort,
   formatLength,
@@ -58,11 +58,35 @@ export function wireTable(project: Project, units: UnitSystem): Table {
   };
 }
 
+/** The end fittings and the working limit they set (one line for the design basis). */
+export function endFittingsLine(project: Project): string {
+  const f = resolveEndFittings(project.limits.endFittings);
+  const pct = (e: number) => `${Math.round(e * 1000) / 10} %`;
+  if (!f.stated)
+    return `End fittings: not stated; the working limit assumes terminations as strong as the wire (breaking load / ${project.limits.safetyFactor}).`;
+  return `End fittings: first fixing ${f.start.label} (${pct(f.start.efficiency)}; ${f.start.source}), last fixing ${f.end.label} (${pct(f.end.efficiency)}; ${f.end.source}). Working limit = breaking load x ${pct(f.efficiency)} / ${project.limits.safetyFactor}.`;
+}
+
+/** The installation, limits and end fittings as lines (the design basis in short). */
+export function installationLines(project: Project, units: UnitSystem): string[] {
+  return [
+    installationText(project, units),
+    `Safety factor on the minimum breaking load: ${project.limits.safetyFactor}.`,
+    endFittingsLine(project),
+    clearanceText(project, units),
+  ];
+}
+
 /** Safety factor, working limit and end fittings in one paragraph. */
 export function limitText(project: Project, units: UnitSystem): string {
   const wire = resolveWire(project.wire);
   const sf = project.limits.safetyFactor;
-  const limit = wire ? ` = ${formatForceShort(units, wire.breakingLoad / sf)}` : '';
+  const fittings = resolveEndFittings(project.limits.endFittings);
+  const limit = wire
+    ? ` = ${formatForceShort(units, (wire.breakingLoad * fittings.efficiency) / sf)}`
+    : '';
+  if (fittings.stated)
+    return `Working limit = minimum breaking load × end-fitting efficiency ${Math.round(fittings.efficiency * 1000) / 10} % ÷ safety factor ${sf}${limit}. ${endFittingsLine(project).replace(/ Working limit = .*$/, '')}`;
   return (
     `Working limit = minimum breaking load ÷ safety factor ${sf}${limit}. ` +
     'End fittings: none stated, so the check takes the terminations to be as strong as the wire; grips, ferrules and spliced eyes often hold 80–90 % of it [CP]: ' +
@@ -96,9 +120,10 @@ export function casePurpose(project: Project, w: WeatherCase, results: ProjectRe
   if (dt < 0) parts.push('cold: shorter wire, more tension');
   if (w.iceThickness > 0) parts.push('ice: more weight');
   if (w.windSpeed > 0) parts.push('wind: swing, more tension');
+  const id = caseResultId(project.cases.indexOf(w));
   const governs: string[] = [];
-  if (results.governing.tension === w.name) governs.push('tension');
-  if (results.governing.clearance === w.name) governs.push('clearance');
+  if (results.governingIds.tension === id) governs.push('tension');
+  if (results.governingIds.clearance === id) governs.push('clearance');
   const text = parts.length ? parts.join('; ') : 'the installation weather again';
   return governs.length ? `${text}. Governs ${governs.join(' and ')}.` : `${text}.`;
 }
@@ -164,8 +189,8 @@ export function methodText(
     ? ` The closed-form parabola drawn dashed on the plot differs from it by at most ${fq(units, 'diameter', parabola.differenceM, units === 'si' ? 2 : 3)} (${parabola.caseName}).`
     : '';
   return (
-    `${theory} Mesh: ${model.elementsPerSpan} ${order} string finite elements per span, a node at every fixing and point load; ` +
+    `${theory} Mesh: ${results.mesh.elementsPerSpan} ${order} string finite elements per span${results.mesh.refinement > 1 ? ` (refined automatically from ${model.elementsPerSpan})` : ''}, a node at every fixing and point load; ` +
     'each case is the wire cut at installation, stretched and warmed or cooled to fit. ' +
-    `Estimated discretisation error (Richardson, mesh halved): ${error} in tension and sag.${compare}`
+    `Estimated discretisation error (against the mesh refined, Richardson): ${error} in tension and sag${results.mesh.reached ? '' : `, above the target ${(results.mesh.errorTarget * 100).toFixed(3)} %: treat the last digits as estimates`}.${compare}`
   );
 }

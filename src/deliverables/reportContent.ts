@@ -5,6 +5,7 @@
  * (lengths in feet and inches for imperial).
  */
 import type { CaseResult, Project, ProjectResults } from '../core/index.ts';
+import { weatherCaseOfId } from '../core/index.ts';
 import {
   formatForceShort,
   formatLength,
@@ -110,8 +111,8 @@ export function caseFindings(
   if (!c.solved) return `Not solved: ${failures[0]}`;
   if (failures.length > 0) return `Fails: ${failures.join('; ')}.`;
   const governs: string[] = [];
-  if (results.governing.tension === c.name) governs.push('governs tension');
-  if (results.governing.clearance === c.name) governs.push('governs clearance');
+  if (results.governingIds.tension === c.id) governs.push('governs tension');
+  if (results.governingIds.clearance === c.id) governs.push('governs clearance');
   return governs.length ? `Passes; ${governs.join(', ')}.` : 'Passes.';
 }
 
@@ -220,7 +221,7 @@ function caseVerdict(c: CaseResult): string {
 
 /** The weather of a case in a few words ("−10 °C, ice 6.5 mm, wind 25 m/s"). */
 export function weatherText(project: Project, c: CaseResult, units: UnitSystem): string {
-  const w = project.cases.find((k) => k.name === c.name);
+  const w = weatherCaseOfId(project.cases, c.id);
   const parts = [fq(units, 'temperature', c.temperature)];
   if (w && w.iceThickness > 0) parts.push(`ice ${fq(units, 'diameter', w.iceThickness)}`);
   if (w && w.windSpeed > 0) parts.push(`wind ${fq(units, 'speed', w.windSpeed)}`);
@@ -273,3 +274,5 @@ export function caseLegend(project: Project, results: ProjectResults, units: Uni
     'Clearance: least height of the wire above the ground line over the whole span. Swing: sideways movement in wind.'
   );
 }
+
+export { endFittingsLine, installationLines } from './reportBasis.ts';

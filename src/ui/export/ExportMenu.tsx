@@ -5,7 +5,9 @@
  */
 import { useEffect, useMemo, useRef, useState } from 'react';
 import './export.css';
+import type { Project } from '../../core/index.ts';
 import { type OpenResult, PROJECT_FILE_EXTENSION } from '../../deliverables/projectFile.ts';
+import { commit, commitOpened } from '../../state/commit.ts';
 import { useProjectStore } from '../../state/projectStore.ts';
 import { useUiStore } from '../../state/uiStore.ts';
 import { ClientView } from './ClientView.tsx';
@@ -16,6 +18,21 @@ import { ReportDialog } from './ReportDialog.tsx';
 import { useSharedProject } from './useSharedProject.ts';
 
 type Dialog = 'none' | 'report' | 'library' | 'client';
+
+/** The report dialog's record goes into the document (one undo step) before the report is made. */
+function saveRecord(withRecord: Project) {
+  const current = useProjectStore.getState().project;
+  if (JSON.stringify(current.report) === JSON.stringify(withRecord.report))
+    return { ok: true as const, project: current };
+  return commit(
+    (current) => {
+      const next: Project = { ...current, report: withRecord.report };
+      if (!withRecord.report) delete next.report;
+      return next;
+    },
+    { what: 'Report record' },
+  );
+}
 
 /** Escape or a click elsewhere closes the open menu; Escape also puts focus back on its button. */
 function useMenuDismiss(
@@ -45,7 +62,6 @@ function useMenuDismiss(
 
 export function ExportMenu() {
   const project = useProjectStore((s) => s.project);
-  const setProject = useProjectStore((s) => s.setProject);
   const units = useUiStore((s) => s.unitSystem);
   const [open, setOpen] = useState(false);
   const [dialog, setDialog] = useState<Dialog>('none');
@@ -105,7 +121,15 @@ export function ExportMenu() {
       });
       return;
     }
-    setProject(result.project);
+    const committed = commitOpened(result.project);
+    if (!committed.ok) {
+      setNotice({
+        kind: 'refused',
+        title: `${source} was not opened; your project is unchanged`,
+        issues: committed.issues,
+      });
+      return;
+    }
     setDialog('none');
     setNotice({ kind: 'status', text: `Opened “${result.project.title}”.` });
   };
@@ -183,8 +207,18 @@ export function ExportMenu() {
           returnFocus={menuButton}
           onClose={closeDialog}
           onCreate={(request) => {
-            if (request.project !== project) setProject(request.project);
-            run('The PDF report', () => actions.saveReport(request, units))().then(closeDialog);
+            const saved = saveRecord(request.project);
+            if (!saved.ok) {
+              setNotice({
+                kind: 'refused',
+                title: 'The report record was not saved',
+                issues: saved.issues,
+              });
+              return;
+            }
+            run('The PDF report', () =>
+              actions.saveReport({ ...request, project: saved.project }, units),
+            )().then(closeDialog);
           }}
         />
       )}
