@@ -137,13 +137,16 @@ export class PdfWriter {
     this.y += 1.2;
   }
 
-  private layoutRows(table: Table, widths: number[], size: number): RowLayout[] {
+  private layoutRows(table: Table, widths: number[], size: number, style: TableStyle): RowLayout[] {
     const bodyLine = lineHeight(size) * 0.9;
     return table.rows.map((row, i) => {
       const group = table.groupRows?.includes(i) ?? false;
+      const strong = (table.strongRows?.includes(i) ?? false) || style.rowFill?.(i) !== undefined;
+      // Measured in the weight it is drawn in: bold text is wider.
+      const weight = (c: number) => (strong || style.cellColour?.(i, c) ? 'bold' : 'normal');
       const cells = group
         ? [this.lines(row[0], this.width - 2 * CELL_PAD, size, 'bold')]
-        : row.map((cell, c) => this.lines(cell, widths[c] - 2 * CELL_PAD, size));
+        : row.map((cell, c) => this.lines(cell, widths[c] - 2 * CELL_PAD, size, weight(c)));
       const height = Math.max(...cells.map((lines) => lines.length)) * bodyLine + 1.3;
       return { cells, height, group };
     });
@@ -161,7 +164,7 @@ export class PdfWriter {
     const widths = columns.map((c) => (c.weight / total) * this.width);
     const head = table.head.map((cell, c) => this.lines(cell, widths[c] - 2 * CELL_PAD, 7, 'bold'));
     const headHeight = Math.max(...head.map((l) => l.length)) * lineHeight(7) * 0.92 + 1.8;
-    const rows = this.layoutRows(table, widths, size);
+    const rows = this.layoutRows(table, widths, size, style);
     const legend = style.legend ?? [];
     const legendHeight = legend.reduce((sum, text) => sum + this.paragraphHeight(text, 7), 1.5);
     return { size, widths, head, headHeight, rows, legend, legendHeight };

@@ -125,15 +125,15 @@ export function casePurpose(project: Project, w: WeatherCase, results: ProjectRe
   if (results.governingIds.tension === id) governs.push('tension');
   if (results.governingIds.clearance === id) governs.push('clearance');
   const text = parts.length ? parts.join('; ') : 'the installation weather again';
-  return governs.length ? `${text}. Governs ${governs.join(' and ')}.` : `${text}.`;
+  return governs.length ? `${text}; governs ${governs.join(' and ')}.` : `${text}.`;
 }
 
 /** The weather cases and what each stands for, in one paragraph (their weather is in the case table). */
 export function weatherText(project: Project, results: ProjectResults): string {
   if (project.cases.length === 0)
     return 'Weather cases: none; only the installation state is checked.';
-  const items = project.cases.map((w) => `${w.name}: ${casePurpose(project, w, results)}`);
-  return `Weather cases (their weather is in the case table): ${items.join(' ')}`;
+  const items = project.cases.map((w) => `${w.name} — ${casePurpose(project, w, results)}`);
+  return `Weather cases and what each stands for (their weather is in the case table). ${items.join(' ')}`;
 }
 
 export function loadsText(project: Project, units: UnitSystem): string {
