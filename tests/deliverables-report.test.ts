@@ -133,7 +133,7 @@ describe('the PDF report of the shipped example', () => {
         const row = `${c.name} ${n(Math.abs(r.horizontal))} ${n(r.vertical)} ${n(Math.abs(r.lateral))} ${n(r.resultant)} ${r.angle.toFixed(1)}°`;
         expect(page2).toContain(row);
       }
-    expect(page2.match(/governs/g)?.length).toBe(project.supports.length);
+    expect(page2.match(/° governs/g)?.length).toBe(project.supports.length);
   });
 
   it('prints the key numbers with their whole captions', () => {
