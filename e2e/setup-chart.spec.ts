@@ -115,6 +115,7 @@ test('a new installation temperature re-solves the chart and adds its row', asyn
 });
 
 test('the PDF report carries the set-up chart as a ticked appendix', async ({ page }, info) => {
+  test.slow();
   await openDemo(page);
   await page.getByRole('button', { name: 'File and export' }).click();
   await page.getByRole('button', { name: 'PDF report…', exact: true }).click();

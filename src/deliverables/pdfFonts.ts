@@ -135,9 +135,14 @@ export class ReportFonts {
     }
   }
 
-  /** The font family the vector plot's text should name (svg2pdf looks it up by name). */
-  get plotFamily(): string {
-    return this.cjk ? CJK_FAMILY : LATIN_FAMILY;
+  /**
+   * The one family a piece of the plot's text is drawn in (svg2pdf draws a text element in one
+   * font): Noto Sans when it has every character, else Noto Sans JP.
+   */
+  familyFor(text: string): string {
+    for (const ch of text)
+      if (this.familyOf(ch.charCodeAt(0), 'normal') === CJK_FAMILY) return CJK_FAMILY;
+    return LATIN_FAMILY;
   }
 }
 

@@ -179,10 +179,11 @@ function caseTableStyle(project: Project, results: ProjectResults, units: UnitSy
 }
 
 /** Points the plot's text at an embedded font (svg2pdf looks fonts up by family name). */
-function applyFontFamily(svg: SVGSVGElement, family: string): void {
+function applyFontFamily(svg: SVGSVGElement, fonts: ReportFonts): void {
   for (const element of Array.from(
     svg.querySelectorAll<SVGElement>('[style*="font-family"], text, tspan'),
   )) {
+    const family = fonts.familyFor(element.textContent ?? '');
     if (element.style) element.style.fontFamily = `${family}, sans-serif`;
     if (element.hasAttribute('font-family')) element.setAttribute('font-family', family);
   }
@@ -204,7 +205,7 @@ async function plotAndCases(
   );
   w.ensure(height + 6);
   if (options.plot) {
-    applyFontFamily(options.plot, w.fonts.plotFamily);
+    applyFontFamily(options.plot, w.fonts);
     const { svg2pdf } = await import('svg2pdf.js');
     await svg2pdf(options.plot, w.doc, { x: w.left, y: w.y, width: w.width, height });
   } else {
