@@ -77,7 +77,12 @@ function setUpAppendix(w: PdfWriter, project: Project, results: ProjectResults, 
   w.table(setUpTable(project, results, units), cols([1.5, 1.2, 1.2, 1.2, 1], [1, 2, 3, 4]), {
     rowFill: (row) =>
       isInstallationRow(project, results.setUpChart[row]) ? INSTALLATION_FILL : undefined,
-    legend: [pulseCheck(span)],
+    legend: [
+      pulseCheck(
+        span,
+        results.setUpChart.some((row) => row.returnTime !== null),
+      ),
+    ],
   });
 }
 

@@ -7,6 +7,12 @@
  */
 import type { jsPDF } from 'jspdf';
 import { CAUTION_SUMMARY, type Project, type ProjectResults } from '../core/index.ts';
+import {
+  DESIGN_HEADING,
+  type DesignReport,
+  settingParagraphs,
+  windowParagraphs,
+} from './designContent.ts';
 import type { UnitSystem } from './displayUnits.ts';
 import { type AppendixChoice, appendixSections, type WireChoice } from './pdfAppendix.ts';
 import { type FontSource, ReportFonts } from './pdfFonts.ts';
@@ -41,8 +47,10 @@ export interface ReportOptions {
   /** Sagwright's version, printed in the record. */
   appVersion: string;
   appendix: AppendixChoice;
-  /** Paragraphs placed under the setting for the day (e.g. the tension window), if known. */
+  /** Paragraphs placed under the setting for the day, if any. */
   decisionNotes?: string[];
+  /** The tension window and today's setting; left out when not given. */
+  design?: DesignReport | null;
   /** Wires considered by the chooser, for the appendix, if known. */
   wireChoices?: WireChoice[];
 }
@@ -120,10 +128,23 @@ function decisionBlocks(
       { text: setting.head, size: 8.8, bold: true },
       ...setting.lines.map((text) => ({ text, size: 7.8 })),
       ...(options.decisionNotes ?? []).map((text) => ({ text, size: 7.8 })),
+      ...designLines(project, options),
     ],
     ACCENT,
     [236, 242, 248],
   );
+}
+
+/** The tension window and, when a temperature of the day was given, the setting for it. */
+function designLines(project: Project, options: ReportOptions) {
+  const d = options.design;
+  if (!d) return [];
+  const units = options.unitSystem;
+  return [
+    { text: `${DESIGN_HEADING}.`, size: 8.4, bold: true },
+    ...windowParagraphs(project, d, units).map((text) => ({ text, size: 7.8 })),
+    ...settingParagraphs(project, d, units).map((text) => ({ text, size: 7.8 })),
+  ];
 }
 
 function keyNumberRow(

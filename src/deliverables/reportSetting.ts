@@ -70,9 +70,11 @@ export function settingText(
     : `The fixings are at different heights: measure it straight down from the straight line between the fixing points, where it is largest, ${where}; it is not the lowest point.`;
   const low = install.spans[spanIndex]?.lowestPoint ?? install.lowestPoint;
   const row = results.setUpChart.find((r) => r.temperature === project.installation.temperature);
-  const pulse = row?.solved
-    ? `Field check: flick the wire near a fixing of that span; the wave returns to it after about ${row.returnTime.toFixed(2)} s (rough: it follows the sag alone).`
-    : '';
+  const pulse = !row?.solved
+    ? ''
+    : row.returnTime === null
+      ? 'Field check: the pulse check does not hold here (the hung loads are on the wire while it is set and the pulse reflects off them); measure the sag.'
+      : `Field check: flick the wire near a fixing of that span; the wave returns to it after ${row.returnTime.toFixed(2)} s.`;
   const otherDays = chartInAppendix
     ? 'On a warmer or colder day set the values of that day’s row in the set-up chart (appendix), not these.'
     : 'On a warmer or colder day set the values of that day’s row in the set-up chart (in the workbench, or tick it as an appendix), not these.';

@@ -8,12 +8,14 @@ import { version as appVersion } from '../../../package.json';
 import { type Project, type ProjectResults, solveProject } from '../../core/index.ts';
 import type { UnitSystem } from '../../core/units.ts';
 import { profilesCsv } from '../../deliverables/csv.ts';
+import { designReport } from '../../deliverables/designContent.ts';
 import {
   openProjectFile,
   projectFileName,
   serializeProject,
 } from '../../deliverables/projectFile.ts';
 import { shareUrl } from '../../deliverables/shareLink.ts';
+import { useDesignStore } from '../../state/designStore.ts';
 import { downloadBlob, downloadUrl, fileStem } from './download.ts';
 import { parseSvg, renderPlotImage, svgMarkupFromDataUrl } from './plotImage.ts';
 import type { ReportRequest } from './ReportDialog.tsx';
@@ -103,6 +105,11 @@ export async function buildReportBlob(request: ReportRequest, units: UnitSystem)
       fonts: browserFontSource,
       appVersion,
       appendix: request.appendix,
+      design: designReport(
+        project,
+        results.cases[0].horizontalTension,
+        useDesignStore.getState().temperatureNow,
+      ),
     });
     return doc.output('blob');
   } finally {
