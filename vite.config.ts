@@ -41,9 +41,18 @@ export default defineConfig({
         ],
       },
       workbox: {
-        // The app shell, the solver worker, Plotly and the report code: everything built.
-        globPatterns: ['**/*.{js,css,html,svg,png,webmanifest}'],
+        // The app shell, the solver worker, Plotly and the report code: everything built, with
+        // the report's Latin/Greek/Cyrillic font (Noto Sans, 0.63 MB a weight).
+        globPatterns: ['**/*.{js,css,html,svg,png,webmanifest}', 'assets/NotoSans_*.ttf'],
         maximumFileSizeToCacheInBytes: 4 * 1024 * 1024,
+        // The Japanese font (5.5 MB) is fetched only by a report that needs it, then kept.
+        runtimeCaching: [
+          {
+            urlPattern: /\/assets\/NotoSansJP_[^/]*\.ttf$/,
+            handler: 'CacheFirst',
+            options: { cacheName: 'sagwright-report-fonts' },
+          },
+        ],
         navigateFallback: '/index.html',
         cleanupOutdatedCaches: true,
         sourcemap: false,
