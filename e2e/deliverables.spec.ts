@@ -122,11 +122,11 @@ test("a failing design's report gives the reasons beside the case table, on US L
   const pdfPath = info.outputPath('failing-report.pdf');
   await createReport(page, pdfPath);
   const pages = pdfPages(pdfPath);
-  const first = pages[0];
-  expect(first).toContain('FAIL.');
-  expect(first).toContain('Results by case');
-  expect(first).toContain('Delivery road');
-  expect(first).toContain(failing.cases[1].name);
+  expect(pages[0]).toContain('FAIL.');
+  expect(pages[0]).toContain('Delivery road');
+  expect(pages[0]).toContain(failing.cases[1].name);
+  // The case table's page (page 1, or page 2 when the decision fills page 1) holds every reason.
+  const first = pages.find((p) => p.includes('Results by case')) ?? '';
   expect(first).toMatch(/\d+ ft \d+( \d\/\d)? in/);
   expect(first).toMatch(/\d lbf/);
   expect(first).toContain('H: horizontal tension.');

@@ -77,7 +77,9 @@ async function expectChart(page: Page, rows: SetUpRow[], shown: (row: SetUpRow) 
 
 async function openDemo(page: Page) {
   await page.goto('/');
-  await expect(page.getByRole('status')).toHaveText('Up to date.');
+  await expect(
+    page.getByRole('region', { name: 'Results' }).getByRole('status').first(),
+  ).toHaveText('Up to date.');
 }
 
 test('the set-up chart shows the core values, names the span and marks the installation row', async ({
