@@ -43,10 +43,11 @@ function windowAndChoices(project: Project, results: ProjectResults) {
   if (cache?.key === key) return cache.answers;
   const currentTension = results.cases[0]?.horizontalTension ?? Number.NaN;
   const start = performance.now();
-  const window = tensionWindow(project);
-  const curve = windowCurve(project, window, currentTension);
+  const refinement = results.mesh.refinement;
+  const window = tensionWindow(project, refinement);
+  const curve = windowCurve(project, window, currentTension, 40, refinement);
   const windowMs = performance.now() - start;
-  const choices = chooseWires(project);
+  const choices = chooseWires(project, undefined, refinement);
   const answers = {
     window,
     curve,
@@ -66,6 +67,7 @@ export function answerDesign(
   question: DesignQuestion,
 ): DesignAnswers {
   const t = question.temperatureNow;
-  const setting = t !== null && Number.isFinite(t) ? settingAt(project, t) : null;
+  const setting =
+    t !== null && Number.isFinite(t) ? settingAt(project, t, results.mesh.refinement) : null;
   return { ...windowAndChoices(project, results), setting };
 }

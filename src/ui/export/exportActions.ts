@@ -105,7 +105,7 @@ export async function buildReportBlob(
       plot: svg,
       plotAspect: PDF_PLOT.width / PDF_PLOT.height,
       parabola: exportFigure(project, results, units, false).parabola,
-      design: designReport(project, results.cases[0].horizontalTension, temperatureNow),
+      design: designReport(project, results, temperatureNow),
     });
     return doc.output('blob');
   } finally {
