@@ -30,10 +30,7 @@ function demoProject(): Project {
 
 async function openDemo(page: Page) {
   await page.goto('/');
-  await expect(page.getByRole('status', { name: 'Design aids status' })).toHaveText(
-    'Design aids up to date.',
-    SLOW,
-  );
+  await expect(page.getByTestId('design-status')).toHaveText('Design aids up to date.', SLOW);
 }
 
 test('the tension window shows the core ends, the position in words and the plot', async ({
