@@ -7,7 +7,7 @@
 import { useDesignStore } from '../state/designStore.ts';
 import { useProjectStore } from '../state/projectStore.ts';
 import { useResultsStore } from '../state/resultsStore.ts';
-import { createSolverWorker } from './createSolverWorker.ts';
+import { createDesignWorker } from './createSolverWorker.ts';
 import type { WorkerLike } from './protocol.ts';
 import { type SolveOutcome, SolverClient } from './solverClient.ts';
 
@@ -27,7 +27,7 @@ function applyOutcome(outcome: SolveOutcome): void {
 }
 
 /** Starts answering for the current document and every later one; returns a stop function. */
-export function connectDesign(createWorker: () => WorkerLike = createSolverWorker): () => void {
+export function connectDesign(createWorker: () => WorkerLike = createDesignWorker): () => void {
   const client = new SolverClient({ createWorker, onOutcome: applyOutcome, watchdogMs: 60_000 });
   let asked: unknown = null;
   const ask = (force: boolean) => {
@@ -37,7 +37,8 @@ export function connectDesign(createWorker: () => WorkerLike = createSolverWorke
     if (!force && asked === project) return;
     asked = project;
     useDesignStore.setState({ stale: true });
-    client.solve(project, { temperatureNow: useDesignStore.getState().temperatureNow });
+    const { temperatureNow, chooserOn } = useDesignStore.getState();
+    client.solve(project, { temperatureNow, choose: chooserOn });
   };
   ask(false);
   const stopResults = useResultsStore.subscribe(() => ask(false));
@@ -45,7 +46,8 @@ export function connectDesign(createWorker: () => WorkerLike = createSolverWorke
     if (state.project !== previous.project) useDesignStore.setState({ stale: true });
   });
   const stopTemperature = useDesignStore.subscribe((state, previous) => {
-    if (state.temperatureNow !== previous.temperatureNow) ask(true);
+    if (state.temperatureNow !== previous.temperatureNow || state.chooserOn !== previous.chooserOn)
+      ask(true);
   });
   return () => {
     stopResults();
