@@ -22,6 +22,7 @@ import { WirePanel } from './panels/WirePanel.tsx';
 import { ResultsPane } from './ResultsPane.tsx';
 import { SessionNotices } from './SessionNotices.tsx';
 import { Toolbar } from './Toolbar.tsx';
+import { UpdateNotice } from './UpdateNotice.tsx';
 
 function Inputs({ locked }: { locked: boolean }) {
   return (
@@ -64,6 +65,7 @@ export function App() {
         <Toolbar />
         <ExportMenu />
       </header>
+      <UpdateNotice />
       <CautionsStrip />
       <SessionNotices />
       <main className="layout-split">
