@@ -8,6 +8,7 @@ import { readFileSync } from 'node:fs';
 import {
   chooseWires,
   type Project,
+  type ProjectResults,
   settingAt,
   solveProject,
   tensionWindow,
@@ -22,17 +23,21 @@ const USAGE =
   '       npm run solve -- --catalog';
 const FLAGS = ['--table', '--window', '--choose'];
 
-/** Extra JSON the design-aid options add to a file's results. */
-type Addition = (project: Project, output: Record<string, unknown>) => void;
+/** Extra JSON the design-aid options add to a file's results (on the results' mesh). */
+type Addition = (
+  project: Project,
+  results: ProjectResults,
+  output: Record<string, unknown>,
+) => void;
 
 /** `--window`: the installation tension window. */
-function addWindow(project: Project, output: Record<string, unknown>): void {
-  output.window = tensionWindow(project);
+function addWindow(project: Project, results: ProjectResults, output: Record<string, unknown>) {
+  output.window = tensionWindow(project, results.mesh.refinement);
 }
 
 /** `--choose`: every wire that works, lightest first, with its window and suggested tension. */
-function addChoices(project: Project, output: Record<string, unknown>): void {
-  output.choices = chooseWires(project).map((c) => ({
+function addChoices(project: Project, results: ProjectResults, output: Record<string, unknown>) {
+  output.choices = chooseWires(project, undefined, results.mesh.refinement).map((c) => ({
     catalogId: c.catalogId,
     label: c.label,
     massPerLength: c.massPerLength,
@@ -56,8 +61,8 @@ function settingOption(args: string[]): { addition?: Addition; error?: string; r
     return { rest, error: '--at: the temperature must be between -80 and 80 °C' };
   return {
     rest,
-    addition: (project, output) => {
-      output.setting = settingAt(project, temperature);
+    addition: (project, results, output) => {
+      output.setting = settingAt(project, temperature, results.mesh.refinement);
     },
   };
 }
@@ -124,7 +129,7 @@ function main(args: string[]): number {
       } else if (!c.ok && status === 0) status = 3;
     }
     const output: Record<string, unknown> = { ...results };
-    for (const add of additions) add(checked.project, output);
+    for (const add of additions) add(checked.project, results, output);
     if (table) process.stdout.write(`${resultsTable(checked.project.title, results)}\n\n`);
     else outputs.push(files.length === 1 ? output : { file, results: output });
   }

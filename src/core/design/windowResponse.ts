@@ -40,9 +40,9 @@ export interface WindowResponse {
 }
 
 /**
- * Every check of one solved state, in the contract's words, as solveProject makes them: the
- * weaker end fitting reduces the breaking load, and clearance is measured to the lowest of the
- * wire and the hung items when the state carries them.
+ * Every check of one solved state, in the contract's words, as checkCase computes them:
+ * utilisation on the breaking load times the end fittings' efficiency, clearance to the lowest
+ * of the wire and the items hung on it (their drops) when the state carries the hung loads.
  */
 function stateChecks(
   model: ProjectModel,
