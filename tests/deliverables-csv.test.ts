@@ -2,7 +2,7 @@
  * CSV of the wire profiles. References: the unit definitions of the 1959 international yard and
  * pound (1 ft = 0.3048 m, 1 lbf = 4.4482216152605 N, exact); the clearance is the height minus
  * the ground line read off the example's own ground points; tension along a wire is never less
- * than its horizontal component (T = H sqrt(1 + z'^2), DESIGN.md).
+ * than its horizontal component (T = H sqrt(1 + z'^2), statics of a cable).
  */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
