@@ -3,6 +3,19 @@
  * it breaks, and never repairs a value.
  */
 
+import { describeRange, type FieldRange } from './fieldRanges.ts';
+
+/** C0 and C1 controls, line and paragraph separators, and text-direction overrides. */
+export function hasControlCharacter(text: string): boolean {
+  for (let i = 0; i < text.length; i++) {
+    const code = text.charCodeAt(i);
+    if (code < 0x20 || (code >= 0x7f && code <= 0x9f)) return true;
+    if (code === 0x2028 || code === 0x2029) return true;
+    if ((code >= 0x202a && code <= 0x202e) || (code >= 0x2066 && code <= 0x2069)) return true;
+  }
+  return false;
+}
+
 export interface ValidationIssue {
   path: string;
   message: string;
@@ -60,6 +73,41 @@ export class FieldChecker {
     else if (high) this.fail(path, `must be ${maxExclusive ? 'less than' : 'at most'} ${max}`);
     else return value;
     return undefined;
+  }
+
+  /** A finite number inside a physical range; the message states the whole range. */
+  inRange(value: unknown, path: string, r: FieldRange): number | undefined {
+    const allowed = `the range is ${describeRange(r)}`;
+    if (typeof value !== 'number' || !Number.isFinite(value)) {
+      this.fail(
+        path,
+        value === undefined
+          ? `is required (a number; ${allowed})`
+          : `must be a finite number; ${allowed}`,
+      );
+      return undefined;
+    }
+    if (r.minExclusive ? value <= r.min : value < r.min)
+      this.fail(
+        path,
+        `must be ${r.minExclusive ? 'greater than' : 'at least'} ${r.min}; ${allowed}`,
+      );
+    else if (value > r.max) this.fail(path, `must be at most ${r.max}; ${allowed}`);
+    else return value;
+    return undefined;
+  }
+
+  /** Text of at most maxLength characters with no control characters. */
+  label(value: unknown, path: string, maxLength: number, required = true): string | undefined {
+    const text = this.string(value, path, maxLength, required);
+    if (text !== undefined && hasControlCharacter(text)) {
+      this.fail(
+        path,
+        'must not contain control characters, line breaks or text-direction overrides',
+      );
+      return undefined;
+    }
+    return text;
   }
 
   positive(value: unknown, path: string, max = Infinity): number | undefined {

@@ -4,6 +4,7 @@
  * with the field path and the rule; nothing is repaired. A newer version is refused by name.
  */
 
+import { describeRange, type FieldRange, RANGES } from './fieldRanges.ts';
 import { PROJECT_FORMAT, PROJECT_VERSION, type Project } from './project.ts';
 import { FieldChecker, type Json, type ValidationIssue } from './validateFields.ts';
 import { findCatalogWire } from './wireCatalog.ts';
@@ -36,47 +37,80 @@ const CUSTOM_WIRE = [
   'breakingLoad',
 ];
 const TARGET_KINDS = ['horizontalTension', 'maxTension', 'sag', 'unstressedLength'] as const;
-const TEMPERATURE_RANGE = [-80, 80] as const;
 
-function checkSupports(c: FieldChecker, raw: unknown): { x: number }[] {
+interface SupportXZ {
+  x: number;
+  z?: number;
+}
+
+function checkSupports(c: FieldChecker, raw: unknown): SupportXZ[] {
   const list = c.array(raw, 'supports', 2, 50) ?? [];
-  const xs: { x: number }[] = [];
+  const xs: SupportXZ[] = [];
   list.forEach((item, i) => {
     const path = `supports[${i}]`;
     const s = c.object(item, path, ['x', 'z', 'label', 'free']);
     if (!s) return;
-    const x = c.number(s.x, `${path}.x`);
-    c.number(s.z, `${path}.z`, -1000, 10000);
-    c.string(s.label, `${path}.label`, 100, false);
+    const x = c.inRange(s.x, `${path}.x`, RANGES.position);
+    const z = c.inRange(s.z, `${path}.z`, RANGES.height);
+    c.label(s.label, `${path}.label`, 100, false);
     const free = c.boolean(s.free, `${path}.free`, false);
     if (free && (i === 0 || i === list.length - 1))
       c.fail(`${path}.free`, 'an end support cannot be free');
-    if (x !== undefined) {
-      if (xs.length > 0 && x <= xs[xs.length - 1].x)
-        c.fail(
-          `${path}.x`,
-          'must be further along the span than the previous support (x increasing)',
-        );
-      xs.push({ x });
-    }
+    if (x === undefined) return;
+    const previous = xs[xs.length - 1];
+    if (previous && x <= previous.x)
+      c.fail(
+        `${path}.x`,
+        'must be further along the span than the previous support (x increasing)',
+      );
+    else if (previous) checkSpan(c, path, previous, { x, z });
+    xs.push({ x, z });
   });
   return xs;
+}
+
+/** A span's length and steepness, from the previous support to this one. */
+function checkSpan(
+  c: FieldChecker,
+  path: string,
+  previous: { x: number; z?: number },
+  here: { x: number; z?: number },
+): void {
+  const lengthM = here.x - previous.x;
+  const { span, chordSlope } = RANGES;
+  if (lengthM < span.min || lengthM > span.max) {
+    c.fail(
+      `${path}.x`,
+      `makes a span of ${lengthM.toPrecision(4)} m; a span must be ${describeRange(span)}`,
+    );
+    return;
+  }
+  if (here.z === undefined || previous.z === undefined) return;
+  const slope = (here.z - previous.z) / lengthM;
+  if (Math.abs(slope) > chordSlope.max)
+    c.fail(
+      `${path}.z`,
+      `rises ${Math.abs(here.z - previous.z).toPrecision(4)} m over a ${lengthM.toPrecision(4)} m span; the height difference must be at most ${chordSlope.max} times the span (a steeper wire is a hanger, not a span)`,
+    );
 }
 
 function checkGround(c: FieldChecker, raw: unknown): void {
   if (raw === undefined) return;
   const list = c.array(raw, 'ground', 1, 1000) ?? [];
   let previous = -Infinity;
+  const spacing = RANGES.groundSpacing.min;
   list.forEach((item, i) => {
     const g = c.object(item, `ground[${i}]`, ['x', 'z']);
     if (!g) return;
-    const x = c.number(g.x, `ground[${i}].x`);
-    c.number(g.z, `ground[${i}].z`, -1000, 10000);
+    const x = c.inRange(g.x, `ground[${i}].x`, RANGES.position);
+    c.inRange(g.z, `ground[${i}].z`, RANGES.height);
     if (x !== undefined && x <= previous)
       c.fail(
         `ground[${i}].x`,
         'must be further along the span than the previous ground point (x increasing)',
       );
+    else if (x !== undefined && x - previous < spacing)
+      c.fail(`ground[${i}].x`, `must be at least ${spacing} m after the previous ground point`);
     if (x !== undefined) previous = x;
   });
 }
@@ -91,12 +125,18 @@ function checkWire(c: FieldChecker, raw: unknown): void {
   }
   const w = c.object(raw, 'wire', CUSTOM_WIRE);
   if (!w) return;
-  c.string(w.label, 'wire.label', 100);
-  c.positive(w.diameter, 'wire.diameter', 0.2);
-  c.positive(w.massPerLength, 'wire.massPerLength', 100);
-  c.positive(w.axialStiffness, 'wire.axialStiffness');
-  c.number(w.thermalExpansion, 'wire.thermalExpansion', 0, 1e-3);
-  c.positive(w.breakingLoad, 'wire.breakingLoad');
+  c.label(w.label, 'wire.label', 100);
+  c.inRange(w.diameter, 'wire.diameter', RANGES.wireDiameter);
+  c.inRange(w.massPerLength, 'wire.massPerLength', RANGES.wireMassPerLength);
+  const stiffness = c.inRange(w.axialStiffness, 'wire.axialStiffness', RANGES.axialStiffness);
+  c.inRange(w.thermalExpansion, 'wire.thermalExpansion', RANGES.thermalExpansion);
+  const breaking = c.inRange(w.breakingLoad, 'wire.breakingLoad', RANGES.breakingLoad);
+  const most = RANGES.strainAtBreak.max;
+  if (stiffness !== undefined && breaking !== undefined && breaking > most * stiffness)
+    c.fail(
+      'wire.axialStiffness',
+      `must be at least ${1 / most} times the breaking load (${(breaking / most).toPrecision(4)} N): with ${stiffness} N the wire would stretch ${((100 * breaking) / stiffness).toPrecision(3)} % before breaking, and no wire stretches more than ${100 * most} %`,
+    );
 }
 
 function checkLoads(c: FieldChecker, raw: unknown, first: number, last: number): void {
@@ -108,11 +148,11 @@ function checkLoads(c: FieldChecker, raw: unknown, first: number, last: number):
       const p = c.object(item, path, ['type', 'x', 'mass', 'force', 'label']);
       if (!p) return;
       c.number(p.x, `${path}.x`, first, last);
-      c.string(p.label, `${path}.label`, 100, false);
+      c.label(p.label, `${path}.label`, 100, false);
       if ((p.mass === undefined) === (p.force === undefined))
         c.fail(path, 'needs exactly one of mass (kg) or force (N)');
-      else if (p.mass !== undefined) c.number(p.mass, `${path}.mass`, 0, 1e5);
-      else c.number(p.force, `${path}.force`, 0, 1e6);
+      else if (p.mass !== undefined) c.inRange(p.mass, `${path}.mass`, RANGES.pointMass);
+      else c.inRange(p.force, `${path}.force`, RANGES.pointForce);
     } else if (kind === 'uniform') {
       const u = c.object(item, path, ['type', 'from', 'to', 'massPerLength', 'diameter', 'label']);
       if (!u) return;
@@ -120,9 +160,9 @@ function checkLoads(c: FieldChecker, raw: unknown, first: number, last: number):
       const to = c.number(u.to, `${path}.to`, first, last);
       if (from !== undefined && to !== undefined && to <= from)
         c.fail(`${path}.to`, 'must be greater than from');
-      c.number(u.massPerLength, `${path}.massPerLength`, 0, 1000);
-      if (u.diameter !== undefined) c.number(u.diameter, `${path}.diameter`, 0, 1);
-      c.string(u.label, `${path}.label`, 100, false);
+      c.inRange(u.massPerLength, `${path}.massPerLength`, RANGES.loadMassPerLength);
+      if (u.diameter !== undefined) c.inRange(u.diameter, `${path}.diameter`, RANGES.loadDiameter);
+      c.label(u.label, `${path}.label`, 100, false);
     } else {
       c.fail(`${path}.type`, 'must be "point" or "uniform"');
     }
@@ -142,28 +182,56 @@ function checkCases(c: FieldChecker, raw: unknown): string[] {
       'withLoads',
     ]);
     if (!k) return;
-    const name = c.string(k.name, `${path}.name`, 80);
+    const name = c.label(k.name, `${path}.name`, 80);
     if (name !== undefined && name.trim() === '') c.fail(`${path}.name`, 'must not be empty');
     else if (name !== undefined && names.includes(name))
       c.fail(`${path}.name`, `"${name}" is used by another case`);
     if (name !== undefined) names.push(name);
-    c.number(k.temperature, `${path}.temperature`, ...TEMPERATURE_RANGE);
-    c.number(k.iceThickness, `${path}.iceThickness`, 0, 0.2);
-    c.number(k.windSpeed, `${path}.windSpeed`, 0, 100);
+    c.inRange(k.temperature, `${path}.temperature`, RANGES.temperature);
+    c.inRange(k.iceThickness, `${path}.iceThickness`, RANGES.iceThickness);
+    c.inRange(k.windSpeed, `${path}.windSpeed`, RANGES.windSpeed);
     c.boolean(k.withLoads, `${path}.withLoads`);
   });
   return names;
 }
 
+function targetRange(kind: (typeof TARGET_KINDS)[number]): FieldRange {
+  if (kind === 'sag') return RANGES.targetSag;
+  if (kind === 'unstressedLength') return { min: 0.1, max: 40_000, unit: 'm' };
+  return RANGES.targetTension;
+}
+
+/** Total chord length: the straight lines between neighbouring supports, m. */
+function chordLength(supports: readonly SupportXZ[]): number {
+  let total = 0;
+  for (let j = 1; j < supports.length; j++)
+    total += Math.hypot(
+      supports[j].x - supports[j - 1].x,
+      (supports[j].z ?? 0) - (supports[j - 1].z ?? 0),
+    );
+  return total;
+}
+
+function checkCutLength(c: FieldChecker, lengthM: number, chordM: number): void {
+  const { min, max } = RANGES.cutLengthRatio;
+  if (chordM > 0 && (lengthM < min * chordM || lengthM > max * chordM))
+    c.fail(
+      'installation.target.unstressedLength',
+      `must be ${min} to ${max} times the straight-line length between the supports (${(min * chordM).toPrecision(4)} to ${(max * chordM).toPrecision(4)} m)`,
+    );
+}
+
 function checkInstallation(
   c: FieldChecker,
   raw: unknown,
-  spanLengths: number[],
+  supports: readonly SupportXZ[],
   caseNames: string[],
 ): void {
+  const spanLengths = supports.slice(1).map((s, j) => s.x - supports[j].x);
+  const chords = chordLength(supports);
   const inst = c.object(raw, 'installation', ['temperature', 'withLoads', 'target']);
   if (!inst) return;
-  c.number(inst.temperature, 'installation.temperature', ...TEMPERATURE_RANGE);
+  c.inRange(inst.temperature, 'installation.temperature', RANGES.temperature);
   c.boolean(inst.withLoads, 'installation.withLoads');
   const t = c.object(inst.target, 'installation.target', [...TARGET_KINDS, 'span', 'case']);
   if (!t) return;
@@ -173,7 +241,8 @@ function checkInstallation(
     return;
   }
   const kind = kinds[0];
-  const value = c.positive(t[kind], `installation.target.${kind}`);
+  const value = c.inRange(t[kind], `installation.target.${kind}`, targetRange(kind));
+  if (kind === 'unstressedLength' && value !== undefined) checkCutLength(c, value, chords);
   if (t.span !== undefined) {
     if (kind !== 'sag') c.fail('installation.target.span', 'applies to a sag target only');
     else c.integer(t.span, 'installation.target.span', 0, Math.max(0, spanLengths.length - 1));
@@ -200,22 +269,23 @@ function checkInstallation(
   }
 }
 
-function checkLimits(c: FieldChecker, raw: unknown): void {
+function checkLimits(c: FieldChecker, raw: unknown, first: number, last: number): void {
   const l = c.object(raw, 'limits', ['safetyFactor', 'minClearance', 'zones']);
   if (!l) return;
-  c.number(l.safetyFactor, 'limits.safetyFactor', 1, 100);
-  c.number(l.minClearance, 'limits.minClearance', 0, 1000);
+  c.inRange(l.safetyFactor, 'limits.safetyFactor', RANGES.safetyFactor);
+  c.inRange(l.minClearance, 'limits.minClearance', RANGES.clearance);
   if (l.zones === undefined) return;
   (c.array(l.zones, 'limits.zones', 0, 50) ?? []).forEach((item, i) => {
     const path = `limits.zones[${i}]`;
     const z = c.object(item, path, ['from', 'to', 'height', 'label']);
     if (!z) return;
-    const from = c.number(z.from, `${path}.from`);
-    const to = c.number(z.to, `${path}.to`);
+    // A zone is checked against the wire, so it must lie under the wire.
+    const from = c.number(z.from, `${path}.from`, first, last);
+    const to = c.number(z.to, `${path}.to`, first, last);
     if (from !== undefined && to !== undefined && to <= from)
       c.fail(`${path}.to`, 'must be greater than from');
-    c.number(z.height, `${path}.height`, 0, 1000);
-    c.string(z.label, `${path}.label`, 100, false);
+    c.inRange(z.height, `${path}.height`, RANGES.clearance);
+    c.label(z.label, `${path}.label`, 100, false);
   });
 }
 
@@ -225,7 +295,12 @@ function checkSettings(c: FieldChecker, model: unknown, env: unknown): void {
     if (m?.theory !== undefined) c.oneOf(m.theory, 'model.theory', ['exact', 'parabolic']);
     if (m?.elementOrder !== undefined) c.oneOf(m.elementOrder, 'model.elementOrder', [1, 2]);
     if (m?.elementsPerSpan !== undefined)
-      c.integer(m.elementsPerSpan, 'model.elementsPerSpan', 2, 20000);
+      c.integer(
+        m.elementsPerSpan,
+        'model.elementsPerSpan',
+        RANGES.elementsPerSpan.min,
+        RANGES.elementsPerSpan.max,
+      );
   }
   if (env !== undefined) {
     const e = c.object(env, 'environment', [
@@ -234,11 +309,13 @@ function checkSettings(c: FieldChecker, model: unknown, env: unknown): void {
       'iceDensity',
       'dragCoefficient',
     ]);
-    if (e?.gravity !== undefined) c.positive(e.gravity, 'environment.gravity', 50);
-    if (e?.airDensity !== undefined) c.number(e.airDensity, 'environment.airDensity', 0, 10);
-    if (e?.iceDensity !== undefined) c.positive(e.iceDensity, 'environment.iceDensity', 2000);
+    if (e?.gravity !== undefined) c.inRange(e.gravity, 'environment.gravity', RANGES.gravity);
+    if (e?.airDensity !== undefined)
+      c.inRange(e.airDensity, 'environment.airDensity', RANGES.airDensity);
+    if (e?.iceDensity !== undefined)
+      c.inRange(e.iceDensity, 'environment.iceDensity', RANGES.iceDensity);
     if (e?.dragCoefficient !== undefined)
-      c.number(e.dragCoefficient, 'environment.dragCoefficient', 0, 5);
+      c.inRange(e.dragCoefficient, 'environment.dragCoefficient', RANGES.dragCoefficient);
   }
 }
 
@@ -253,17 +330,16 @@ export function validateProject(raw: unknown): ValidationResult {
       'version',
       `${version} is newer than this Sagwright reads (${PROJECT_VERSION}); update Sagwright`,
     );
-  c.string(doc.title, 'title', 200);
+  c.label(doc.title, 'title', 200);
   const supports = checkSupports(c, doc.supports);
   const first = supports[0]?.x ?? -Infinity;
   const last = supports[supports.length - 1]?.x ?? Infinity;
-  const spanLengths = supports.slice(1).map((s, j) => s.x - supports[j].x);
   checkGround(c, doc.ground);
   checkWire(c, doc.wire);
   checkLoads(c, doc.loads, first, last);
   const caseNames = checkCases(c, doc.cases);
-  checkInstallation(c, doc.installation, spanLengths, caseNames);
-  checkLimits(c, doc.limits);
+  checkInstallation(c, doc.installation, supports, caseNames);
+  checkLimits(c, doc.limits, first, last);
   checkSettings(c, doc.model, doc.environment);
   return c.issues.length === 0
     ? { ok: true, project: raw as Project }
