@@ -232,8 +232,12 @@ describe('solveProject on valid files with physical trouble', () => {
     },
   );
 
-  it('throws a message naming the wire for an unknown catalogue id that skipped validation', () => {
+  it('names the wire on every case for an unknown catalogue id that skipped validation', () => {
     const project = edited(set('wire', { catalogId: 'no-such-wire' })) as Project;
-    expect(() => solveProject(project)).toThrow(/wire/);
+    const results = solveProject(project);
+    expect(results.cases.every((c) => !c.solved && /wire\.catalogId/.test(c.messages[0]))).toBe(
+      true,
+    );
+    expect(results.internalError).toBeUndefined();
   });
 });

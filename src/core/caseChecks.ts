@@ -19,6 +19,7 @@ import {
   tensionAt,
 } from './spanGeometry.ts';
 import type { SpanModel } from './spanModel.ts';
+import type { StrainLimit } from './strainLimit.ts';
 
 export interface SolvedSpan {
   span: SpanModel;
@@ -34,12 +35,16 @@ export interface CheckInput {
   safetyFactor: number;
   minClearance: number;
   breakingLoadN: number;
+  axialStiffnessN: number;
+  strainLimit: StrainLimit;
   iterations: number;
   messages: string[];
   solved: boolean;
 }
 
 const PROFILE_POINTS_PER_SPAN = 200;
+/** Profile points of one state over all spans: the plot and the CSV never get more rows. */
+export const PROFILE_POINTS_PER_STATE = 2000;
 
 /** Smallest wire-minus-ground distance over [from, to] (ground piecewise linear, flat beyond). */
 export function clearanceOver(
@@ -112,12 +117,19 @@ function reactions(spans: readonly SolvedSpan[]): SupportReaction[] {
   }));
 }
 
-/** Wire profile at the vertex nodes, thinned to about PROFILE_POINTS_PER_SPAN per span. */
+/**
+ * Wire profile at the vertex nodes, thinned to about PROFILE_POINTS_PER_SPAN per span and
+ * PROFILE_POINTS_PER_STATE over all spans.
+ */
 export function sampleProfile(spans: readonly SolvedSpan[]): CaseProfile {
   const profile: CaseProfile = { x: [], z: [], y: [], tension: [] };
+  const perSpan = Math.max(
+    10,
+    Math.min(PROFILE_POINTS_PER_SPAN, Math.floor(PROFILE_POINTS_PER_STATE / spans.length)),
+  );
   spans.forEach(({ span, tensionN: H }, j) => {
     const ne = span.elementLength.length;
-    const stride = Math.max(1, Math.ceil(ne / PROFILE_POINTS_PER_SPAN));
+    const stride = Math.max(1, Math.ceil(ne / perSpan));
     const vertices: number[] = [];
     for (let k = j === 0 ? 0 : stride; k < ne; k += stride) vertices.push(k);
     vertices.push(ne);
@@ -164,6 +176,12 @@ export function checkCase(input: CheckInput): CaseResult {
       `Clearance ${fmt(clearance)} m is below the required ${fmt(input.minClearance)} m.`,
     );
   }
+  const strain = maxTension / input.axialStiffnessN;
+  const beyondElastic = strain > input.strainLimit.strain;
+  if (beyondElastic)
+    messages.push(
+      `Not valid: the wire stretches ${fmt(100 * strain)} % under its largest tension, beyond its linear-elastic range (${fmt(100 * input.strainLimit.strain)} % for ${input.strainLimit.basis}). This model assumes a straight-line stretch, so the tension, sag and clearance shown here cannot be relied on.`,
+    );
   const zoneClearances = input.zones.map((zone, i) => {
     const c = clearanceOver(spans, input.ground, zone.from, zone.to).value;
     const label = zone.label ?? `Zone ${i + 1}`;
@@ -174,6 +192,7 @@ export function checkCase(input: CheckInput): CaseResult {
   });
   const ok =
     input.solved &&
+    !beyondElastic &&
     utilisation <= 1 &&
     clearance >= input.minClearance &&
     zoneClearances.every((z) => z.ok);
@@ -188,6 +207,7 @@ export function checkCase(input: CheckInput): CaseResult {
     clearance,
     zoneClearances,
     swing,
+    strain,
     spans: spanResults,
     supports: reactions(spans),
     ok,

@@ -59,7 +59,12 @@ export const RANGES = {
   dragCoefficient: range(0.1, 3, ''),
 } as const satisfies Record<string, FieldRange>;
 
+/** A bound as messages write it: plain below 100 000, else as 1e9. */
+export function formatBound(value: number): string {
+  return Math.abs(value) >= 1e5 ? value.toExponential().replace('e+', 'e') : String(value);
+}
+
 /** "0.1 to 2000 m": the range as the messages and the docs write it. */
 export function describeRange(r: FieldRange): string {
-  return `${r.min} to ${r.max}${r.unit ? ` ${r.unit}` : ''}`;
+  return `${formatBound(r.min)} to ${formatBound(r.max)}${r.unit ? ` ${r.unit}` : ''}`;
 }

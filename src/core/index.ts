@@ -1,7 +1,9 @@
 /** Public entry of the Sagwright core: the project contract, the solver, the catalogue, validation. */
 
 export { CAUTION_SUMMARY, CAUTIONS } from './cautions.ts';
+export { RANGES } from './fieldRanges.ts';
 export * from './project.ts';
+export { INTERNAL_ERROR_MESSAGE } from './resultGuard.ts';
 export { solveProject } from './solveProject.ts';
 export { type ValidationIssue, type ValidationResult, validateProject } from './validateProject.ts';
 export { findCatalogWire, resolveWire, WIRE_CATALOG, type WireProperties } from './wireCatalog.ts';

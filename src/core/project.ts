@@ -200,6 +200,8 @@ export interface CaseResult {
   clearance: number;
   zoneClearances: ZoneClearance[];
   swing: number;
+  /** Largest strain of the wire, T_max / EA (fraction); above its elastic range ok is false. */
+  strain: number;
   spans: SpanResult[];
   supports: SupportReaction[];
   ok: boolean;
@@ -235,4 +237,10 @@ export interface ProjectResults {
   setUpChart: SetUpRow[];
   /** The span whose sag the set-up chart lists (0-based). */
   setUpSpan: number;
+  /** Elements per span the solver used (the file's, or fewer when the work budget coarsened it). */
+  elementsPerSpan: number;
+  /** Notes on the whole solve, in words (e.g. a coarsened mesh). */
+  notices: string[];
+  /** Present and true only when the solver failed inside; every case then says so. */
+  internalError?: boolean;
 }

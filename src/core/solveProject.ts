@@ -10,8 +10,12 @@ import { findInstallationTension, targetSpanIndex } from './installation.ts';
 import { loadStateOfCase } from './loads.ts';
 import type { CaseResult, Project, ProjectResults } from './project.ts';
 import { buildProjectModel, type ProjectModel } from './projectModel.ts';
+import { guardFinite, unsolvedResults } from './resultGuard.ts';
 import { setUpChart } from './setUpChart.ts';
 import { type StateSolution, solveChangeOfState, solveInstallation } from './states.ts';
+import { elasticStrainLimit } from './strainLimit.ts';
+import { resolveWire } from './wireCatalog.ts';
+import { planMesh } from './workBudget.ts';
 
 interface StateSummary {
   sag: number;
@@ -34,6 +38,8 @@ function checkState(
     safetyFactor: p.limits.safetyFactor,
     minClearance: p.limits.minClearance,
     breakingLoadN: model.wire.breakingLoad,
+    axialStiffnessN: model.wire.axialStiffness,
+    strainLimit: elasticStrainLimit(model.wire),
     iterations: state.iterations,
     messages: state.messages,
     solved: state.solved,
@@ -87,9 +93,23 @@ function governing(project: Project, results: CaseResult[]) {
   return { tension: tension.name, clearance: clearance.name };
 }
 
-/** Solve a project that has passed validateProject. Never throws for physical failures. */
+/**
+ * Solve a project that has passed validateProject. Never throws: an internal failure comes back
+ * as results whose every case says so in words, and no case marked solved holds NaN or infinity.
+ */
 export function solveProject(project: Project): ProjectResults {
-  const model = buildProjectModel(project);
+  if (!resolveWire(project.wire))
+    return unsolvedResults(project, 'wire.catalogId: this wire is not in the catalogue.');
+  try {
+    return guardFinite(solveAll(project));
+  } catch {
+    return unsolvedResults(project);
+  }
+}
+
+function solveAll(project: Project): ProjectResults {
+  const mesh = planMesh(project);
+  const model = buildProjectModel(project, mesh.elementsPerSpan);
   const target = findInstallationTension(model, project.installation.target);
   const finish = (name: string, temperature: number, state: StateSolution) =>
     checkState(model, name, temperature, state);
@@ -103,13 +123,14 @@ export function solveProject(project: Project): ProjectResults {
       r.messages.unshift(`Installation target: ${target.message ?? 'did not converge'}.`);
     }
   }
-  const coarseCount = Math.max(2, Math.round(model.settings.elementsPerSpan / 2));
+  const coarseCount = Math.max(2, Math.round(mesh.elementsPerSpan / 2));
   const coarseModel = buildProjectModel(project, coarseCount);
   const fineTensions = results.slice(1).map((r) => r.horizontalTension);
   const coarse = solveStates(coarseModel, target.tensionN, summarise, fineTensions).results;
   results.forEach((r, i) => {
     r.discretisationError = relativeChange(r, coarse[i]);
   });
+  if (mesh.notice) results[0].messages.push(mesh.notice);
   const setUpSpan = targetSpanIndex(model, project.installation.target);
   return {
     unstressedLength: unstressed.reduce((a, b) => a + b, 0),
@@ -117,5 +138,7 @@ export function solveProject(project: Project): ProjectResults {
     governing: governing(project, results),
     setUpChart: setUpChart(model, unstressed, setUpSpan, target.tensionN),
     setUpSpan,
+    elementsPerSpan: mesh.elementsPerSpan,
+    notices: mesh.notice ? [mesh.notice] : [],
   };
 }

@@ -3,7 +3,7 @@
  * it breaks, and never repairs a value.
  */
 
-import { describeRange, type FieldRange } from './fieldRanges.ts';
+import { describeRange, type FieldRange, formatBound } from './fieldRanges.ts';
 
 /** C0 and C1 controls, line and paragraph separators, and text-direction overrides. */
 export function hasControlCharacter(text: string): boolean {
@@ -90,9 +90,9 @@ export class FieldChecker {
     if (r.minExclusive ? value <= r.min : value < r.min)
       this.fail(
         path,
-        `must be ${r.minExclusive ? 'greater than' : 'at least'} ${r.min}; ${allowed}`,
+        `must be ${r.minExclusive ? 'greater than' : 'at least'} ${formatBound(r.min)}; ${allowed}`,
       );
-    else if (value > r.max) this.fail(path, `must be at most ${r.max}; ${allowed}`);
+    else if (value > r.max) this.fail(path, `must be at most ${formatBound(r.max)}; ${allowed}`);
     else return value;
     return undefined;
   }

@@ -241,11 +241,12 @@ export function methodParagraphs(
   const order = model.elementOrder === 2 ? 'three-node (quadratic)' : 'two-node (linear)';
   const worstMesh = Math.max(0, ...results.cases.map((c) => c.discretisationError));
   return [
-    `The wire is treated as a taut string and divided into ${model.elementsPerSpan} ${order} string finite elements per span, with a node at every support and every point load. Each case is solved for the horizontal tension that makes the stretched wire exactly as long as the wire cut at installation, after thermal expansion and elastic stretch (EA).`,
+    `The wire is treated as a taut string and divided into ${results.elementsPerSpan || model.elementsPerSpan} ${order} string finite elements per span, with a node at every support and every point load. Each case is solved for the horizontal tension that makes the stretched wire exactly as long as the wire cut at installation, after thermal expansion and elastic stretch (EA).`,
     model.theory === 'exact'
       ? 'Theory: exact. The wire weight acts per metre of wire, so the shape is the elastic catenary.'
       : 'Theory: parabolic. The wire weight acts per horizontal metre, the classic approximation for shallow spans.',
     'Ice adds a ring of the stated thickness around the wire and any cable; wind acts across the span on the iced diameter and swings the wire sideways. Tension, sag, clearance and the pull on each fixing follow for every case.',
+    ...(results.notices ?? []),
     `Check against closed forms: the dashed lines on the plot are the closed-form parabola for the same span and loads${parabola ? `; the largest difference is ${fq(units, 'diameter', parabola.differenceM)} (${parabola.caseName})` : ''}. The mesh error estimate is ${worstMesh < 1e-5 ? 'below 0.001 %' : `at most ${(worstMesh * 100).toFixed(3)} %`}.`,
   ];
 }

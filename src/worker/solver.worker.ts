@@ -2,7 +2,7 @@
  * The solver worker: validates and solves each document it is sent and replies with the
  * request's id, so the main thread can drop replies to requests it no longer wants.
  */
-import { solveProject, validateProject } from '../core/index.ts';
+import { INTERNAL_ERROR_MESSAGE, solveProject, validateProject } from '../core/index.ts';
 import type { SolveReply, SolveRequest } from './protocol.ts';
 
 function solve(request: SolveRequest): SolveReply {
@@ -13,9 +13,9 @@ function solve(request: SolveRequest): SolveReply {
   }
   try {
     return { id: request.id, ok: true, results: solveProject(checked.project) };
-  } catch (error) {
-    const message = error instanceof Error ? error.message : String(error);
-    return { id: request.id, ok: false, message };
+  } catch {
+    // The core does not throw; should it ever, the person gets a sentence, not the raw error.
+    return { id: request.id, ok: false, message: INTERNAL_ERROR_MESSAGE };
   }
 }
 
