@@ -27,10 +27,13 @@ export function useSharedProject() {
   useEffect(() => {
     const openFromHash = () => {
       if (!hasSharedProject(location.hash)) return;
-      const opened = openShareFragment(location.hash);
+      // The link leaves the address bar before it is read: a link that hangs or crashes the
+      // tab must not do it again on every reload.
+      const hash = location.hash;
+      clearFragment();
+      const opened = openShareFragment(hash);
       if (!opened.ok) {
         setState({ kind: 'refused', issues: opened.issues });
-        clearFragment();
         return;
       }
       // Taken before the shared project replaces it. A second link while viewing the first
