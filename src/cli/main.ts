@@ -1,72 +1,127 @@
 /**
- * Sagwright command line: `solve FILE... [--table]` prints results (JSON, or a table for people);
- * `--catalog` lists the wire catalogue. Exit 0 solved, 2 invalid file, 1 a case not solved.
+ * Sagwright command line: `solve FILE... [--table] [--debug]` prints results (JSON, or a table
+ * for people); `--catalog` lists the wire catalogue. Every file is read, checked and solved on
+ * its own, and each one's outcome is reported. Exit status, the worst over the files: 0 every
+ * check passes, 3 solved but a check fails, 1 a case not solved, 2 an invalid or unreadable
+ * file, 4 an internal error (one line; the stack only with --debug).
  */
-import { readFileSync } from 'node:fs';
-import { solveProject, validateProject, WIRE_CATALOG } from '../core/index.ts';
+import { INTERNAL_ERROR_MESSAGE, type ProjectResults, WIRE_CATALOG } from '../core/index.ts';
+import { solveProject } from '../core/solveProject.ts';
+import { describeIssues, openProjectText } from '../deliverables/projectFile.ts';
+import { printable } from './printable.ts';
+import { readProjectFile } from './readInput.ts';
 import { catalogTable, resultsTable } from './table.ts';
 
-const MAX_FILE_BYTES = 5 * 1024 * 1024;
-const USAGE =
-  'usage: npm run solve -- FILE.json [FILE.json ...] [--table]\n       npm run solve -- --catalog';
+const EXIT = { ok: 0, notSolved: 1, invalid: 2, checkFails: 3, internal: 4 } as const;
+type ExitCode = (typeof EXIT)[keyof typeof EXIT];
+/** Which outcome wins when several files end differently. */
+const SEVERITY: readonly ExitCode[] = [0, 3, 1, 2, 4];
 
-function readProject(file: string): { ok: true; value: unknown } | { ok: false; message: string } {
-  let text: string;
+const OPTIONS = ['--table', '--debug', '--catalog'];
+const USAGE =
+  'usage: npm run solve -- FILE.json [FILE.json ...] [--table] [--debug]\n       npm run solve -- --catalog';
+
+interface FileOutcome {
+  file: string;
+  code: ExitCode;
+  /** Lines for stderr, already printable. */
+  errors: string[];
+  results?: ProjectResults;
+  title?: string;
+}
+
+function outcomeOf(file: string, results: ProjectResults, title: string): FileOutcome {
+  const shown = printable(file);
+  if (results.internalError)
+    return { file, code: EXIT.internal, errors: [`${shown}: ${INTERNAL_ERROR_MESSAGE}`] };
+  const errors = results.cases
+    .filter((c) => !c.solved)
+    .map(
+      (c) =>
+        `${shown}: case "${printable(c.name)}" could not be solved: ${printable(c.messages.join(' '))}`,
+    );
+  const code =
+    errors.length > 0
+      ? EXIT.notSolved
+      : results.cases.every((c) => c.ok)
+        ? EXIT.ok
+        : EXIT.checkFails;
+  return { file, code, errors, results, title };
+}
+
+function solveFile(file: string): FileOutcome {
+  const shown = printable(file);
+  const read = readProjectFile(file);
+  if (!read.ok) return { file, code: EXIT.invalid, errors: [`${shown}: ${read.message}`] };
+  const opened = openProjectText(read.text);
+  if (!opened.ok)
+    return {
+      file,
+      code: EXIT.invalid,
+      errors: describeIssues(opened.issues, 50).map((line) => `${shown}: ${printable(line)}`),
+    };
+  return outcomeOf(file, solveProject(opened.project), opened.project.title);
+}
+
+function solveGuarded(file: string, debug: boolean): FileOutcome {
   try {
-    text = readFileSync(file, 'utf8');
+    return solveFile(file);
   } catch (error) {
-    return { ok: false, message: `${file}: cannot read (${(error as Error).message})` };
-  }
-  if (text.length > MAX_FILE_BYTES)
-    return { ok: false, message: `${file}: file is larger than 5 MB` };
-  try {
-    return { ok: true, value: JSON.parse(text) };
-  } catch (error) {
-    return { ok: false, message: `${file}: not valid JSON (${(error as Error).message})` };
+    const line = `${printable(file)}: internal error in Sagwright; nothing was solved (run again with --debug for details)`;
+    const stack = debug && error instanceof Error ? [printable(error.stack ?? error.message)] : [];
+    return { file, code: EXIT.internal, errors: [line, ...stack] };
   }
 }
 
-function main(args: string[]): number {
+function worst(codes: ExitCode[]): ExitCode {
+  return codes.reduce((a, b) => (SEVERITY.indexOf(b) > SEVERITY.indexOf(a) ? b : a), EXIT.ok);
+}
+
+function report(outcomes: FileOutcome[], table: boolean): void {
+  for (const o of outcomes) for (const line of o.errors) process.stderr.write(`${line}\n`);
+  if (table) {
+    for (const o of outcomes)
+      if (o.results)
+        process.stdout.write(`${resultsTable(printable(o.title ?? ''), o.results)}\n\n`);
+    return;
+  }
+  if (outcomes.length === 1) {
+    if (outcomes[0].results)
+      process.stdout.write(`${JSON.stringify(outcomes[0].results, null, 2)}\n`);
+    return;
+  }
+  // Several files: one entry per file, in order, whether it solved or not.
+  const entries = outcomes.map((o) =>
+    o.results
+      ? { file: o.file, results: o.results }
+      : { file: o.file, exitCode: o.code, errors: o.errors },
+  );
+  process.stdout.write(`${JSON.stringify(entries, null, 2)}\n`);
+}
+
+function main(args: string[]): ExitCode {
   if (args.includes('--catalog')) {
     process.stdout.write(`${catalogTable(WIRE_CATALOG)}\n`);
-    return 0;
+    return EXIT.ok;
   }
-  const table = args.includes('--table');
   const files = args.filter((a) => !a.startsWith('--'));
-  const unknown = args.filter((a) => a.startsWith('--') && a !== '--table');
+  const unknown = args.filter((a) => a.startsWith('--') && !OPTIONS.includes(a));
   if (files.length === 0 || unknown.length > 0) {
-    process.stderr.write(`${unknown.length > 0 ? `unknown option ${unknown[0]}\n` : ''}${USAGE}\n`);
-    return 2;
+    const what = unknown.length > 0 ? `unknown option ${printable(unknown[0])}\n` : '';
+    process.stderr.write(`${what}${USAGE}\n`);
+    return EXIT.invalid;
   }
-  let status = 0;
-  const outputs: unknown[] = [];
-  for (const file of files) {
-    const read = readProject(file);
-    if (!read.ok) {
-      process.stderr.write(`${read.message}\n`);
-      return 2;
-    }
-    const checked = validateProject(read.value);
-    if (!checked.ok) {
-      for (const issue of checked.issues)
-        process.stderr.write(`${file}: ${issue.path}: ${issue.message}\n`);
-      return 2;
-    }
-    const results = solveProject(checked.project);
-    for (const c of results.cases) {
-      if (!c.solved) {
-        process.stderr.write(
-          `${file}: case "${c.name}" could not be solved: ${c.messages.join(' ')}\n`,
-        );
-        status = 1;
-      }
-    }
-    if (table) process.stdout.write(`${resultsTable(checked.project.title, results)}\n\n`);
-    else outputs.push(files.length === 1 ? results : { file, results });
-  }
-  if (!table)
-    process.stdout.write(`${JSON.stringify(files.length === 1 ? outputs[0] : outputs, null, 2)}\n`);
-  return status;
+  const debug = args.includes('--debug');
+  const outcomes = files.map((file) => solveGuarded(file, debug));
+  report(outcomes, args.includes('--table'));
+  return worst(outcomes.map((o) => o.code));
 }
 
-process.exitCode = main(process.argv.slice(2));
+try {
+  process.exitCode = main(process.argv.slice(2));
+} catch (error) {
+  process.stderr.write('internal error in Sagwright (run again with --debug for details)\n');
+  if (process.argv.includes('--debug') && error instanceof Error)
+    process.stderr.write(`${printable(error.stack ?? error.message)}\n`);
+  process.exitCode = EXIT.internal;
+}

@@ -16,6 +16,26 @@ export function hasControlCharacter(text: string): boolean {
   return false;
 }
 
+/**
+ * Text from the file quoted for a message: at most 60 characters, in JSON quotes, with every
+ * control character and text-direction override as a \u escape (a message never carries raw
+ * escape sequences to a terminal or a screen).
+ */
+export function quoted(text: string): string {
+  let out = '';
+  for (const ch of text.slice(0, 60)) {
+    if (ch === '"' || ch === '\\') out += `\\${ch}`;
+    else if (hasControlCharacter(ch)) out += `\\u${ch.charCodeAt(0).toString(16).padStart(4, '0')}`;
+    else out += ch;
+  }
+  return `"${out}"${text.length > 60 ? '…' : ''}`;
+}
+
+/** A key as it appears in a field path: bare when it is a plain name, else quoted. */
+function keyInPath(key: string): string {
+  return /^[A-Za-z_$][\w$]{0,59}$/.test(key) ? key : `[${quoted(key)}]`;
+}
+
 export interface ValidationIssue {
   path: string;
   message: string;
@@ -37,7 +57,12 @@ export class FieldChecker {
       return undefined;
     }
     for (const key of Object.keys(value)) {
-      if (!allowed.includes(key)) this.fail(path ? `${path}.${key}` : key, 'is not a known field');
+      if (allowed.includes(key)) continue;
+      const shown = keyInPath(key);
+      this.fail(
+        path ? `${path}${shown.startsWith('[') ? '' : '.'}${shown}` : shown,
+        'is not a known field',
+      );
     }
     return value as Json;
   }

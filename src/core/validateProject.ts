@@ -6,7 +6,7 @@
 
 import { describeRange, RANGES } from './fieldRanges.ts';
 import { PROJECT_FORMAT, PROJECT_VERSION, type Project } from './project.ts';
-import { FieldChecker, type Json, type ValidationIssue } from './validateFields.ts';
+import { FieldChecker, type Json, quoted, type ValidationIssue } from './validateFields.ts';
 import { checkInstallation, type SupportXZ } from './validateInstallation.ts';
 import { findCatalogWire } from './wireCatalog.ts';
 
@@ -114,7 +114,7 @@ function checkWire(c: FieldChecker, raw: unknown): void {
   if (typeof raw === 'object' && raw !== null && 'catalogId' in raw) {
     const w = c.object(raw, 'wire', ['catalogId']);
     if (w && typeof w.catalogId === 'string' && !findCatalogWire(w.catalogId))
-      c.fail('wire.catalogId', `"${w.catalogId.slice(0, 60)}" is not in the wire catalogue`);
+      c.fail('wire.catalogId', `${quoted(w.catalogId)} is not in the wire catalogue`);
     else if (w && typeof w.catalogId !== 'string') c.fail('wire.catalogId', 'must be text');
     return;
   }
