@@ -1,7 +1,8 @@
 /**
  * The command line as a user runs it (DESIGN.md, "The project file and the CLI"): results JSON
  * equal to solveProject on the same file, a table with units, the catalogue, and exit codes
- * 0 solved, 2 invalid or unreadable file (field path on stderr), 1 a case not solved.
+ * 0 solved, 2 invalid or unreadable file (field path on stderr), 1 a case not solved (more in
+ * tests/cli-hostile.test.ts).
  */
 import { spawnSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';

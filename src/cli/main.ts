@@ -63,12 +63,18 @@ function solveFile(file: string): FileOutcome {
   return outcomeOf(file, solveProject(opened.project), opened.project.title);
 }
 
+/** The error's stack, line by line, each made printable (only ever shown with --debug). */
+function stackLines(error: unknown): string[] {
+  const text = error instanceof Error ? (error.stack ?? error.message) : String(error);
+  return text.split('\n').map(printable);
+}
+
 function solveGuarded(file: string, debug: boolean): FileOutcome {
   try {
     return solveFile(file);
   } catch (error) {
     const line = `${printable(file)}: internal error in Sagwright; nothing was solved (run again with --debug for details)`;
-    const stack = debug && error instanceof Error ? [printable(error.stack ?? error.message)] : [];
+    const stack = debug ? stackLines(error) : [];
     return { file, code: EXIT.internal, errors: [line, ...stack] };
   }
 }
@@ -117,11 +123,15 @@ function main(args: string[]): ExitCode {
   return worst(outcomes.map((o) => o.code));
 }
 
+// A reader that stops early (`| head`) is not an error of ours.
+process.stdout.on('error', (error: NodeJS.ErrnoException) => {
+  if (error.code === 'EPIPE') process.exit(process.exitCode ?? 0);
+});
+
 try {
   process.exitCode = main(process.argv.slice(2));
 } catch (error) {
   process.stderr.write('internal error in Sagwright (run again with --debug for details)\n');
-  if (process.argv.includes('--debug') && error instanceof Error)
-    process.stderr.write(`${printable(error.stack ?? error.message)}\n`);
+  if (process.argv.includes('--debug')) process.stderr.write(`${stackLines(error).join('\n')}\n`);
   process.exitCode = EXIT.internal;
 }
