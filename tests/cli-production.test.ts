@@ -33,7 +33,7 @@ function importGraph(entry: string): { files: Set<string>; packages: Set<string>
         );
     }
   };
-  visit(resolve('src/cli/main.ts'));
+  visit(resolve(entry));
   return { files, packages };
 }
 

@@ -285,7 +285,7 @@ describe('the work of one solve is bounded', () => {
     const plan = planMesh(project);
     expect(plan.elementsPerSpan * 49 * 51).toBeLessThanOrEqual(STATE_ELEMENT_BUDGET);
     const results = solveProject(project);
-    expect(results.elementsPerSpan).toBe(plan.elementsPerSpan);
+    expect(results.mesh.elementsPerSpan).toBe(plan.elementsPerSpan);
     expect(results.notices[0]).toMatch(/Mesh coarsened from 20000 to \d+ elements per span/);
     expect(results.cases[0].messages.join(' ')).toMatch(/Mesh coarsened/);
     expect(results.cases.every((c) => c.solved)).toBe(true);

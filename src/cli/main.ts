@@ -1,6 +1,7 @@
 /**
  * Sagwright command line: `solve FILE... [--table] [--debug]` prints results (JSON, or a table
- * for people); `--catalog` lists the wire catalogue. Every file is read, checked and solved on
+ * for people); `--catalog` lists the wire catalogue. Design aids add to the JSON: `--window`,
+ * `--choose`, `--at TEMP` (designOptions.ts). Every file is read, checked and solved on
  * its own, and each one's outcome is reported. Exit status, the worst over the files: 0 every
  * check passes, 3 solved but a check fails, 1 a case not solved, 2 an invalid or unreadable
  * file, 4 an internal error (one line; the stack only with --debug).
@@ -8,6 +9,7 @@
 import { INTERNAL_ERROR_MESSAGE, type ProjectResults, WIRE_CATALOG } from '../core/index.ts';
 import { solveProject } from '../core/solveProject.ts';
 import { describeIssues, openProjectText } from '../deliverables/projectFile.ts';
+import { type Addition, additionsFor, DESIGN_FLAGS, settingOption } from './designOptions.ts';
 import { printable } from './printable.ts';
 import { readProjectFile } from './readInput.ts';
 import { catalogTable, resultsTable } from './table.ts';
@@ -17,9 +19,10 @@ type ExitCode = (typeof EXIT)[keyof typeof EXIT];
 /** Which outcome wins when several files end differently. */
 const SEVERITY: readonly ExitCode[] = [0, 3, 1, 2, 4];
 
-const OPTIONS = ['--table', '--debug', '--catalog'];
+const OPTIONS = ['--table', '--debug', '--catalog', ...DESIGN_FLAGS];
 const USAGE =
-  'usage: npm run solve -- FILE.json [FILE.json ...] [--table] [--debug]\n       npm run solve -- --catalog';
+  'usage: npm run solve -- FILE.json [FILE.json ...] [--table] [--window] [--choose] [--at TEMP] [--debug]\n' +
+  '       npm run solve -- --catalog';
 
 interface FileOutcome {
   file: string;
@@ -27,6 +30,8 @@ interface FileOutcome {
   /** Lines for stderr, already printable. */
   errors: string[];
   results?: ProjectResults;
+  /** The results with what the design-aid options add (what the JSON prints). */
+  output?: Record<string, unknown>;
   title?: string;
 }
 
@@ -49,7 +54,7 @@ function outcomeOf(file: string, results: ProjectResults, title: string): FileOu
   return { file, code, errors, results, title };
 }
 
-function solveFile(file: string): FileOutcome {
+function solveFile(file: string, additions: readonly Addition[]): FileOutcome {
   const shown = printable(file);
   const read = readProjectFile(file);
   if (!read.ok) return { file, code: EXIT.invalid, errors: [`${shown}: ${read.message}`] };
@@ -60,7 +65,13 @@ function solveFile(file: string): FileOutcome {
       code: EXIT.invalid,
       errors: describeIssues(opened.issues, 50).map((line) => `${shown}: ${printable(line)}`),
     };
-  return outcomeOf(file, solveProject(opened.project), opened.project.title);
+  const outcome = outcomeOf(file, solveProject(opened.project), opened.project.title);
+  if (outcome.results) {
+    const output: Record<string, unknown> = { ...outcome.results };
+    for (const add of additions) add(opened.project, output);
+    outcome.output = output;
+  }
+  return outcome;
 }
 
 /** The error's stack, line by line, each made printable (only ever shown with --debug). */
@@ -69,9 +80,9 @@ function stackLines(error: unknown): string[] {
   return text.split('\n').map(printable);
 }
 
-function solveGuarded(file: string, debug: boolean): FileOutcome {
+function solveGuarded(file: string, additions: readonly Addition[], debug: boolean): FileOutcome {
   try {
-    return solveFile(file);
+    return solveFile(file, additions);
   } catch (error) {
     const line = `${printable(file)}: internal error in Sagwright; nothing was solved (run again with --debug for details)`;
     const stack = debug ? stackLines(error) : [];
@@ -92,14 +103,14 @@ function report(outcomes: FileOutcome[], table: boolean): void {
     return;
   }
   if (outcomes.length === 1) {
-    if (outcomes[0].results)
-      process.stdout.write(`${JSON.stringify(outcomes[0].results, null, 2)}\n`);
+    if (outcomes[0].output)
+      process.stdout.write(`${JSON.stringify(outcomes[0].output, null, 2)}\n`);
     return;
   }
   // Several files: one entry per file, in order, whether it solved or not.
   const entries = outcomes.map((o) =>
-    o.results
-      ? { file: o.file, results: o.results }
+    o.output
+      ? { file: o.file, results: o.output }
       : { file: o.file, exitCode: o.code, errors: o.errors },
   );
   process.stdout.write(`${JSON.stringify(entries, null, 2)}\n`);
@@ -110,16 +121,23 @@ function main(args: string[]): ExitCode {
     process.stdout.write(`${catalogTable(WIRE_CATALOG)}\n`);
     return EXIT.ok;
   }
-  const files = args.filter((a) => !a.startsWith('--'));
-  const unknown = args.filter((a) => a.startsWith('--') && !OPTIONS.includes(a));
+  const setting = settingOption(args);
+  if (setting.error) {
+    process.stderr.write(`${setting.error}\n${USAGE}\n`);
+    return EXIT.invalid;
+  }
+  const rest = setting.rest;
+  const files = rest.filter((a) => !a.startsWith('--'));
+  const unknown = rest.filter((a) => a.startsWith('--') && !OPTIONS.includes(a));
   if (files.length === 0 || unknown.length > 0) {
     const what = unknown.length > 0 ? `unknown option ${printable(unknown[0])}\n` : '';
     process.stderr.write(`${what}${USAGE}\n`);
     return EXIT.invalid;
   }
   const debug = args.includes('--debug');
-  const outcomes = files.map((file) => solveGuarded(file, debug));
-  report(outcomes, args.includes('--table'));
+  const additions = additionsFor(rest, setting.addition);
+  const outcomes = files.map((file) => solveGuarded(file, additions, debug));
+  report(outcomes, rest.includes('--table'));
   return worst(outcomes.map((o) => o.code));
 }
 

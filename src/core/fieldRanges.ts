@@ -43,6 +43,10 @@ export const RANGES = {
   pointForce: range(0, 100_000, 'N'),
   loadMassPerLength: range(0, 100, 'kg/m'),
   loadDiameter: range(0, 0.5, 'm'),
+  /** Projected area of a hung item that catches the wind, m². */
+  windArea: range(0, 100, 'm²'),
+  /** How far a hung item's lowest part hangs below the wire, m. */
+  drop: range(0, 50, 'm'),
   temperature: range(-80, 80, '°C'),
   iceThickness: range(0, 0.1, 'm'),
   windSpeed: range(0, 70, 'm/s'),
@@ -51,6 +55,8 @@ export const RANGES = {
   /** Cut length as a multiple of the total chord length (the straight lines between supports). */
   cutLengthRatio: range(0.5, 2, ''),
   safetyFactor: range(1, 20, ''),
+  /** A termination's strength as a fraction of the wire's breaking load. */
+  endFittingEfficiency: range(0.1, 1, ''),
   clearance: range(0, 100, 'm'),
   elementsPerSpan: range(2, 20_000, ''),
   gravity: range(1, 30, 'm/s²'),

@@ -1,9 +1,26 @@
 /** Public entry of the Sagwright core: the project contract, the solver, the catalogue, validation. */
 
+export { caseIndexOfId, caseResultId, INSTALLATION_ID, weatherCaseOfId } from './caseIds.ts';
 export { CAUTION_SUMMARY, CAUTIONS } from './cautions.ts';
+export { type DaySetting, type SagPosition, settingAt } from './design/daySetting.ts';
+export { type TensionWindow, tensionWindow, type WindowEnd } from './design/tensionWindow.ts';
+export { type WindowCurve, windowCurve, windowPosition } from './design/windowPosition.ts';
+export {
+  chooseWires,
+  SUGGESTION_RULE,
+  type WireChoice,
+  type WireFamily,
+  wireFamily,
+} from './design/wireChooser.ts';
+export {
+  END_FITTING_KINDS,
+  END_FITTING_TYPES,
+  type EndFittingType,
+  resolveEndFittings,
+} from './endFittings.ts';
 export { RANGES } from './fieldRanges.ts';
 export * from './project.ts';
 export { INTERNAL_ERROR_MESSAGE } from './resultGuard.ts';
-export { solveProject } from './solveProject.ts';
+export { type SolveOptions, solveProject } from './solveProject.ts';
 export { type ValidationIssue, type ValidationResult, validateProject } from './validateProject.ts';
 export { findCatalogWire, resolveWire, WIRE_CATALOG, type WireProperties } from './wireCatalog.ts';

@@ -52,6 +52,8 @@ export function unstressedLengthAt(
       const curvY = 0.5 * span.qLateral[e] * L * GAUSS2;
       let element = 0;
       let elementSlope = 0;
+      let arc = 0;
+      let arcSlope = 0;
       for (let g = -1; g <= 1; g += 2) {
         const av = span.slopeV1[e] - g * curvV;
         const ay = span.slopeY1[e] - g * curvY;
@@ -64,12 +66,16 @@ export function unstressedLengthAt(
         const dTdH = r + H * drdH;
         element += f;
         elementSlope += (drdH - (f * dTdH) / axialStiffness) / stretch;
+        arc += r;
+        arcSlope += drdH;
       }
       element *= 0.5 * L;
       elementSlope *= 0.5 * L;
       if (storeElements) {
         span.unstressedElement[e] = element;
         span.unstressedElementSlope[e] = elementSlope;
+        span.arcElement[e] = arc * 0.5 * L;
+        span.arcElementSlope[e] = arcSlope * 0.5 * L;
       }
       value += element;
       slope += elementSlope;
@@ -79,8 +85,11 @@ export function unstressedLengthAt(
 }
 
 /**
- * Set element loads from the wire loading. The exact theory scales the wire's load by ds₀/dx of
- * the last solved state (a warm start across states and trial tensions; 1 before any state).
+ * Set element loads from the wire loading. The exact theory scales the wire's load by ds₀/dx and
+ * the ice and wind on hung cables by ds/dx, both of the last solved state (a warm start across
+ * states and trial tensions; before any state ds₀/dx = 1 and ds/dx = √(1 + c²)). The parabolic
+ * theory keeps the wire's load per horizontal metre and turns the hung cables' ice and wind
+ * into per horizontal metre with the chord's ds/dx = √(1 + c²).
  */
 function updateLoads(spans: readonly SpanModel[], wire: WireLoading, tensionShiftN = 0): number {
   const useGeometry = wire.theory === 'exact';
@@ -88,11 +97,16 @@ function updateLoads(spans: readonly SpanModel[], wire: WireLoading, tensionShif
   let scale = 0;
   for (const span of spans) {
     let lateral = false;
+    for (const force of span.pointLateral) if (force !== 0) lateral = true;
+    const chordArcRatio = Math.sqrt(1 + span.chordSlope * span.chordSlope);
     for (let e = 0; e < span.elementLength.length; e++) {
+      const L = span.elementLength[e];
       const unstressed = span.unstressedElement[e] + span.unstressedElementSlope[e] * tensionShiftN;
-      const ratio = useGeometry && unstressed > 0 ? unstressed / span.elementLength[e] : 1;
-      const q = wire.weightNPerM * ratio + span.hungVertical[e];
-      const p = wire.windNPerM * ratio + span.hungLateral[e];
+      const ratio = useGeometry && unstressed > 0 ? unstressed / L : 1;
+      const arc = span.arcElement[e] + span.arcElementSlope[e] * tensionShiftN;
+      const arcRatio = useGeometry && arc > 0 ? arc / L : chordArcRatio;
+      const q = wire.weightNPerM * ratio + span.hungVertical[e] + span.hungIceAlong[e] * arcRatio;
+      const p = wire.windNPerM * ratio + span.hungWindAlong[e] * arcRatio;
       change = Math.max(change, Math.abs(q - span.qVertical[e]), Math.abs(p - span.qLateral[e]));
       scale = Math.max(scale, Math.abs(q), Math.abs(p));
       span.qVertical[e] = q;

@@ -33,13 +33,13 @@ export interface ProjectModel {
 
 export const INSTALLATION_NAME = 'Installation';
 
-export function buildProjectModel(project: Project, elementsPerSpan?: number): ProjectModel {
+/** The model of a project; `refinement` k splits every element of the project's mesh into k. */
+export function buildProjectModel(project: Project, refinement = 1): ProjectModel {
   const settings: ModelSettings = { ...DEFAULT_MODEL, ...project.model };
   const env: Environment = { ...DEFAULT_ENVIRONMENT, ...project.environment };
   const wire = resolveWire(project.wire);
   if (!wire) throw new Error('wire: unknown catalogue id');
   const breakpoints = loadBreakpoints(project.loads);
-  const count = elementsPerSpan ?? settings.elementsPerSpan;
   const spans: SpanModel[] = [];
   const sections: number[][] = [[]];
   const s = project.supports;
@@ -51,8 +51,9 @@ export function buildProjectModel(project: Project, elementsPerSpan?: number): P
         s[j + 1].x,
         s[j + 1].z,
         breakpoints,
-        count,
+        settings.elementsPerSpan,
         settings.elementOrder,
+        refinement,
       ),
     );
     sections[sections.length - 1].push(j);

@@ -4,7 +4,10 @@
  * (never the raw error text). Unsolved cases carry NaN, which JSON writes as null.
  */
 
-import type { CaseResult, Project, ProjectResults } from './project.ts';
+import { caseResultId, INSTALLATION_ID } from './caseIds.ts';
+import { ERROR_TARGET } from './discretisation.ts';
+import { resolveEndFittings } from './endFittings.ts';
+import type { CaseResult, EndFittingsResult, Project, ProjectResults } from './project.ts';
 import { INSTALLATION_NAME } from './projectModel.ts';
 
 export const INTERNAL_ERROR_MESSAGE =
@@ -32,8 +35,9 @@ export function firstNonFinite(value: unknown, path = ''): string | undefined {
   return undefined;
 }
 
-function unsolvedCase(name: string, temperature: number, message: string): CaseResult {
+function unsolvedCase(id: string, name: string, temperature: number, message: string): CaseResult {
   return {
+    id,
     name,
     solved: false,
     horizontalTension: Number.NaN,
@@ -55,6 +59,14 @@ function unsolvedCase(name: string, temperature: number, message: string): CaseR
   };
 }
 
+function fittingsOrNone(project: Project): EndFittingsResult {
+  try {
+    return resolveEndFittings(project.limits?.endFittings);
+  } catch {
+    return resolveEndFittings(undefined);
+  }
+}
+
 /**
  * Results with no case solved, each saying why: by default that the solver failed inside
  * (internalError true); with a message, a reason that is not an internal fault.
@@ -62,18 +74,27 @@ function unsolvedCase(name: string, temperature: number, message: string): CaseR
 export function unsolvedResults(project: Project, message?: string): ProjectResults {
   const why = message ?? INTERNAL_ERROR_MESSAGE;
   const cases = [
-    unsolvedCase(INSTALLATION_NAME, project.installation.temperature, why),
-    ...project.cases.map((c) => unsolvedCase(c.name, c.temperature, why)),
+    unsolvedCase(INSTALLATION_ID, INSTALLATION_NAME, project.installation.temperature, why),
+    ...project.cases.map((c, i) => unsolvedCase(caseResultId(i), c.name, c.temperature, why)),
   ];
+  const none = { tension: INSTALLATION_NAME, clearance: INSTALLATION_NAME };
   return {
     unstressedLength: Number.NaN,
     cases,
-    governing: { tension: INSTALLATION_NAME, clearance: INSTALLATION_NAME },
+    governing: none,
+    governingIds: { tension: INSTALLATION_ID, clearance: INSTALLATION_ID },
     setUpChart: [],
     setUpSpan: 0,
+    endFittings: fittingsOrNone(project),
     ...(message === undefined ? { internalError: true } : {}),
     notices: [],
-    elementsPerSpan: 0,
+    mesh: {
+      refinement: 0,
+      elementsPerSpan: 0,
+      errorTarget: ERROR_TARGET,
+      largestError: Number.NaN,
+      reached: false,
+    },
   };
 }
 
@@ -81,7 +102,8 @@ export function unsolvedResults(project: Project, message?: string): ProjectResu
 export function guardFinite(results: ProjectResults): ProjectResults {
   results.cases = results.cases.map((c) => {
     if (!c.solved || firstNonFinite(c) === undefined) return c;
-    return { ...unsolvedCase(c.name, c.temperature, NOT_FINITE_MESSAGE), iterations: c.iterations };
+    const unsolved = unsolvedCase(c.id, c.name, c.temperature, NOT_FINITE_MESSAGE);
+    return { ...unsolved, iterations: c.iterations };
   });
   for (const row of results.setUpChart)
     if (row.solved && firstNonFinite(row) !== undefined) row.solved = false;

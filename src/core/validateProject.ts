@@ -4,6 +4,7 @@
  * with the field path and the rule; nothing is repaired. A newer version is refused by name.
  */
 
+import { END_FITTING_KINDS } from './endFittings.ts';
 import { describeRange, RANGES } from './fieldRanges.ts';
 import { PROJECT_FORMAT, PROJECT_VERSION, type Project } from './project.ts';
 import { FieldChecker, type Json, quoted, type ValidationIssue } from './validateFields.ts';
@@ -140,7 +141,16 @@ function checkLoads(c: FieldChecker, raw: unknown, first: number, last: number):
     const path = `loads[${i}]`;
     const kind = (item as Json | null)?.type;
     if (kind === 'point') {
-      const p = c.object(item, path, ['type', 'x', 'mass', 'force', 'label']);
+      const p = c.object(item, path, [
+        'type',
+        'x',
+        'mass',
+        'force',
+        'windArea',
+        'dragCoefficient',
+        'drop',
+        'label',
+      ]);
       if (!p) return;
       c.number(p.x, `${path}.x`, first, last);
       c.label(p.label, `${path}.label`, 100, false);
@@ -148,9 +158,22 @@ function checkLoads(c: FieldChecker, raw: unknown, first: number, last: number):
         c.fail(path, 'needs exactly one of mass (kg) or force (N)');
       else if (p.mass !== undefined) c.inRange(p.mass, `${path}.mass`, RANGES.pointMass);
       else c.inRange(p.force, `${path}.force`, RANGES.pointForce);
+      if (p.windArea !== undefined) c.inRange(p.windArea, `${path}.windArea`, RANGES.windArea);
+      if (p.dragCoefficient !== undefined)
+        c.inRange(p.dragCoefficient, `${path}.dragCoefficient`, RANGES.dragCoefficient);
+      if (p.drop !== undefined) c.inRange(p.drop, `${path}.drop`, RANGES.drop);
     } else if (kind === 'uniform') {
-      const u = c.object(item, path, ['type', 'from', 'to', 'massPerLength', 'diameter', 'label']);
+      const u = c.object(item, path, [
+        'type',
+        'from',
+        'to',
+        'massPerLength',
+        'diameter',
+        'drop',
+        'label',
+      ]);
       if (!u) return;
+      if (u.drop !== undefined) c.inRange(u.drop, `${path}.drop`, RANGES.drop);
       const from = c.number(u.from, `${path}.from`, first, last);
       const to = c.number(u.to, `${path}.to`, first, last);
       if (from !== undefined && to !== undefined && to <= from)
@@ -190,11 +213,30 @@ function checkCases(c: FieldChecker, raw: unknown): string[] {
   return names;
 }
 
+function checkEndFitting(c: FieldChecker, raw: unknown, path: string): void {
+  const f = c.object(raw, path, ['kind', 'efficiency']);
+  if (!f) return;
+  const kind = c.oneOf(f.kind, `${path}.kind`, END_FITTING_KINDS);
+  if (kind === 'custom') c.inRange(f.efficiency, `${path}.efficiency`, RANGES.endFittingEfficiency);
+  else if (kind !== undefined && f.efficiency !== undefined)
+    c.fail(
+      `${path}.efficiency`,
+      'applies only to kind "custom" (the table value is used for the other kinds)',
+    );
+}
+
 function checkLimits(c: FieldChecker, raw: unknown, first: number, last: number): void {
-  const l = c.object(raw, 'limits', ['safetyFactor', 'minClearance', 'zones']);
+  const l = c.object(raw, 'limits', ['safetyFactor', 'minClearance', 'zones', 'endFittings']);
   if (!l) return;
   c.inRange(l.safetyFactor, 'limits.safetyFactor', RANGES.safetyFactor);
   c.inRange(l.minClearance, 'limits.minClearance', RANGES.clearance);
+  if (l.endFittings !== undefined) {
+    const ends = c.object(l.endFittings, 'limits.endFittings', ['start', 'end']);
+    if (ends) {
+      checkEndFitting(c, ends.start, 'limits.endFittings.start');
+      checkEndFitting(c, ends.end, 'limits.endFittings.end');
+    }
+  }
   if (l.zones === undefined) return;
   (c.array(l.zones, 'limits.zones', 0, 50) ?? []).forEach((item, i) => {
     const path = `limits.zones[${i}]`;

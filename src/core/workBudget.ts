@@ -6,6 +6,7 @@
  * words and its discretisation error is estimated as for any mesh.
  */
 import { DEFAULT_MODEL, type Project } from './project.ts';
+import type { ProjectModel } from './projectModel.ts';
 
 export const ELEMENT_BUDGET = 20_000;
 export const STATE_ELEMENT_BUDGET = 100_000;
@@ -29,4 +30,11 @@ export function planMesh(project: Project): MeshPlan {
     elementsPerSpan: allowed,
     notice: `Mesh coarsened from ${requested} to ${allowed} elements per span to keep the work within the solver's budget (${spans} span${spans === 1 ? '' : 's'} × ${states} states, at most ${STATE_ELEMENT_BUDGET.toLocaleString('en')} element-states); the discretisation error estimate covers the coarser mesh.`,
   };
+}
+
+/** True when the model's mesh, refined by `factor`, stays within the element-state budget. */
+export function withinBudget(model: ProjectModel, factor: number): boolean {
+  const elements = model.spans.reduce((sum, span) => sum + span.mesh.elementCount, 0);
+  const states = model.project.cases.length + 1;
+  return factor * elements <= ELEMENT_BUDGET && factor * elements * states <= STATE_ELEMENT_BUDGET;
 }

@@ -1,10 +1,12 @@
 /**
  * Immutable edits of the project document, one small function per kind of change. Each returns
  * a function from the old document to the new one, so an edit can be validated on a copy
- * before it is committed.
+ * before it is committed (src/state/commit.ts, the only way an edit reaches the document).
+ * What depends on a removed item is carried along there (dependants.ts), not here.
  */
 import type {
   ClearanceZone,
+  EndFitting,
   GroundPoint,
   Installation,
   InstallationTarget,
@@ -109,6 +111,19 @@ export const setWire =
   (wire: WireSpec): Edit =>
   (p) => ({ ...p, wire });
 
+/**
+ * Set one end's fitting. Without fittings in the file the other end takes the same kind (shown
+ * at once, to be changed); `undefined` removes the fittings of both ends (no reduction).
+ */
+export const setEndFitting =
+  (end: 'start' | 'end', fitting: EndFitting | undefined): Edit =>
+  (p) => {
+    const { endFittings: old, ...rest } = p.limits;
+    if (!fitting) return { ...p, limits: rest };
+    const both = old ?? { start: fitting, end: fitting };
+    return { ...p, limits: { ...rest, endFittings: { ...both, [end]: fitting } } };
+  };
+
 export const patchLoad =
   (index: number, patch: Partial<Load>): Edit =>
   (p) => ({ ...p, loads: replaceAt(p.loads, index, { ...p.loads[index], ...patch } as Load) });
@@ -184,22 +199,10 @@ export const duplicateCase =
     return { ...p, cases: insertAt(p.cases, index + 1, copy) };
   };
 
-function withoutCase(target: InstallationTarget): InstallationTarget {
-  const { case: _dropped, ...rest } = target;
-  return rest;
-}
-
+/** A target stated in the removed case is carried back to the installation by commit(). */
 export const removeCase =
   (index: number): Edit =>
-  (p) => {
-    const removed = p.cases[index];
-    const target = p.installation.target;
-    const installation =
-      target.case === removed.name
-        ? { ...p.installation, target: withoutCase(target) }
-        : p.installation;
-    return { ...p, cases: removeAt(p.cases, index), installation };
-  };
+  (p) => ({ ...p, cases: removeAt(p.cases, index) });
 
 export const patchLimits =
   (patch: Partial<Limits>): Edit =>

@@ -15,6 +15,7 @@ import { applyEdit } from '../fields/ChoiceFields.tsx';
 import { NumberField } from '../fields/NumberField.tsx';
 import { TextField } from '../fields/TextField.tsx';
 import { show } from '../format.ts';
+import { EndFittingsFields } from './EndFittingsFields.tsx';
 
 function matches(wire: WireProperties, query: string): boolean {
   const words = query.toLowerCase().split(/\s+/).filter(Boolean);
@@ -56,7 +57,7 @@ function CataloguePicker({ selectedId }: { selectedId: string }) {
         id={listId}
         size={6}
         value={selectedId}
-        onChange={(event) => applyEdit(setWire({ catalogId: event.target.value }))}
+        onChange={(event) => applyEdit(setWire({ catalogId: event.target.value }), 'Choose a wire')}
       >
         {found.map((wire) => (
           <option key={wire.id} value={wire.id}>
@@ -133,7 +134,7 @@ export function WirePanel() {
             type="radio"
             name="wire-source"
             checked={isCatalogue}
-            onChange={() => applyEdit(setWire({ catalogId: firstWire.id }))}
+            onChange={() => applyEdit(setWire({ catalogId: firstWire.id }), 'Use a catalogue wire')}
           />
           From the catalogue
         </label>
@@ -142,7 +143,9 @@ export function WirePanel() {
             type="radio"
             name="wire-source"
             checked={!isCatalogue}
-            onChange={() => resolved && applyEdit(setWire(toCustom(resolved)))}
+            onChange={() =>
+              resolved && applyEdit(setWire(toCustom(resolved)), 'Use my own wire values')
+            }
           />
           My own values
         </label>
@@ -155,6 +158,7 @@ export function WirePanel() {
       ) : (
         <CustomValues wire={wireSpec} />
       )}
+      <EndFittingsFields />
     </section>
   );
 }

@@ -20,7 +20,7 @@ function swingTrace(result: CaseResult, index: number, units: UnitSystem): Data 
     type: 'scatter',
     mode: 'lines',
     name: plotlyText(result.name),
-    legendgroup: plotlyText(result.name),
+    legendgroup: result.id,
     x: profile.x.map(len),
     y: profile.y.map(len),
     customdata: profile.tension.map((t) => fromSi(t, 'force', units)),

@@ -1,9 +1,20 @@
-/** The pull of the wire on each fixing, per case: horizontal, vertical, sideways, resultant, angle. */
+/**
+ * The pull of the wire on each fixing, per case: horizontal, vertical, sideways, resultant, angle,
+ * and at the two end fixings the end fitting the wire is terminated with.
+ */
 import type { ProjectResults } from '../../core/index.ts';
 import { unitSymbol } from '../../core/units.ts';
 import { useProjectStore } from '../../state/projectStore.ts';
 import { useUiStore } from '../../state/uiStore.ts';
 import { num } from '../format.ts';
+
+function fittingAt(results: ProjectResults, index: number, count: number): string {
+  const end =
+    index === 0 ? results.endFittings.start : index === count - 1 ? results.endFittings.end : null;
+  if (!end) return '—';
+  if (end.kind === 'notStated') return 'not stated';
+  return `${end.label}, ${Math.round(end.efficiency * 1000) / 10} %`;
+}
 
 export function ReactionsTable({ results }: { results: ProjectResults }) {
   const units = useUiStore((s) => s.unitSystem);
@@ -24,13 +35,14 @@ export function ReactionsTable({ results }: { results: ProjectResults }) {
               <th scope="col">Sideways ({fu})</th>
               <th scope="col">Resultant ({fu})</th>
               <th scope="col">Angle below horizontal (°)</th>
+              <th scope="col">End fitting</th>
             </tr>
           </thead>
           <tbody>
             {results.cases.flatMap((result) =>
               result.supports.map((reaction, i) => (
                 // biome-ignore lint/suspicious/noArrayIndexKey: one row per fixing, in order
-                <tr key={`${result.name}-${i}`}>
+                <tr key={`${result.id}-${i}`}>
                   {i === 0 && (
                     <th scope="rowgroup" rowSpan={result.supports.length}>
                       {result.name}
@@ -42,6 +54,7 @@ export function ReactionsTable({ results }: { results: ProjectResults }) {
                   <td>{force(reaction.lateral)}</td>
                   <td>{force(reaction.resultant)}</td>
                   <td>{reaction.angle.toFixed(1)}</td>
+                  <td>{fittingAt(results, i, result.supports.length)}</td>
                 </tr>
               )),
             )}

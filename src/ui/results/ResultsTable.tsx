@@ -15,9 +15,18 @@ function Verdict({ result }: { result: CaseResult }) {
 
 function governs(result: CaseResult, results: ProjectResults): string[] {
   const marks: string[] = [];
-  if (results.governing.tension === result.name) marks.push('governs tension');
-  if (results.governing.clearance === result.name) marks.push('governs clearance');
+  if (results.governingIds.tension === result.id) marks.push('governs tension');
+  if (results.governingIds.clearance === result.id) marks.push('governs clearance');
   return marks;
+}
+
+/** How the utilisation is formed, naming the end fitting that limits it. */
+export function utilisationBasis(results: ProjectResults): string {
+  const f = results.endFittings;
+  if (!f.stated)
+    return 'Utilisation = largest tension × safety factor / breaking load. No end fittings stated: terminations taken as strong as the wire.';
+  const weaker = f[f.governing];
+  return `Utilisation = largest tension × safety factor / (breaking load × ${percent(f.efficiency)}): the weaker end fitting is ${weaker.label.toLowerCase()} at the ${f.governing === 'start' ? 'first' : 'last'} fixing.`;
 }
 
 export function ResultsTable({ results }: { results: ProjectResults }) {
@@ -26,6 +35,7 @@ export function ResultsTable({ results }: { results: ProjectResults }) {
   const fu = unitSymbol('force', units);
   return (
     <div className="table-scroll">
+      <p className="case-meta utilisation-basis">{utilisationBasis(results)}</p>
       <table className="results" aria-label="Results by case">
         <thead>
           <tr>
@@ -50,7 +60,7 @@ export function ResultsTable({ results }: { results: ProjectResults }) {
               )
               .join('; ');
             return (
-              <tr key={result.name} className={marks.length ? 'governing' : undefined}>
+              <tr key={result.id} className={marks.length ? 'governing' : undefined}>
                 <th scope="row">
                   {result.name}
                   <span className="case-meta">
