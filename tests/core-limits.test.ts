@@ -285,12 +285,15 @@ describe('the work of one solve is bounded', () => {
     const plan = planMesh(project);
     expect(plan.elementsPerSpan * 49 * 51).toBeLessThanOrEqual(STATE_ELEMENT_BUDGET);
     const results = solveProject(project);
-    expect(results.mesh.elementsPerSpan).toBe(plan.elementsPerSpan);
+    // The most finely meshed span has the planned elements plus a node at each load in it.
+    expect(results.mesh.refinement).toBe(1);
+    expect(results.mesh.elementsPerSpan).toBeGreaterThanOrEqual(plan.elementsPerSpan);
+    expect(results.mesh.elementsPerSpan).toBeLessThan(plan.elementsPerSpan + 15);
     expect(results.notices[0]).toMatch(/Mesh coarsened from 20000 to \d+ elements per span/);
     expect(results.cases[0].messages.join(' ')).toMatch(/Mesh coarsened/);
     expect(results.cases.every((c) => c.solved)).toBe(true);
     for (const c of results.cases) expect(c.profile?.x.length ?? 0).toBeLessThanOrEqual(2100);
-  });
+  }, 120_000); // an allowance for a loaded machine, not a speed check (npm run bench measures)
 
   it('leaves an ordinary project untouched', () => {
     expect(planMesh(EXAMPLE)).toEqual({ elementsPerSpan: 200 });

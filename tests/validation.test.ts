@@ -120,7 +120,7 @@ const BAD_FILES: [string, (doc: Doc) => void, string, RegExp][] = [
     'zero target tension',
     set('installation.target', { maxTension: 0 }),
     'installation.target.maxTension',
-    /at least 1; the range is 1 to 1000000000 N/,
+    /at least 1; the range is 1 to 1e9 N/,
   ],
   [
     'unknown catalogue id',

@@ -161,13 +161,18 @@ function solveWithinBudget(whole: Project, options: SolveOptions): ProjectResult
   let run = solveOnMesh(project, 1, fittings);
   let errors = estimateErrors(run.model, 1, run.target.tensionN, run.summaries);
   const worst = () => Math.max(0, ...errors.filter((_, i) => run.results[i].solved).map((e) => e));
+  // A refinement that does not at least halve the estimate (order 2 gives a quarter) is not
+  // converging: the mesh is not what is wrong, so refining further only costs time.
+  let previous = Number.POSITIVE_INFINITY;
   while (
     options.refine !== false &&
     worst() >= ERROR_TARGET &&
+    worst() <= previous / 2 &&
     run.refinement < MAX_REFINEMENT &&
     2 * largestElementCount(run.model) <= MAX_REFINED_ELEMENTS &&
     withinBudget(run.model, 2)
   ) {
+    previous = worst();
     run = solveOnMesh(project, 2 * run.refinement, fittings);
     errors = estimateErrors(run.model, run.refinement, run.target.tensionN, run.summaries);
   }

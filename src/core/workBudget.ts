@@ -9,7 +9,7 @@ import { DEFAULT_MODEL, type Project } from './project.ts';
 import type { ProjectModel } from './projectModel.ts';
 
 export const ELEMENT_BUDGET = 20_000;
-export const STATE_ELEMENT_BUDGET = 100_000;
+export const STATE_ELEMENT_BUDGET = 50_000;
 
 export interface MeshPlan {
   elementsPerSpan: number;
