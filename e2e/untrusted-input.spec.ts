@@ -17,8 +17,12 @@ function demoProject(): Project {
   return structuredClone(checked.project);
 }
 
+/** The solver's status line (the results also hold the design aids' own status). */
 function solverStatus(page: Page) {
-  return page.getByRole('region', { name: 'Results' }).getByRole('status');
+  return page
+    .getByRole('region', { name: 'Results' })
+    .getByRole('status')
+    .and(page.locator(':not([aria-label="Design aids status"])'));
 }
 
 const plot = (page: Page) => page.getByRole('figure', { name: 'Sag plot' });
@@ -75,4 +79,51 @@ test('names carrying <a href> and <b> are drawn as text; clicking where the link
   expect(context.pages().length).toBe(pagesBefore);
   expect(page.url()).toBe(pageUrl);
   expect(requests.filter((url) => url.includes('example.test'))).toEqual([]);
+});
+
+test('the page runs under its Content-Security-Policy with no violation and no foreign request', async ({
+  page,
+}) => {
+  test.slow(); // loads Plotly and draws three exports on a shared machine
+  await page.addInitScript(() => {
+    const seen: string[] = [];
+    (window as unknown as { __violations: string[] }).__violations = seen;
+    document.addEventListener('securitypolicyviolation', (event) =>
+      seen.push(`${event.violatedDirective} ${event.blockedURI} ${event.sourceFile}`),
+    );
+  });
+  const requests: string[] = [];
+  page.on('request', (request) => requests.push(request.url()));
+  const response = await page.goto('/');
+  const header = response?.headers()['content-security-policy'] ?? '';
+  expect(header).toContain("script-src 'self'");
+  expect(header).not.toMatch(/unsafe-inline|unsafe-eval/);
+  const meta = page.locator('meta[http-equiv="Content-Security-Policy"]');
+  await expect(meta).toHaveAttribute(
+    'content',
+    /default-src 'self'; script-src 'self'; style-src 'self'/,
+  );
+  await expect(solverStatus(page)).toHaveText('Up to date.');
+  await expect(plot(page)).toHaveAttribute('data-plot-state', 'drawn');
+  for (const item of ['Plot as SVG', 'Plot as PNG', 'Wire profiles as CSV']) {
+    const download = page.waitForEvent('download');
+    await page.getByRole('button', { name: 'File and export' }).click();
+    await page.getByRole('button', { name: item, exact: true }).click();
+    await download;
+  }
+  await page.mouse.move(500, 400); // hover labels
+  expect(
+    await page.evaluate(() => (window as unknown as { __violations: string[] }).__violations),
+  ).toEqual([]);
+  const origin = new URL(page.url()).origin;
+  expect(requests.filter((url) => !url.startsWith(origin) && !/^(data|blob):/.test(url))).toEqual(
+    [],
+  );
+  // No source maps shipped: the scripts the page loaded point to none.
+  const scripts = requests.filter((url) => url.endsWith('.js'));
+  expect(scripts.length).toBeGreaterThan(0);
+  for (const url of scripts) {
+    const body = await (await page.request.get(url)).text();
+    expect(body, url).not.toContain('sourceMappingURL');
+  }
 });
