@@ -9,6 +9,7 @@ import { startAppSession } from './state/appSession.ts';
 import { App } from './ui/App.tsx';
 import { WorkbenchErrorBoundary } from './ui/WorkbenchErrorBoundary.tsx';
 import { createSolverWorker } from './worker/createSolverWorker.ts';
+import './shell.css';
 import './ui/workbench.css';
 
 const container = document.getElementById('root');

@@ -26,6 +26,8 @@ export const PLOT_DRAW_MEASURE = 'sagwright:plot-draw';
 const CONFIG: Partial<Config> = {
   displaylogo: false,
   responsive: true,
+  // Text is the person's own: never typeset as TeX (a label between $ signs stays text).
+  typesetMath: false,
   modeBarButtonsToRemove: ['select2d', 'lasso2d'],
 };
 
