@@ -10,6 +10,8 @@ import { App } from './ui/App.tsx';
 import { WorkbenchErrorBoundary } from './ui/WorkbenchErrorBoundary.tsx';
 import { createSolverWorker } from './worker/createSolverWorker.ts';
 import './ui/workbench.css';
+// After the workbench's own rules, so the phone and tablet rules win where they overlap.
+import './ui/smallScreens.css';
 
 const container = document.getElementById('root');
 if (!container) throw new Error('index.html has no #root element');

@@ -15,7 +15,9 @@ import {
 } from '../../deliverables/setUpContent.ts';
 import { useUiStore } from '../../state/uiStore.ts';
 import { num, show } from '../format.ts';
+import { SETTING_ON_THE_DAY_ID } from '../sectionIds.ts';
 import './setUpChart.css';
+import { TableScroll } from './TableScroll.tsx';
 
 /** Whole degrees unless the temperature has a fraction in the units shown (59.9 °F). */
 function temperatureText(celsius: number, units: UnitSystem): string {
@@ -62,7 +64,7 @@ export function SetUpChart({ project, results }: { project: Project; results: Pr
   const fu = unitSymbol('force', units);
   const span = spanName(project, results.setUpSpan);
   return (
-    <section className="setup-chart" aria-labelledby={headingId}>
+    <section className="setup-chart" id={SETTING_ON_THE_DAY_ID} aria-labelledby={headingId}>
       <h2 id={headingId}>{SET_UP_HEADING}</h2>
       <p className="setup-note">
         {setUpExplanation(
@@ -70,7 +72,7 @@ export function SetUpChart({ project, results }: { project: Project; results: Pr
           temperatureText(project.installation.temperature, units),
         )}
       </p>
-      <div className="table-scroll">
+      <TableScroll>
         <table className="results setup-table" aria-labelledby={headingId}>
           <thead>
             <tr>
@@ -94,7 +96,7 @@ export function SetUpChart({ project, results }: { project: Project; results: Pr
             ))}
           </tbody>
         </table>
-      </div>
+      </TableScroll>
       <p className="setup-note muted">{pulseCheck(span)}</p>
     </section>
   );
