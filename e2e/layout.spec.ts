@@ -16,7 +16,7 @@ const VIEWS = [
 
 async function open(page: Page) {
   await page.goto('/');
-  await expect(page.getByRole('status')).toHaveText('Up to date.');
+  await expect(page.getByRole('status')).toHaveText('Up to date.', { timeout: 30_000 });
   await expect(page.getByRole('figure', { name: 'Sag plot' })).toHaveAttribute(
     'data-plot-state',
     'drawn',
