@@ -3,18 +3,24 @@
  * browser, PDF report, plot images, CSV and the client view; plus the shared-project banner.
  * Refused files list the field paths and leave the open project as it was.
  */
-import { useEffect, useMemo, useRef, useState } from 'react';
+import { lazy, Suspense, useEffect, useMemo, useRef, useState } from 'react';
 import './export.css';
 import { type OpenResult, PROJECT_FILE_EXTENSION } from '../../deliverables/projectFile.ts';
 import { commitOpened } from '../../state/commit.ts';
 import { useProjectStore } from '../../state/projectStore.ts';
 import { useUiStore } from '../../state/uiStore.ts';
-import { ClientView } from './ClientView.tsx';
 import { ExportNotice, type Notice, SharedBanner } from './ExportNotices.tsx';
 import * as actions from './exportActions.ts';
-import { LibraryDialog } from './LibraryDialog.tsx';
-import { ReportDialog } from './ReportDialog.tsx';
 import { useSharedProject } from './useSharedProject.ts';
+
+// The dialogs load when first opened, so the first screen does not wait for their code.
+const ClientView = lazy(() => import('./ClientView.tsx').then((m) => ({ default: m.ClientView })));
+const LibraryDialog = lazy(() =>
+  import('./LibraryDialog.tsx').then((m) => ({ default: m.LibraryDialog })),
+);
+const ReportDialog = lazy(() =>
+  import('./ReportDialog.tsx').then((m) => ({ default: m.ReportDialog })),
+);
 
 type Dialog = 'none' | 'report' | 'library' | 'client';
 
@@ -184,35 +190,37 @@ export function ExportMenu() {
         onGoBack={shared.goBack}
         onDismiss={shared.dismiss}
       />
-      {dialog === 'report' && (
-        <ReportDialog
-          busy={busy}
-          returnFocus={menuButton}
-          onClose={closeDialog}
-          onCreate={(paper, details) => {
-            run('The PDF report', () => actions.saveReport(project, units, paper, details))().then(
-              closeDialog,
-            );
-          }}
-        />
-      )}
-      {dialog === 'library' && (
-        <LibraryDialog
-          project={project}
-          returnFocus={menuButton}
-          onOpened={(r) => applyOpened(r, 'The saved project')}
-          onClose={closeDialog}
-        />
-      )}
-      {dialog === 'client' && clientResults && (
-        <ClientView
-          project={project}
-          results={clientResults}
-          units={units}
-          returnFocus={menuButton}
-          onClose={closeDialog}
-        />
-      )}
+      <Suspense fallback={null}>
+        {dialog === 'report' && (
+          <ReportDialog
+            busy={busy}
+            returnFocus={menuButton}
+            onClose={closeDialog}
+            onCreate={(paper, details) => {
+              run('The PDF report', () =>
+                actions.saveReport(project, units, paper, details),
+              )().then(closeDialog);
+            }}
+          />
+        )}
+        {dialog === 'library' && (
+          <LibraryDialog
+            project={project}
+            returnFocus={menuButton}
+            onOpened={(r) => applyOpened(r, 'The saved project')}
+            onClose={closeDialog}
+          />
+        )}
+        {dialog === 'client' && clientResults && (
+          <ClientView
+            project={project}
+            results={clientResults}
+            units={units}
+            returnFocus={menuButton}
+            onClose={closeDialog}
+          />
+        )}
+      </Suspense>
     </div>
   );
 }
