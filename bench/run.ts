@@ -21,6 +21,7 @@ import { buildProjectModel, prepareState } from '../src/core/projectModel.ts';
 import { setUpChart } from '../src/core/setUpChart.ts';
 import { solveChangeOfState, solveInstallation } from '../src/core/states.ts';
 import { browserLines, measureBrowser } from './browser.ts';
+import { designRows } from './designBench.ts';
 
 const RUNS = 7;
 /** doc/benchmarks.md keeps everything from this heading on when rewritten. */
@@ -186,6 +187,11 @@ for (const [stage, micros] of demoBreakdown('examples/courtyard-lights.json'))
   say(`| ${stage} | ${f1(micros)} |`);
 
 say('');
+for (const row of designRows(timeCall, [
+  'examples/courtyard-lights.json',
+  'examples/workshop-yard-inclined.json',
+]))
+  say(row);
 if (process.argv.includes('--no-browser')) say('(browser figures skipped: --no-browser)');
 else if (!existsSync('dist/index.html'))
   say('(browser figures skipped: run `npm run build` first)');

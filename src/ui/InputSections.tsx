@@ -2,7 +2,7 @@
  * The inputs, grouped as an installer works. On a wide screen every group is shown in one
  * column beside the results. On a phone or tablet (narrower than about 1000 px, the CSS media
  * query in smallScreens.css) the results come first and the inputs are reached one group at a
- * time through a row of large section buttons, with the setting for the day one tap away.
+ * time through a row of large section buttons, with today's setting one tap away.
  */
 import { type ReactNode, useState } from 'react';
 import { CasesPanel } from './panels/CasesPanel.tsx';
@@ -11,7 +11,7 @@ import { LimitsPanel } from './panels/LimitsPanel.tsx';
 import { LoadsPanel } from './panels/LoadsPanel.tsx';
 import { SpanPanel } from './panels/SpanPanel.tsx';
 import { WirePanel } from './panels/WirePanel.tsx';
-import { SETTING_ON_THE_DAY_ID } from './sectionIds.ts';
+import { TODAYS_SETTING_ID } from './sectionIds.ts';
 
 const SECTIONS: { key: string; label: string; panel: ReactNode }[] = [
   { key: 'span', label: 'Span', panel: <SpanPanel /> },
@@ -38,8 +38,8 @@ export function InputSections() {
             {label}
           </button>
         ))}
-        <a className="button-link" href={`#${SETTING_ON_THE_DAY_ID}`}>
-          Setting on the day
+        <a className="button-link" href={`#${TODAYS_SETTING_ID}`}>
+          Today's setting
         </a>
       </nav>
       {SECTIONS.map(({ key, panel }) => (

@@ -1,4 +1,4 @@
 /** Ids of sections that other parts of the page link to. */
 
-/** The results' "setting the wire on the day" section (the inputs' shortcut on small screens). */
-export const SETTING_ON_THE_DAY_ID = 'setting-on-the-day';
+/** The design aids' "Today's setting" (the inputs' shortcut on small screens). */
+export const TODAYS_SETTING_ID = 'todays-setting';

@@ -9,13 +9,13 @@ import { fromSi, type UnitSystem, unitSymbol } from '../../core/units.ts';
 import {
   isInstallationRow,
   pulseCheck,
+  returnTimeText,
   SET_UP_HEADING,
   setUpExplanation,
   spanName,
 } from '../../deliverables/setUpContent.ts';
 import { useUiStore } from '../../state/uiStore.ts';
 import { num, show } from '../format.ts';
-import { SETTING_ON_THE_DAY_ID } from '../sectionIds.ts';
 import './setUpChart.css';
 import { TableScroll } from './TableScroll.tsx';
 
@@ -46,7 +46,7 @@ function Row({ row, installation, units }: RowProps) {
       <td>{num(row.horizontalTension, 'force', units)}</td>
       <td>{num(row.maxTension, 'force', units)}</td>
       <td>{num(row.sag, 'length', units)}</td>
-      <td>{row.returnTime.toFixed(2)}</td>
+      <td>{returnTimeText(row)}</td>
     </tr>
   );
 }
@@ -64,7 +64,7 @@ export function SetUpChart({ project, results }: { project: Project; results: Pr
   const fu = unitSymbol('force', units);
   const span = spanName(project, results.setUpSpan);
   return (
-    <section className="setup-chart" id={SETTING_ON_THE_DAY_ID} aria-labelledby={headingId}>
+    <section className="setup-chart" aria-labelledby={headingId}>
       <h2 id={headingId}>{SET_UP_HEADING}</h2>
       <p className="setup-note">
         {setUpExplanation(
@@ -97,7 +97,12 @@ export function SetUpChart({ project, results }: { project: Project; results: Pr
           </tbody>
         </table>
       </TableScroll>
-      <p className="setup-note muted">{pulseCheck(span)}</p>
+      <p className="setup-note muted">
+        {pulseCheck(
+          span,
+          results.setUpChart.some((row) => row.returnTime !== null),
+        )}
+      </p>
     </section>
   );
 }
