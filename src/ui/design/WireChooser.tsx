@@ -15,6 +15,7 @@ import { type UnitSystem, unitSymbol } from '../../core/units.ts';
 import { useDesignStore } from '../../state/designStore.ts';
 import { useProjectStore } from '../../state/projectStore.ts';
 import { num, show } from '../format.ts';
+import { TableScroll } from '../results/TableScroll.tsx';
 
 const FAMILIES: { value: WireFamily | 'all'; label: string }[] = [
   { value: 'all', label: 'All types' },
@@ -151,7 +152,7 @@ function ChooserList({
       {shown.length === 0 ? (
         <p>No wire of this type works for this project.</p>
       ) : (
-        <div className="table-scroll">
+        <TableScroll>
           <table className="results" aria-labelledby="chooser-heading">
             <thead>
               <tr>
@@ -176,7 +177,7 @@ function ChooserList({
               ))}
             </tbody>
           </table>
-        </div>
+        </TableScroll>
       )}
       {shown.length > SHORT_LIST && (
         <button type="button" onClick={() => setAll(!all)}>
