@@ -185,12 +185,13 @@ export function methodText(
       ? 'Theory: exact (the wire’s weight acts per metre of wire: the elastic catenary).'
       : 'Theory: parabolic (the wire’s weight acts per horizontal metre, the classic approximation for shallow spans).';
   const error = worst < 1e-5 ? 'below 0.001 %' : `at most ${(worst * 100).toFixed(3)} %`;
+  const notices = (results.notices ?? []).map((n) => ` ${n}`).join('');
   const compare = parabola
     ? ` The closed-form parabola drawn dashed on the plot differs from it by at most ${fq(units, 'diameter', parabola.differenceM, units === 'si' ? 2 : 3)} (${parabola.caseName}).`
     : '';
   return (
     `${theory} Mesh: ${results.mesh.elementsPerSpan} ${order} string finite elements per span${results.mesh.refinement > 1 ? ` (refined automatically from ${model.elementsPerSpan})` : ''}, a node at every fixing and point load; ` +
     'each case is the wire cut at installation, stretched and warmed or cooled to fit. ' +
-    `Estimated discretisation error (against the mesh refined, Richardson): ${error} in tension and sag${results.mesh.reached ? '' : `, above the target ${(results.mesh.errorTarget * 100).toFixed(3)} %: treat the last digits as estimates`}.${compare}`
+    `Estimated discretisation error (against the mesh refined, Richardson): ${error} in tension and sag${results.mesh.reached ? '' : `, above the target ${(results.mesh.errorTarget * 100).toFixed(3)} %: treat the last digits as estimates`}.${compare}${notices}`
   );
 }

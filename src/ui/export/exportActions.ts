@@ -8,7 +8,7 @@ import { version as appVersion } from '../../../package.json';
 import { type Project, type ProjectResults, solveProject } from '../../core/index.ts';
 import type { UnitSystem } from '../../core/units.ts';
 import { profilesCsv } from '../../deliverables/csv.ts';
-import { designReport } from '../../deliverables/designContent.ts';
+import { type DesignReport, designReport } from '../../deliverables/designContent.ts';
 import {
   openProjectFile,
   projectFileName,
@@ -74,7 +74,12 @@ export async function savePlotImage(
   downloadUrl(url, `${fileStem(projectFileName(project.title))}${suffix}`);
 }
 
-export async function buildReportBlob(request: ReportRequest, units: UnitSystem): Promise<Blob> {
+export async function buildReportBlob(
+  request: ReportRequest,
+  units: UnitSystem,
+  temperatureNow: number | null = null,
+  design?: DesignReport,
+): Promise<Blob> {
   const { project } = request;
   const results = solved(project);
   const [{ buildPdfReport }, { exportFigure }, { browserFontSource }] = await Promise.all([
@@ -105,11 +110,7 @@ export async function buildReportBlob(request: ReportRequest, units: UnitSystem)
       fonts: browserFontSource,
       appVersion,
       appendix: request.appendix,
-      design: designReport(
-        project,
-        results.cases[0].horizontalTension,
-        useDesignStore.getState().temperatureNow,
-      ),
+      design: design ?? designReport(project, results, temperatureNow),
     });
     return doc.output('blob');
   } finally {
@@ -118,6 +119,17 @@ export async function buildReportBlob(request: ReportRequest, units: UnitSystem)
 }
 
 export async function saveReport(request: ReportRequest, units: UnitSystem): Promise<void> {
-  const blob = await buildReportBlob(request, units);
-  downloadBlob(blob, `${fileStem(projectFileName(request.project.title))}-report.pdf`);
+  const { project } = request;
+  const aids = useDesignStore.getState();
+  // The worker's answers for this very document, when up to date, spare the main thread.
+  const ready =
+    aids.answers && aids.answersProject === project && !aids.stale
+      ? {
+          window: aids.answers.window,
+          currentTension: aids.answers.currentTension,
+          setting: aids.answers.setting,
+        }
+      : undefined;
+  const blob = await buildReportBlob(request, units, aids.temperatureNow, ready);
+  downloadBlob(blob, `${fileStem(projectFileName(project.title))}-report.pdf`);
 }
