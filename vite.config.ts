@@ -7,12 +7,33 @@
  */
 import { fileURLToPath } from 'node:url';
 import react from '@vitejs/plugin-react';
-import { defineConfig } from 'vite';
+import { defineConfig, type Plugin } from 'vite';
 import { VitePWA } from 'vite-plugin-pwa';
+import {
+  CONTENT_SECURITY_POLICY,
+  CONTENT_SECURITY_POLICY_HEADER,
+} from './contentSecurityPolicy.ts';
+
+/** The policy as a <meta> tag in the built page (the dev server injects inline scripts). */
+function contentSecurityPolicy(): Plugin {
+  return {
+    name: 'sagwright-content-security-policy',
+    apply: 'build',
+    transformIndexHtml: {
+      order: 'post',
+      handler: (html) =>
+        html.replace(
+          '<meta charset="UTF-8" />',
+          `<meta charset="UTF-8" />\n    <meta http-equiv="Content-Security-Policy" content="${CONTENT_SECURITY_POLICY}" />`,
+        ),
+    },
+  };
+}
 
 export default defineConfig({
   plugins: [
     react(),
+    contentSecurityPolicy(),
     VitePWA({
       // The page registers the worker itself (src/ui/UpdateNotice.tsx): no inline script, so a
       // content security policy of script-src 'self' holds.
@@ -63,11 +84,15 @@ export default defineConfig({
     ],
   },
   server: { host: 'localhost', port: 5173, strictPort: true },
-  preview: { host: 'localhost' },
+  preview: {
+    host: 'localhost',
+    headers: { 'Content-Security-Policy': CONTENT_SECURITY_POLICY_HEADER },
+  },
   worker: { format: 'es' },
   build: {
     target: ['es2022', 'chrome111', 'edge111', 'firefox114', 'safari16.4'],
-    sourcemap: true,
+    // No source maps in the shipped build (they would publish the source with it).
+    sourcemap: false,
     // Plotly core + scatter is about 1 MB; it is lazy, so the warning is noise.
     chunkSizeWarningLimit: 1500,
     rolldownOptions: {

@@ -92,11 +92,18 @@ test('a share link shows the shared project as text and "Go back to mine" restor
   const banner = page.getByRole('region', { name: 'Shared project' });
   await expect(banner).toContainText(sharedTitle);
   await expect(page.getByLabel('Project title')).toHaveValue(sharedTitle);
+  // The link left the address bar as soon as it was read.
+  expect(page.url()).not.toContain('#project=');
   expect(
     await page.evaluate(() => (window as unknown as { __hit?: number }).__hit),
   ).toBeUndefined();
   expect(await page.evaluate(() => localStorage.getItem('sagwright:autosave'))).toBe(before);
   await banner.getByRole('button', { name: 'Go back to mine' }).click();
   await expect(page.getByLabel('Project title')).toHaveValue(demo.title);
-  expect(page.url()).not.toContain('#project=');
+  // Opened fresh from the link, a reload then shows the person's own work, not the link again.
+  await page.goto(`/#project=${packed}`);
+  await expect(page.getByLabel('Project title')).toHaveValue(sharedTitle);
+  await page.reload();
+  await expect(page.getByLabel('Project title')).toHaveValue(demo.title);
+  await expect(banner).toBeHidden();
 });

@@ -87,7 +87,7 @@ describe('case identities in the results', () => {
   it('writes the case id beside the name in the profiles CSV', () => {
     const lines = profilesCsv(renamed, results, 'si').split('\r\n');
     const ids = new Set(
-      lines.filter((l) => l.startsWith('Installation,')).map((l) => l.split(',').at(-1)),
+      lines.filter((l) => l.startsWith('"Installation",')).map((l) => l.split(',').at(-1)),
     );
     expect(ids).toEqual(new Set(['installation', 'cases[1]']));
   });

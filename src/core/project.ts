@@ -235,6 +235,8 @@ export interface CaseResult {
   clearance: number;
   zoneClearances: ZoneClearance[];
   swing: number;
+  /** Largest strain of the wire, T_max / EA (fraction); above its elastic range ok is false. */
+  strain: number;
   spans: SpanResult[];
   supports: SupportReaction[];
   ok: boolean;
@@ -311,4 +313,8 @@ export interface ProjectResults {
   /** The end fittings and the efficiency the utilisation uses. */
   endFittings: EndFittingsResult;
   mesh: MeshResult;
+  /** Notes on the whole solve, in words (e.g. a mesh coarsened to the work budget). */
+  notices: string[];
+  /** Present and true only when the solver failed inside; every case then says so. */
+  internalError?: boolean;
 }

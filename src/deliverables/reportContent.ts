@@ -266,6 +266,7 @@ export function methodParagraphs(
       ? 'Theory: exact. The wire weight acts per metre of wire, so the shape is the elastic catenary.'
       : 'Theory: parabolic. The wire weight acts per horizontal metre, the classic approximation for shallow spans.',
     'Ice adds a ring of the stated thickness around the wire and any cable (on a hung cable per metre of cable along the wire); wind acts across the span on the iced diameter and on the stated area of signs and lamps, and swings the wire sideways. Clearance is measured to the lowest of the wire and anything hanging below it. Tension, sag, clearance and the pull on each fixing follow for every case.',
+    ...(results.notices ?? []),
     `Check against closed forms: the dashed lines on the plot are the closed-form parabola for the same span and loads${parabola ? `; the largest difference is ${fq(units, 'diameter', parabola.differenceM)} (${parabola.caseName})` : ''}. The mesh error estimate is ${worstMesh < 1e-5 ? 'below 0.001 %' : `at most ${(worstMesh * 100).toFixed(3)} %`}.`,
   ];
 }
