@@ -201,6 +201,8 @@ test('a share link shows the shared project as text and "Go back to mine" restor
   const packed = LZString.compressToEncodedURIComponent(
     JSON.stringify({ ...demo, title: sharedTitle }),
   );
+  // Opened by a fresh load (the link is cleared from the address as soon as it is read).
+  await page.goto('about:blank');
   await page.goto(`/#project=${packed}`);
   const banner = page.getByRole('region', { name: 'Shared project' });
   await expect(banner).toContainText(sharedTitle);
