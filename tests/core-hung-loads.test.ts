@@ -63,6 +63,16 @@ describe('wind on a hung sign (statics of a string, sideways problem)', () => {
     expect(r.cases[0].supports[0].lateral).toBe(0);
   });
 
+  it('a windy case says which items state no wind area; an explicit 0 or still air says nothing', () => {
+    const silent = solved(base({ type: 'point', x: a, mass: 5, label: 'Lantern' }));
+    expect(silent.cases[1].messages.join(' ')).toMatch(
+      /Wind on hung items: Lantern states no wind area, so no wind on it is included/,
+    );
+    expect(silent.cases[0].messages.join(' ')).not.toMatch(/Wind on hung items/);
+    const zero = solved(base({ type: 'point', x: a, mass: 5, label: 'Lantern', windArea: 0 }));
+    expect(zero.cases[1].messages.join(' ')).not.toMatch(/Wind on hung items/);
+  });
+
   it('drag coefficient: the environment default, or the item own value', () => {
     const ownDefault = solved(
       base({ type: 'point', x: a, mass: 5, windArea: 0.5 }, { dragCoefficient: 1.2 }),

@@ -3,21 +3,39 @@
  * installation tension window), `--choose` (wires that work, lightest first) and `--at TEMP`
  * (today's setting at TEMP °C).
  */
-import { chooseWires, type Project, settingAt, tensionWindow } from '../core/index.ts';
+import {
+  chooseWires,
+  type Project,
+  type ProjectResults,
+  settingAt,
+  tensionWindow,
+} from '../core/index.ts';
 
 export const DESIGN_FLAGS = ['--window', '--choose'];
 
-/** Extra JSON the design-aid options add to a file's results. */
-export type Addition = (project: Project, output: Record<string, unknown>) => void;
+/** Extra JSON the design-aid options add to a file's results (on the results' mesh). */
+export type Addition = (
+  project: Project,
+  results: ProjectResults,
+  output: Record<string, unknown>,
+) => void;
 
 /** `--window`: the installation tension window. */
-function addWindow(project: Project, output: Record<string, unknown>): void {
-  output.window = tensionWindow(project);
+function addWindow(
+  project: Project,
+  results: ProjectResults,
+  output: Record<string, unknown>,
+): void {
+  output.window = tensionWindow(project, results.mesh.refinement);
 }
 
 /** `--choose`: every wire that works, lightest first, with its window and suggested tension. */
-function addChoices(project: Project, output: Record<string, unknown>): void {
-  output.choices = chooseWires(project).map((c) => ({
+function addChoices(
+  project: Project,
+  results: ProjectResults,
+  output: Record<string, unknown>,
+): void {
+  output.choices = chooseWires(project, undefined, results.mesh.refinement).map((c) => ({
     catalogId: c.catalogId,
     label: c.label,
     massPerLength: c.massPerLength,
@@ -45,8 +63,8 @@ export function settingOption(args: string[]): {
     return { rest, error: '--at: the temperature must be between -80 and 80 °C' };
   return {
     rest,
-    addition: (project, output) => {
-      output.setting = settingAt(project, temperature);
+    addition: (project, results, output) => {
+      output.setting = settingAt(project, temperature, results.mesh.refinement);
     },
   };
 }

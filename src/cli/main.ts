@@ -68,7 +68,7 @@ function solveFile(file: string, additions: readonly Addition[]): FileOutcome {
   const outcome = outcomeOf(file, solveProject(opened.project), opened.project.title);
   if (outcome.results) {
     const output: Record<string, unknown> = { ...outcome.results };
-    for (const add of additions) add(opened.project, output);
+    for (const add of additions) add(opened.project, outcome.results, output);
     outcome.output = output;
   }
   return outcome;

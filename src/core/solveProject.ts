@@ -18,7 +18,13 @@ import {
   targetSpanIndex,
 } from './installation.ts';
 import { hungDrops, loadStateOfCase } from './loads.ts';
-import type { CaseResult, EndFittingsResult, Project, ProjectResults } from './project.ts';
+import type {
+  CaseResult,
+  EndFittingsResult,
+  Project,
+  ProjectResults,
+  WeatherCase,
+} from './project.ts';
 import { buildProjectModel, type ProjectModel } from './projectModel.ts';
 import { guardFinite, unsolvedResults } from './resultGuard.ts';
 import { setUpChart } from './setUpChart.ts';
@@ -77,6 +83,18 @@ function checkState(
   });
 }
 
+/** In a windy case with the hung loads: point loads that state no wind area catch no wind. */
+function windlessItemNotes(project: Project, weather: WeatherCase): string[] {
+  if (!(weather.windSpeed > 0) || !weather.withLoads) return [];
+  const names = project.loads.flatMap((load, i) =>
+    load.type === 'point' && load.windArea === undefined ? [load.label || `load ${i + 1}`] : [],
+  );
+  if (names.length === 0) return [];
+  return [
+    `Wind on hung items: ${names.join(', ')} ${names.length === 1 ? 'states' : 'state'} no wind area, so no wind on ${names.length === 1 ? 'it is' : 'them is'} included (enter the projected area, or 0 where there is none).`,
+  ];
+}
+
 /** Installation target, installation and every case on one mesh, checked; in case order. */
 function solveOnMesh(project: Project, refinement: number, fittings: EndFittingsResult): MeshRun {
   const model = buildProjectModel(project, refinement);
@@ -99,9 +117,15 @@ function solveOnMesh(project: Project, refinement: number, fittings: EndFittings
       installed.unstressed,
       target.tensionN,
     );
-    results.push(
-      finish(caseResultId(i), weather.name, weather.temperature, weather.withLoads, state),
+    const result = finish(
+      caseResultId(i),
+      weather.name,
+      weather.temperature,
+      weather.withLoads,
+      state,
     );
+    result.messages.push(...windlessItemNotes(project, weather));
+    results.push(result);
     summaries.push(summarise(state));
   }
   results[0].iterations += target.evaluations;

@@ -6,7 +6,7 @@
 import { type Project, type ProjectResults, solveProject } from '../../core/index.ts';
 import type { UnitSystem } from '../../core/units.ts';
 import { profilesCsv } from '../../deliverables/csv.ts';
-import { designReport } from '../../deliverables/designContent.ts';
+import { type DesignReport, designReport } from '../../deliverables/designContent.ts';
 import type { PaperSize, ReportDetails } from '../../deliverables/pdfReport.ts';
 import {
   openProjectFile,
@@ -78,6 +78,7 @@ export async function buildReportBlob(
   paper: PaperSize,
   details: ReportDetails,
   temperatureNow: number | null = null,
+  design?: DesignReport,
 ): Promise<Blob> {
   const results = solved(project);
   const [{ buildPdfReport }, { exportFigure }] = await Promise.all([
@@ -105,7 +106,7 @@ export async function buildReportBlob(
       plot: svg,
       plotAspect: PDF_PLOT.width / PDF_PLOT.height,
       parabola: exportFigure(project, results, units, false).parabola,
-      design: designReport(project, results.cases[0].horizontalTension, temperatureNow),
+      design: design ?? designReport(project, results, temperatureNow),
     });
     return doc.output('blob');
   } finally {
@@ -119,12 +120,16 @@ export async function saveReport(
   paper: PaperSize,
   details: ReportDetails,
 ): Promise<void> {
-  const blob = await buildReportBlob(
-    project,
-    units,
-    paper,
-    details,
-    useDesignStore.getState().temperatureNow,
-  );
+  const aids = useDesignStore.getState();
+  // The worker's answers for this very document, when up to date, spare the main thread.
+  const ready =
+    aids.answers && aids.answersProject === project && !aids.stale
+      ? {
+          window: aids.answers.window,
+          currentTension: aids.answers.currentTension,
+          setting: aids.answers.setting,
+        }
+      : undefined;
+  const blob = await buildReportBlob(project, units, paper, details, aids.temperatureNow, ready);
   downloadBlob(blob, `${fileStem(projectFileName(project.title))}-report.pdf`);
 }
