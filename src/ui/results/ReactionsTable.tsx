@@ -7,6 +7,7 @@ import { unitSymbol } from '../../core/units.ts';
 import { useProjectStore } from '../../state/projectStore.ts';
 import { useUiStore } from '../../state/uiStore.ts';
 import { num } from '../format.ts';
+import { TableScroll } from './TableScroll.tsx';
 
 function fittingAt(results: ProjectResults, index: number, count: number): string {
   const end =
@@ -24,7 +25,7 @@ export function ReactionsTable({ results }: { results: ProjectResults }) {
   return (
     <details className="reactions" open>
       <summary>Pull on the fixings</summary>
-      <div className="table-scroll">
+      <TableScroll>
         <table className="results" aria-label="Pull on the fixings">
           <thead>
             <tr>
@@ -60,7 +61,7 @@ export function ReactionsTable({ results }: { results: ProjectResults }) {
             )}
           </tbody>
         </table>
-      </div>
+      </TableScroll>
     </details>
   );
 }
