@@ -74,6 +74,8 @@ function solveFile(
   const outcome = outcomeOf(file, solveProject(opened.project), opened.project.title);
   if (outcome.results && asBuiltSpec !== undefined) {
     const status = addAsBuilt(shown, opened.project, outcome.results, asBuiltSpec);
+    // An invalid measurement prints no results, as an invalid file does (addAsBuilt said why).
+    if (status === 2) return { file, code: EXIT.invalid, errors: [] };
     const asBuilt = outcome.results.asBuilt;
     const code: ExitCode =
       status === 2
