@@ -12,6 +12,7 @@ import {
   type WireFamily,
 } from '../../core/index.ts';
 import { type UnitSystem, unitSymbol } from '../../core/units.ts';
+import { useDesignStore } from '../../state/designStore.ts';
 import { useProjectStore } from '../../state/projectStore.ts';
 import { num, show } from '../format.ts';
 import { TableScroll } from '../results/TableScroll.tsx';
@@ -76,7 +77,42 @@ function Row({
   );
 }
 
+/** Asks the worker to try every wire (it costs tens of solves, so it waits to be asked). */
+function TryEveryWire() {
+  const on = useDesignStore((s) => s.chooserOn);
+  const setOn = useDesignStore((s) => s.setChooserOn);
+  if (on) return <p className="muted">Trying every wire in the catalogue…</p>;
+  return (
+    <button type="button" onClick={() => setOn(true)}>
+      Try every wire in the catalogue
+    </button>
+  );
+}
+
 export function WireChooser({
+  choices,
+  project,
+  units,
+}: {
+  choices: WireChoice[] | null;
+  project: Project;
+  units: UnitSystem;
+}) {
+  if (!choices)
+    return (
+      <section className="design-block" aria-labelledby="chooser-heading">
+        <h3 id="chooser-heading">Wires that work</h3>
+        <p className="setup-note">
+          Tries every catalogue wire (and your own) on this project and lists the ones with an open
+          window, lightest first, each with a suggested tension.
+        </p>
+        <TryEveryWire />
+      </section>
+    );
+  return <ChooserList choices={choices} project={project} units={units} />;
+}
+
+function ChooserList({
   choices,
   project,
   units,

@@ -7,7 +7,7 @@ import { lazy, Suspense, useEffect, useMemo, useRef, useState } from 'react';
 import './export.css';
 import type { Project, ProjectResults } from '../../core/index.ts';
 import { type OpenResult, PROJECT_FILE_EXTENSION } from '../../deliverables/projectFile.ts';
-import { commitOpened } from '../../state/commit.ts';
+import { commit, commitOpened } from '../../state/commit.ts';
 import { useProjectStore } from '../../state/projectStore.ts';
 import { useUiStore } from '../../state/uiStore.ts';
 import { ExportNotice, type Notice, SharedBanner } from './ExportNotices.tsx';
@@ -25,6 +25,21 @@ const ReportDialog = lazy(() =>
 );
 
 type Dialog = 'none' | 'report' | 'library' | 'client';
+
+/** The report dialog's record goes into the document (one undo step) before the report is made. */
+function saveRecord(withRecord: Project) {
+  const current = useProjectStore.getState().project;
+  if (JSON.stringify(current.report) === JSON.stringify(withRecord.report))
+    return { ok: true as const, project: current };
+  return commit(
+    (current) => {
+      const next: Project = { ...current, report: withRecord.report };
+      if (!withRecord.report) delete next.report;
+      return next;
+    },
+    { what: 'Report record' },
+  );
+}
 
 /** Escape or a click elsewhere closes the open menu; Escape also puts focus back on its button. */
 function useMenuDismiss(
@@ -230,12 +245,22 @@ export function ExportMenu() {
       <Suspense fallback={null}>
         {dialog === 'report' && (
           <ReportDialog
+            project={project}
             busy={busy}
             returnFocus={menuButton}
             onClose={closeDialog}
-            onCreate={(paper, details) => {
+            onCreate={(request) => {
+              const saved = saveRecord(request.project);
+              if (!saved.ok) {
+                setNotice({
+                  kind: 'refused',
+                  title: 'The report record was not saved',
+                  issues: saved.issues,
+                });
+                return;
+              }
               run('The PDF report', async () =>
-                (await loadActions()).saveReport(project, units, paper, details),
+                (await loadActions()).saveReport({ ...request, project: saved.project }, units),
               )().then(closeDialog);
             }}
           />

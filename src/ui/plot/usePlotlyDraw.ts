@@ -33,6 +33,8 @@ export const SKETCH_CLASS = 'plot-sketch';
 const CONFIG: Partial<Config> = {
   displaylogo: false,
   responsive: true,
+  // Text is the person's own: never typeset as TeX (a label between $ signs stays text).
+  typesetMath: false,
   modeBarButtonsToRemove: ['select2d', 'lasso2d'],
 };
 
