@@ -290,17 +290,18 @@ test('the CSV of wire profiles has units in its headers and the core profile in 
 
   const si = await download(page, 'Wire profiles as CSV');
   expect(si.name).toBe('sloping-yard-profiles.csv');
-  expect(si.text).toMatch(/^# Sagwright wire profiles: Sloping yard\r\n/);
+  // The title sits in its own quoted cell so that it can never start a formula.
+  expect(si.text).toMatch(/^# Sagwright wire profiles,"Sloping yard"\r\n/);
   expect(si.text).toContain('# Caution');
   expect(expectCsvMatchesCore(si.text, project, 1, 1)).toBe(
-    'case,x (m),height z (m),clearance above ground (m),tension (N)',
+    'case,x (m),height z (m),clearance above ground (m),tension (N),case id',
   );
 
   await page.getByRole('radio', { name: 'Imperial' }).check();
   const us = await download(page, 'Wire profiles as CSV');
   // ft = 0.3048 m and lbf = 0.45359237 kg × 9.80665 m/s² = 4.4482216152605 N (NIST SP 811).
   expect(expectCsvMatchesCore(us.text, project, 0.3048, 4.4482216152605)).toBe(
-    'case,x (ft),height z (ft),clearance above ground (ft),tension (lbf)',
+    'case,x (ft),height z (ft),clearance above ground (ft),tension (lbf),case id',
   );
 });
 
