@@ -113,7 +113,7 @@ function demoBreakdown(file: string): [string, number][] {
         model,
         { ...loadStateOfCase(c), name: c.name },
         installed.unstressed,
-        target.tensionN,
+        installed.spans.map((s) => s.tensionN),
       );
     }
   };

@@ -148,9 +148,9 @@ describe('refusals: each names the field path and the rule', () => {
     },
     {
       what: 'a newer version',
-      edit: (d) => JSON.stringify({ ...d, version: 2 }),
+      edit: (d) => JSON.stringify({ ...d, version: 3 }),
       path: 'version',
-      rule: /2 is newer than this Sagwright reads \(1\)/,
+      rule: /3 is newer than this Sagwright reads \(2\)/,
     },
     {
       what: 'a wrong format',

@@ -189,24 +189,28 @@ function expectMore(more: CaseResult, less: CaseResult, label: string, tensionUp
 describe('monotone response at a fixed cut length (change of state)', () => {
   const seeds = Array.from({ length: 40 }, (_, i) => 8000 + i);
 
-  // One section (intermediate supports free): with clamped supports the installation shares the
-  // cut length out among the spans by their stretch, so one span may get less wire when heavier.
-  it('heavier load (all loads × 1.5) gives more sag and more tension in every span', () => {
-    for (const seed of seeds) {
-      const cases = [stillCase('Cold', -5), stillCase('Hot', 35)];
-      const clamped = fixedLengthProject(seed, cases);
-      const last = clamped.supports.length - 1;
-      const supports = clamped.supports.map((s, i) =>
-        i > 0 && i < last ? { ...s, free: true } : s,
-      );
-      const light = { ...clamped, supports };
-      const a = solveProject(light).cases;
-      const b = solveProject(heavier(light, 1.5)).cases;
-      a.forEach((c, i) => {
-        expectMore(b[i], c, `${light.title} / ${c.name}`, true);
-      });
-    }
-  });
+  // One section (intermediate supports pulleys or swing links): with clamped supports the
+  // installation shares the cut length out among the spans by their stretch, so one span may
+  // get less wire when heavier.
+  it.each(['pulley', 'swingLink'] as const)(
+    'heavier load (all loads × 1.5) gives more sag and more tension in every span (%s)',
+    (attachment) => {
+      for (const seed of seeds) {
+        const cases = [stillCase('Cold', -5), stillCase('Hot', 35)];
+        const clamped = fixedLengthProject(seed, cases);
+        const last = clamped.supports.length - 1;
+        const supports = clamped.supports.map((s, i) =>
+          i > 0 && i < last ? { ...s, attachment } : s,
+        );
+        const light = { ...clamped, supports };
+        const a = solveProject(light).cases;
+        const b = solveProject(heavier(light, 1.5)).cases;
+        a.forEach((c, i) => {
+          expectMore(b[i], c, `${light.title} / ${c.name}`, true);
+        });
+      }
+    },
+  );
 
   it('hotter gives more sag and less tension in every span (with ice and wind)', () => {
     for (const seed of seeds) {
@@ -241,7 +245,7 @@ describe('minimal inputs for past and present defects', () => {
   it('parabolic wire weight does not change with temperature', () => {
     const project: Project = {
       format: 'sagwright-project',
-      version: 1,
+      version: 2,
       title: 'Bare level span, parabolic, hot',
       supports: [
         { x: 0, z: 5 },

@@ -1,6 +1,13 @@
 /** Public entry of the Sagwright core: the project contract, the solver, the catalogue, validation. */
 
 export { CAUTION_SUMMARY, CAUTIONS } from './cautions.ts';
+export {
+  type Migration,
+  migrateProjectDocument,
+  migrationNotes,
+  PROJECT_MIGRATIONS,
+  type ProjectDocument,
+} from './migrateProject.ts';
 export * from './project.ts';
 export { solveProject } from './solveProject.ts';
 export { type ValidationIssue, type ValidationResult, validateProject } from './validateProject.ts';

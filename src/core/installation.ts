@@ -1,8 +1,9 @@
 /**
- * Installation target → the horizontal tension H the wire is pulled to at installation.
- * horizontalTension: H itself. maxTension, sag: root of the target quantity in ln H (Brent,
- * bracket grown by factors of 2). unstressedLength: length compatibility of all spans as one.
- * With target.case the quantity is measured in that case after the change of state.
+ * Installation target → the horizontal tension H₁ of the first span at installation (the other
+ * spans follow through the installation joints). horizontalTension: the largest span H, so H₁
+ * itself when no pulley makes the spans differ. maxTension, sag and the rest: root of the target
+ * quantity in ln H₁ (Brent, bracket grown by factors of 2). unstressedLength: length
+ * compatibility of all spans as one. With target.case the quantity is measured in that case.
  */
 
 import { solveSectionForLength } from './lengthCompatibility.ts';
@@ -62,7 +63,7 @@ function stateFor(
     model,
     { ...loadStateOfCase(weather), name: weather.name },
     installed.unstressed,
-    tensionN,
+    installed.spans.map((s) => s.tensionN),
   );
 }
 
@@ -84,11 +85,18 @@ export function findInstallationTension(
   if (target.unstressedLength !== undefined) {
     const wire = prepareState(model, model.installation);
     const guess = model.wire.massPerLength * model.env.gravity * 100;
-    const r = solveSectionForLength(model.spans, wire, target.unstressedLength, guess);
+    const r = solveSectionForLength(
+      model.spans,
+      wire,
+      target.unstressedLength,
+      guess,
+      model.installationJoints,
+    );
     return { tensionN: r.tensionN, evaluations: r.iterations, ok: r.converged, message: r.reason };
   }
   const value = target.horizontalTension ?? target.maxTension ?? target.sag ?? Number.NaN;
-  if (target.horizontalTension !== undefined && target.case === undefined) {
+  const equalH = model.installationJoints.every((joint) => joint === 'horizontal');
+  if (target.horizontalTension !== undefined && target.case === undefined && equalH) {
     return { tensionN: value, evaluations: 0, ok: true };
   }
   // In logarithms the quantity is nearly linear with slope ±1 (sag ∝ 1/H, tension ∝ H).

@@ -1,8 +1,9 @@
 /**
  * Set-up chart: what to set on the day. The wire is cut to the design length L₀ (at the
  * installation temperature t₀); tensioned at another temperature t with the installation loads
- * (no ice, no wind), every span pulled through with one H, it shows the H, sag and largest
- * tension of L₀(1 + α(t − t₀)). Field check [CP, textbook string physics]: a pulse sent along
+ * (no ice, no wind), pulled through as at installation (pulleys: equal tension; other supports:
+ * equal horizontal tension), it shows the largest H, the sag and the largest tension of
+ * L₀(1 + α(t − t₀)). Field check [CP, textbook string physics]: a pulse sent along
  * the wire returns after t_r = √(32 f / g) seconds for sag f (sag ≈ g t_r² / 32, one return).
  */
 
@@ -42,14 +43,15 @@ export function setUpChart(
       wire,
       total * thermalFactor(model, temperature),
       guess,
+      model.installationJoints,
     );
-    const spans = model.spans.map((span) => ({ span, tensionN: solution.tensionN }));
+    const spans = model.spans.map((span, j) => ({ span, tensionN: solution.spanTensionsN[j] }));
     guess = solution.tensionN;
     const sag = largestSpanSag(spans[sagSpanIndex]);
     return {
       temperature,
       solved: solution.converged,
-      horizontalTension: solution.tensionN,
+      horizontalTension: Math.max(...solution.spanTensionsN),
       maxTension: largestStateTension(spans),
       sag,
       returnTime: Math.sqrt((32 * sag) / model.env.gravity),

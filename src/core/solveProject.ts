@@ -8,6 +8,7 @@
 import { checkCase, largestSag, largestStateTension } from './caseChecks.ts';
 import { findInstallationTension, targetSpanIndex } from './installation.ts';
 import { loadStateOfCase } from './loads.ts';
+import { migrateProjectDocument } from './migrateProject.ts';
 import type { CaseResult, Project, ProjectResults } from './project.ts';
 import { buildProjectModel, type ProjectModel } from './projectModel.ts';
 import { setUpChart } from './setUpChart.ts';
@@ -29,6 +30,8 @@ function checkState(
     name,
     temperature,
     spans: state.spans,
+    attachments: model.attachments,
+    supportForcesN: state.supportForcesN,
     ground: p.ground ?? [],
     zones: p.limits.zones ?? [],
     safetyFactor: p.limits.safetyFactor,
@@ -45,16 +48,17 @@ function solveStates<T>(
   model: ProjectModel,
   tensionN: number,
   finish: (name: string, temperature: number, state: StateSolution) => T,
-  caseTensionGuesses?: readonly number[],
+  caseTensionGuesses?: readonly (readonly number[])[],
 ): { results: T[]; unstressed: number[] } {
   const installed = solveInstallation(model, tensionN);
   const results = [finish(model.installation.name, model.installation.temperature, installed)];
+  const installedTensions = installed.spans.map((s) => s.tensionN);
   for (const [i, weather] of model.project.cases.entries()) {
     const state = solveChangeOfState(
       model,
       { ...loadStateOfCase(weather), name: weather.name },
       installed.unstressed,
-      caseTensionGuesses?.[i] ?? tensionN,
+      caseTensionGuesses?.[i] ?? installedTensions,
     );
     results.push(finish(weather.name, weather.temperature, state));
   }
@@ -87,8 +91,13 @@ function governing(project: Project, results: CaseResult[]) {
   return { tension: tension.name, clearance: clearance.name };
 }
 
-/** Solve a project that has passed validateProject. Never throws for physical failures. */
-export function solveProject(project: Project): ProjectResults {
+/**
+ * Solve a project that has passed validateProject (an older version is read through the same
+ * migration as validateProject). Never throws for physical failures.
+ */
+export function solveProject(document: Project): ProjectResults {
+  const older = migrateProjectDocument(document as unknown as Record<string, unknown>);
+  const project = older ? (older.document as unknown as Project) : document;
   const model = buildProjectModel(project);
   const target = findInstallationTension(model, project.installation.target);
   const finish = (name: string, temperature: number, state: StateSolution) =>
@@ -105,7 +114,7 @@ export function solveProject(project: Project): ProjectResults {
   }
   const coarseCount = Math.max(2, Math.round(model.settings.elementsPerSpan / 2));
   const coarseModel = buildProjectModel(project, coarseCount);
-  const fineTensions = results.slice(1).map((r) => r.horizontalTension);
+  const fineTensions = results.slice(1).map((r) => r.spans.map((s) => s.horizontalTension));
   const coarse = solveStates(coarseModel, target.tensionN, summarise, fineTensions).results;
   results.forEach((r, i) => {
     r.discretisationError = relativeChange(r, coarse[i]);

@@ -5,6 +5,7 @@
  */
 import type { CaseResult, Project, ProjectResults } from '../core/index.ts';
 import { DEFAULT_MODEL, resolveWire } from '../core/index.ts';
+import { attachmentWords } from './attachmentWords.ts';
 import { formatForceShort, formatQuantity as fq, type UnitSystem } from './displayUnits.ts';
 
 export interface KeyNumber {
@@ -163,7 +164,7 @@ export function supportTable(project: Project, results: ProjectResults, units: U
         s.label ?? `Support ${i + 1}`,
         fq(units, 'length', s.x),
         fq(units, 'length', s.z),
-        s.free ? 'free (saddle)' : 'clamped',
+        attachmentWords(project, i),
         reaction ? fq(units, 'force', reaction.resultant) : '-',
         reaction ? `${reaction.angle.toFixed(0)}°` : '-',
         worst?.name ?? '-',

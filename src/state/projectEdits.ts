@@ -44,12 +44,17 @@ export const addSupport = (): Edit => (p) => {
   return { ...p, supports: [...p.supports, { x: last.x + 10, z: last.z, label: 'New fixing' }] };
 };
 
+/** An end support holds the wire fast: a support that becomes an end loses its attachment. */
 export const removeSupport =
   (index: number): Edit =>
-  (p) => ({
-    ...p,
-    supports: removeAt(p.supports, index),
-  });
+  (p) => {
+    const supports = removeAt(p.supports, index).map((s, i, all) => {
+      if (s.attachment === undefined || (i > 0 && i < all.length - 1)) return s;
+      const { attachment: _dropped, ...end } = s;
+      return end;
+    });
+    return { ...p, supports };
+  };
 
 export const patchGround =
   (index: number, patch: Partial<GroundPoint>): Edit =>
