@@ -52,6 +52,8 @@ function main(args: string[]): number {
         process.stderr.write(`${file}: ${issue.path}: ${issue.message}\n`);
       return 2;
     }
+    // An older file is read through the format migration; say what that changes.
+    for (const note of checked.notes ?? []) process.stderr.write(`${file}: note: ${note}\n`);
     const results = solveProject(checked.project);
     for (const c of results.cases) {
       if (!c.solved) {

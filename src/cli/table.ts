@@ -1,5 +1,5 @@
 /** Plain-text tables for people: the results of a project and the wire catalogue. */
-import type { ProjectResults, WireProperties } from '../core/index.ts';
+import type { ProjectResults, SupportReaction, WireProperties } from '../core/index.ts';
 
 /** Columns padded to a common width: the first `leftColumns` left-aligned; a free-text last column. */
 function pad(cells: string[][], leftColumns = 1, freeLast = false): string {
@@ -49,14 +49,15 @@ export function resultsTable(title: string, results: ProjectResults): string {
   for (const c of results.cases) {
     lines.push(`${c.name} — support reactions (wire's pull on the support):`);
     const support = c.supports.map((s, i) => [
-      `  support ${i + 1}`,
+      `  support ${i + 1} (${s.attachment === 'swingLink' ? 'swing link' : s.attachment})`,
       `horizontal ${n(s.horizontal, 0)} N`,
       `vertical ${n(s.vertical, 0)} N`,
       `lateral ${n(s.lateral, 0)} N`,
       `resultant ${n(s.resultant, 0)} N`,
       `at ${n(s.angle, 1)}° below horizontal`,
+      wireSides(s),
     ]);
-    lines.push(pad(support));
+    lines.push(pad(support, 1, true));
     for (const z of c.zoneClearances) {
       lines.push(
         `  ${z.label}: clearance ${n(z.clearance, 3)} m, required ${n(z.required, 3)} m — ${z.ok ? 'pass' : 'FAIL'}`,
@@ -82,6 +83,18 @@ export function resultsTable(title: string, results: ProjectResults): string {
     `Governing: tension in "${results.governing.tension}", clearance in "${results.governing.clearance}".`,
   );
   return lines.join('\n');
+}
+
+/** The wire on each side of a support: tension and angle below the horizontal. */
+function wireSides(s: SupportReaction): string {
+  const side = (where: string, tension?: number, angle?: number) =>
+    tension === undefined || angle === undefined
+      ? []
+      : [`${where} ${n(tension, 0)} N at ${n(angle, 1)}°`];
+  return [
+    ...side('wire before', s.tensionBefore, s.angleBefore),
+    ...side('wire after', s.tensionAfter, s.angleAfter),
+  ].join(', ');
 }
 
 export function catalogTable(wires: readonly WireProperties[]): string {
