@@ -4,9 +4,11 @@
  * (a) one bare factored tri-diagonal solve of a span's size, (b) one nonlinear change-of-state
  * span solve (exact and parabolic) of the same size and its ratio to (a), (c) the demo project
  * and (d) the inclined example through solveProject (all cases, with the half-mesh estimate).
+ * (e) the built app in headless Chromium (bench/browser.ts): page weight until the first plot,
+ * edit to plot p50/p95 and continuous edits; skipped with `--no-browser` or without dist/.
  * `npm run bench -- --write` also writes the figures to doc/benchmarks.md.
  */
-import { readFileSync, writeFileSync } from 'node:fs';
+import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { cpus, loadavg } from 'node:os';
 import { factorTridiagonal } from '../src/core/bandedSolver.ts';
 import { type Project, solveProject } from '../src/core/index.ts';
@@ -16,8 +18,11 @@ import { loadStateOfCase } from '../src/core/loads.ts';
 import { buildProjectModel, prepareState } from '../src/core/projectModel.ts';
 import { setUpChart } from '../src/core/setUpChart.ts';
 import { solveChangeOfState, solveInstallation } from '../src/core/states.ts';
+import { browserLines, measureBrowser } from './browser.ts';
 
 const RUNS = 7;
+/** doc/benchmarks.md keeps everything from this heading on when rewritten. */
+const PROFILE_HEADING = '## Profile of an edit in the browser';
 
 /** Median per-call time (µs) of `call`, repeated until each run lasts about `runMs`. */
 function timeCall(call: () => void, runMs = 150): number {
@@ -173,6 +178,17 @@ say('|---|---:|');
 for (const [stage, micros] of demoBreakdown('examples/courtyard-lights.json'))
   say(`| ${stage} | ${f1(micros)} |`);
 
+say('');
+if (process.argv.includes('--no-browser')) say('(browser figures skipped: --no-browser)');
+else if (!existsSync('dist/index.html'))
+  say('(browser figures skipped: run `npm run build` first)');
+else {
+  say('## In the browser (built app, headless Chromium)');
+  say('');
+  const port = Number(process.env.BENCH_PORT ?? 4399);
+  for (const line of browserLines(await measureBrowser(port))) say(line);
+}
+
 if (process.argv.includes('--write')) {
   const header = [
     '# Benchmarks',
@@ -193,6 +209,10 @@ if (process.argv.includes('--write')) {
     'stage table. Machines here are shared: the load average is printed with each run.',
     '',
   ];
-  writeFileSync('doc/benchmarks.md', `${[...header, ...lines].join('\n')}\n`);
+  // Hand-written notes after the measured figures (from PROFILE_HEADING on) are kept.
+  const previous = existsSync('doc/benchmarks.md') ? readFileSync('doc/benchmarks.md', 'utf8') : '';
+  const notesAt = previous.indexOf(PROFILE_HEADING);
+  const notes = notesAt >= 0 ? `\n${previous.slice(notesAt)}` : '';
+  writeFileSync('doc/benchmarks.md', `${[...header, ...lines].join('\n')}\n${notes}`);
   console.log('\nwrote doc/benchmarks.md');
 }

@@ -6,7 +6,7 @@
 import { expect, test } from '@playwright/test';
 import demo from '../examples/courtyard-lights.json' with { type: 'json' };
 
-// The first case is always the installation state, then the project's own cases (DESIGN.md).
+// The first case is always the installation state, then the project's own cases (doc/project-format.md).
 const expectedCaseCount = 1 + demo.cases.length;
 
 test('shell loads, shows results, the sag plot and the cautions without console errors', async ({

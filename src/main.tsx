@@ -1,14 +1,26 @@
-/** Browser entry: mounts the workbench into #root (which shows a loading line until then). */
+/**
+ * Browser entry: starts the session (autosave, other tabs, solver worker) and mounts the
+ * workbench into #root (which shows a loading line until then).
+ */
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
+import { hasSharedProject } from './deliverables/shareLink.ts';
+import { startAppSession } from './state/appSession.ts';
 import { App } from './ui/App.tsx';
+import { WorkbenchErrorBoundary } from './ui/WorkbenchErrorBoundary.tsx';
+import { createSolverWorker } from './worker/createSolverWorker.ts';
 import './ui/workbench.css';
 
 const container = document.getElementById('root');
 if (!container) throw new Error('index.html has no #root element');
 
+// A shared project in the address is shown without writing over the person's own autosave.
+startAppSession(createSolverWorker, hasSharedProject(location.hash));
+
 createRoot(container).render(
   <StrictMode>
-    <App />
+    <WorkbenchErrorBoundary>
+      <App />
+    </WorkbenchErrorBoundary>
   </StrictMode>,
 );

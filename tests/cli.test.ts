@@ -1,12 +1,13 @@
 /**
- * The command line as a user runs it (DESIGN.md, "The project file and the CLI"): results JSON
+ * The command line as a user runs it (README.md, "Command line"): results JSON
  * equal to solveProject on the same file, a table with units, the catalogue, and exit codes
- * 0 solved, 2 invalid or unreadable file (field path on stderr), 1 a case not solved.
+ * 0 solved and every check passes, 3 solved but a check fails, 2 invalid or unreadable file
+ * (field path on stderr), 1 a case not solved.
  */
 import { spawnSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { type Project, solveProject, WIRE_CATALOG } from '../src/core/index.ts';
+import { CAUTIONS, type Project, solveProject, WIRE_CATALOG } from '../src/core/index.ts';
 
 const EXAMPLES = ['examples/courtyard-lights.json', 'examples/workshop-yard-inclined.json'];
 const TIMEOUT_MS = 60_000;
@@ -46,6 +47,33 @@ describe('npm run solve (src/cli/main.ts)', () => {
       const project = JSON.parse(readFileSync(EXAMPLES[0], 'utf8')) as Project;
       for (const c of project.cases) expect(run.stdout).toContain(c.name);
       expect(() => JSON.parse(run.stdout)).toThrow();
+    },
+    TIMEOUT_MS,
+  );
+
+  it(
+    '--table prints the cautions, the end fittings and the mesh',
+    () => {
+      const run = solveCli(EXAMPLES[0], '--table');
+      expect(run.stdout).toContain('Cautions:');
+      for (const caution of CAUTIONS) expect(run.stdout).toContain(caution.text);
+      expect(run.stdout).toMatch(/End fittings: /);
+      expect(run.stdout).toMatch(/Mesh: \d+ elements per span/);
+    },
+    TIMEOUT_MS,
+  );
+
+  it(
+    'every case solved but a check fails: exit 3, results still printed, nothing on stderr',
+    () => {
+      const file = 'tests/fixtures/clearance-fails.json';
+      const run = solveCli(file);
+      expect(run.stderr).toBe('');
+      expect(run.status).toBe(3);
+      const printed = JSON.parse(run.stdout);
+      expect(printed.cases.every((c: { solved: boolean }) => c.solved)).toBe(true);
+      expect(printed.cases.some((c: { ok: boolean }) => !c.ok)).toBe(true);
+      expect(solveCli(file, '--table').status).toBe(3);
     },
     TIMEOUT_MS,
   );

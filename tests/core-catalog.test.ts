@@ -1,7 +1,7 @@
 /**
  * Wire catalogue: the factor method against published tables, and every entry's data sourced.
  * Sources: API Spec 9A Table C.1 (6x7 fibre core, grade 1770) [V]; ASTM A586-98 Table 1,
- * 1/2-in strand 96.8 mm², 0.774 kg/m [V] (REFERENCE.md).
+ * 1/2-in strand 96.8 mm², 0.774 kg/m [V] (doc/sources.md).
  */
 import { describe, expect, it } from 'vitest';
 import { ropeByFactors, WIRE_CATALOG } from '../src/core/wireCatalog.ts';
@@ -41,4 +41,26 @@ describe('catalogue entries', () => {
       for (const source of Object.values(wire.sources)) expect(source).toMatch(/\[(V|D|M|CP)\]/);
     });
   }
+});
+
+describe('fibre rope stiffness at working load, not a secant to break', () => {
+  // Elongation of new 3-strand rope at 20 % of its breaking load (the working load at safety
+  // factor 5): nylon ≈ 12 %, polyester ≈ 5 % [M]; at break 25–35 % and 15–25 % [V].
+  const fibre = WIRE_CATALOG.filter((w) => w.kind === 'nylon rope' || w.kind === 'polyester rope');
+
+  it('every fibre rope: working load / EA gives the working elongation, and the source says so', () => {
+    expect(fibre.length).toBe(8);
+    for (const rope of fibre) {
+      const strain = rope.kind === 'nylon rope' ? 0.12 : 0.05;
+      expect((0.2 * rope.breakingLoad) / rope.axialStiffness).toBeCloseTo(strain, 12);
+      expect(rope.sources.axialStiffness).toMatch(/working load.*\[M\]/);
+    }
+  });
+
+  it('is softer than the secant to break (EA = F / strain at break) it replaces', () => {
+    for (const rope of fibre) {
+      const strainAtBreak = rope.kind === 'nylon rope' ? 0.3 : 0.2;
+      expect(rope.axialStiffness).toBeLessThan(rope.breakingLoad / strainAtBreak);
+    }
+  });
 });

@@ -1,6 +1,7 @@
 /**
  * String elements and band solvers against closed forms and an independent dense solver.
- * Sources: element matrices as derived in doc/model.md (minimum potential energy, DESIGN.md);
+ * Sources: element matrices as derived in doc/model.md (minimum potential energy;
+ * Reddy, An Introduction to the Finite Element Method, 3rd ed., ch. 3 [M]);
  * dense reference: ml-matrix LU decomposition (npm).
  */
 import { solve as denseSolve, EigenvalueDecomposition, Matrix } from 'ml-matrix';
@@ -12,7 +13,7 @@ import {
   shapeFunctions,
 } from '../src/core/stringElements.ts';
 
-describe('element matrices (closed forms of DESIGN.md)', () => {
+describe('element matrices (closed forms by minimum potential energy)', () => {
   it('linear element K = (H/L)[1 −1; −1 1], R = qL/2 [1 1]', () => {
     const K = elementStiffness(1, 2.5, 1000);
     expect(K).toEqual([

@@ -1,6 +1,6 @@
 /**
- * Published worked examples through solveProject (REFERENCE.md, "Published worked examples")
- * and the level-span change-of-state equation of overhead-line practice (REFERENCE.md, Equations).
+ * Published worked examples through solveProject (doc/sources.md, "Published worked examples")
+ * and the level-span change-of-state equation of overhead-line practice (Kiessling et al., Overhead Power Lines, 2003 [M]).
  */
 import { describe, expect, it } from 'vitest';
 import { type Project, solveProject, validateProject } from '../src/core/index.ts';
@@ -13,7 +13,7 @@ function solved(project: Project) {
 }
 
 describe('Beer & Johnston, Vector Mechanics: Statics, Problem 7.107 (0.6 kg/m, 60 m, sag 1.5 m)', () => {
-  // Reference values [D] in REFERENCE.md with g = 9.80665: parabola H = 1765.2 N;
+  // Reference values [D] (derived from the statement) with g = 9.80665: parabola H = 1765.2 N;
   // exact catenary H = 1766.7 N, T_max = 1775.5 N. Inextensible wire: EA very large.
   const base = {
     span: 60,
@@ -35,7 +35,7 @@ describe('Beer & Johnston, Vector Mechanics: Statics, Problem 7.107 (0.6 kg/m, 6
     expect(r.maxTension).toBeCloseTo(r.horizontalTension * Math.hypot(1, (4 * 1.5) / 60), 6);
   });
 
-  it('cut length ≈ 60.100 m (statement asks for the length; [D] in REFERENCE.md)', () => {
+  it('cut length ≈ 60.100 m (statement asks for the length; [D] from the statement)', () => {
     const result = solved(singleSpan({ ...base, theory: 'exact' }));
     expect(result.unstressedLength).toBeCloseTo(60.1, 3);
   });

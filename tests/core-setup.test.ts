@@ -3,7 +3,7 @@
  * installation state; a row at a case's temperature with the same loads is that case (the same
  * change of state); hotter → less tension, more sag; the pulse return time √(32 f/g) agrees with
  * the travel time 2l/c of a wave at c = √(H/m) on a bare level wire (textbook string physics,
- * REFERENCE.md "Field checks of tension" [CP]).
+ * pulse-return rule of thumb sag ≈ g t²/32 [CP]).
  */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';

@@ -1,7 +1,7 @@
 /**
  * The string FE solution −H u'' = q against closed forms and a published worked example.
- * Sources: REFERENCE.md "Equations for tests" (parabola z = h x/l − q x (l − x)/(2H));
- * published example 1 of REFERENCE.md (textbook chapter "Uniform Flexible Suspension Cables",
+ * Sources: the parabolic cable of elementary statics (parabola z = h x/l − q x (l − x)/(2H));
+ * published example 1 of doc/sources.md (textbook chapter "Uniform Flexible Suspension Cables",
  * Example 10.1); sine load closed form u = q₀ l²/(H π²) sin(π x/l) (elementary calculus).
  */
 import { describe, expect, it } from 'vitest';
@@ -34,7 +34,7 @@ function uniformSolution(
 const parabola = (x: number, l: number, h: number, q: number, H: number) =>
   (h * x) / l - (q * x * (l - x)) / (2 * H);
 
-describe('uniform load: closed-form parabola (REFERENCE.md, Equations)', () => {
+describe('uniform load: closed-form parabola (elementary statics)', () => {
   const [l, h, q, H] = [24, 0.6, 9.5, 850];
 
   it('linear elements: nodal values equal the parabola to 1e-12 relative', () => {

@@ -7,7 +7,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { type CustomWire, type Load, type Project, solveProject } from '../src/core/index.ts';
-import { expectedTotals } from './fixtures/randomProjects.ts';
+import { chordLength, expectedTotals } from './fixtures/randomProjects.ts';
 import { singleSpan } from './helpers/projects.ts';
 
 const g = 9.80665;
@@ -67,21 +67,22 @@ describe('a load placed at a fixing is carried by that fixing', () => {
   }
 });
 
-describe('Σ vertical reactions = total weight, loads anywhere, ends included (1e-9)', () => {
+describe('Σ reactions = total weight and wind, loads anywhere, ends included (1e-9)', () => {
   const placements: Load[][] = [
     [{ type: 'point', x: 0, mass: 5 }],
     [{ type: 'point', x: 26, force: 80 }],
     [
-      { type: 'point', x: 8, mass: 12 },
+      { type: 'point', x: 8, mass: 12, windArea: 0.5 },
       { type: 'point', x: 8, force: 30 },
     ],
+    [{ type: 'point', x: 26, mass: 4, windArea: 1, dragCoefficient: 1.2 }],
     [
       { type: 'point', x: 0, mass: 2 },
       { type: 'point', x: 3.5, mass: 4 },
       { type: 'point', x: 8, mass: 6 },
       { type: 'point', x: 17, force: 50 },
       { type: 'point', x: 26, mass: 3 },
-      { type: 'uniform', from: 0, to: 26, massPerLength: 0.15, diameter: 0.01 },
+      { type: 'uniform', from: 0, to: 26, massPerLength: 0.15 },
     ],
   ];
   for (const theory of ['exact', 'parabolic'] as const) {
@@ -100,11 +101,16 @@ describe('Σ vertical reactions = total weight, loads anywhere, ends included (1
             project.wire as CustomWire,
             state,
             results.unstressedLength,
+            (from, to) => chordLength(project, from, to),
           );
           const got = c.supports.reduce((sum, s) => sum + s.vertical, 0);
           expect(rel(got, want.vertical), `${c.name}: ΣV ${got} vs ${want.vertical}`).toBeLessThan(
             1e-9,
           );
+          const sideways = c.supports.reduce((sum, s) => sum + s.lateral, 0);
+          const windOk =
+            want.lateral === 0 ? Math.abs(sideways) < 1e-9 : rel(sideways, want.lateral) < 1e-9;
+          expect(windOk, `${c.name}: ΣL ${sideways} vs ${want.lateral}`).toBe(true);
         }
       },
     );

@@ -2,7 +2,7 @@
  * CSV of the wire profiles. References: the unit definitions of the 1959 international yard and
  * pound (1 ft = 0.3048 m, 1 lbf = 4.4482216152605 N, exact); the clearance is the height minus
  * the ground line read off the example's own ground points; tension along a wire is never less
- * than its horizontal component (T = H sqrt(1 + z'^2), DESIGN.md).
+ * than its horizontal component (T = H sqrt(1 + z'^2), statics of a cable).
  */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
@@ -23,7 +23,7 @@ function rows(csv: string) {
 describe('profiles CSV', () => {
   it('has one row per sampled point of every case, with units in the header', () => {
     const { header, body } = rows(profilesCsv(project, results, 'si'));
-    expect(header).toBe('case,x (m),height z (m),clearance above ground (m),tension (N)');
+    expect(header).toBe('case,x (m),height z (m),clearance above ground (m),tension (N),case id');
     const expected = results.cases.reduce((n, c) => n + (c.profile?.x.length ?? 0), 0);
     expect(expected).toBeGreaterThan(results.cases.length * 10);
     expect(body).toHaveLength(expected);
@@ -50,7 +50,9 @@ describe('profiles CSV', () => {
       .body[5].split(',')
       .map(Number);
     const us = rows(profilesCsv(project, results, 'imperial'));
-    expect(us.header).toBe('case,x (ft),height z (ft),clearance above ground (ft),tension (lbf)');
+    expect(us.header).toBe(
+      'case,x (ft),height z (ft),clearance above ground (ft),tension (lbf),case id',
+    );
     const row = us.body[5].split(',').map(Number);
     expect(row[2]).toBeCloseTo(si[2] / 0.3048, 2);
     expect(row[4]).toBeCloseTo(si[4] / 4.4482216152605, 0);

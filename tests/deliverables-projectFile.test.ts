@@ -1,7 +1,7 @@
 /**
  * Project files and share links: round trips against the shipped example files, and hostile or
  * malformed files each refused with the field path and the rule. Reference for every refusal:
- * the project contract in DESIGN.md ("anything missing, unknown, of the wrong type, non-finite
+ * the project contract in doc/project-format.md ("anything missing, unknown, of the wrong type, non-finite
  * or out of physical range is refused with a message naming the field path and the rule").
  */
 import { readFileSync } from 'node:fs';

@@ -4,17 +4,19 @@
  * quoted in refusals are the core validator's (src/core/validateProject.ts); unit bounds are
  * converted with the NIST SP 811 exact factors (1 mph = 0.44704 m/s, 1 ft = 0.3048 m).
  */
-import { describe, expect, it, vi } from 'vitest';
+import { beforeEach, describe, expect, it } from 'vitest';
 import { validateProject } from '../src/core/index.ts';
 import { demoProject } from '../src/state/demoProject.ts';
+import { carryDependants } from '../src/state/dependants.ts';
 import * as edits from '../src/state/projectEdits.ts';
+import { undo, useProjectStore } from '../src/state/projectStore.ts';
+import { localiseRule, tryEdit } from '../src/ui/fields/useDocumentEdit.ts';
 
-async function fresh() {
-  vi.resetModules();
-  const store = await import('../src/state/projectStore.ts');
-  const check = await import('../src/ui/fields/useDocumentEdit.ts');
-  return { ...store, ...check };
+function fresh() {
+  return { tryEdit, useProjectStore, undo, localiseRule };
 }
+
+beforeEach(() => useProjectStore.getState().resetProject(demoProject));
 
 describe('document edits keep the project valid and immutable', () => {
   it('duplicating a case gives it a free name and leaves the original untouched', () => {
@@ -35,7 +37,7 @@ describe('document edits keep the project valid and immutable', () => {
     const renamed = edits.patchCase(1, { name: 'Ice storm' })(stated);
     expect(renamed.installation.target.case).toBe('Ice storm');
     expect(validateProject(renamed).ok).toBe(true);
-    const removed = edits.removeCase(1)(renamed);
+    const removed = carryDependants(renamed, edits.removeCase(1)(renamed)).project;
     expect('case' in removed.installation.target).toBe(false);
     expect(validateProject(removed).ok).toBe(true);
   });
@@ -58,16 +60,16 @@ describe('document edits keep the project valid and immutable', () => {
 });
 
 describe('tryEdit', () => {
-  it('commits a valid edit as one undoable step', async () => {
-    const { tryEdit, useProjectStore, undo } = await fresh();
+  it('commits a valid edit as one undoable step', () => {
+    const { tryEdit, useProjectStore, undo } = fresh();
     expect(tryEdit('supports[1].x', edits.patchSupport(1, { x: 24 }), 'length', 'si')).toBeNull();
     expect(useProjectStore.getState().project.supports[1].x).toBe(24);
     undo();
     expect(useProjectStore.getState().project.supports[1].x).toBe(22);
   });
 
-  it('refuses an out-of-range value with the rule in the display unit and leaves the document', async () => {
-    const { tryEdit, useProjectStore } = await fresh();
+  it('refuses an out-of-range value with the rule in the display unit and leaves the document', () => {
+    const { tryEdit, useProjectStore } = fresh();
     const before = useProjectStore.getState().project;
     const reason = tryEdit(
       'cases[0].windSpeed',
@@ -79,8 +81,8 @@ describe('tryEdit', () => {
     expect(useProjectStore.getState().project).toBe(before);
   });
 
-  it('names the other field an edit would break', async () => {
-    const { tryEdit, useProjectStore } = await fresh();
+  it('names the other field an edit would break', () => {
+    const { tryEdit, useProjectStore } = fresh();
     const before = useProjectStore.getState().project;
     // Shortening the span to 10 m leaves the 11 m lantern and the 21.5 m cable end outside it.
     const reason = tryEdit('supports[1].x', edits.patchSupport(1, { x: 10 }), 'length', 'si');
@@ -88,16 +90,16 @@ describe('tryEdit', () => {
     expect(useProjectStore.getState().project).toBe(before);
   });
 
-  it('states the support-order rule at the field being typed', async () => {
-    const { tryEdit } = await fresh();
+  it('states the support-order rule at the field being typed', () => {
+    const { tryEdit } = fresh();
     const reason = tryEdit('supports[1].x', edits.patchSupport(1, { x: -2 }), 'length', 'si');
     expect(reason).toContain('must be further along the span than the previous support');
   });
 });
 
 describe('localiseRule', () => {
-  it('converts SI bounds to the display unit and leaves other text alone', async () => {
-    const { localiseRule } = await fresh();
+  it('converts SI bounds to the display unit and leaves other text alone', () => {
+    const { localiseRule } = fresh();
     expect(localiseRule('must be at most 0.2', 'diameter', 'si')).toBe('must be at most 200 mm');
     // 100 m / 0.3048 = 328.084 ft
     expect(localiseRule('must be at most 100', 'length', 'imperial')).toBe(

@@ -1,5 +1,5 @@
 /**
- * Bad input to validateProject and solveProject. The contract (DESIGN.md, "The project file"):
+ * Bad input to validateProject and solveProject. The contract (doc/project-format.md):
  * anything missing, unknown, of the wrong type, non-finite or out of physical range is refused
  * with a message naming the field path and the rule, never repaired. Physical trouble that a
  * valid file can describe (loads past the breaking load, an unreachable target) is solved and

@@ -72,4 +72,53 @@ describe('solver client', () => {
     expect(outcomes[0].ok).toBe(false);
     expect(!outcomes[0].ok && outcomes[0].message).toContain('crash');
   });
+
+  it('replaces a worker the moment it ends without a word, and sends the latest request again', () => {
+    const { client, workers, outcomes } = setup();
+    client.solve(spanOf(22));
+    workers[0].announce('solver-a');
+    client.solve(spanOf(26));
+    workers[0].endSilently(); // no error event, no reply: only its lock is released
+    expect(workers).toHaveLength(2);
+    expect(workers[1].received.map((r) => r.project.supports[1].x)).toEqual([26]);
+    workers[1].answer(workers[1].received[0]);
+    expect(outcomes).toHaveLength(1);
+    expect(outcomes[0].ok && outcomes[0].project.supports[1].x).toBe(26);
+  });
+
+  it('leaves a busy worker alone: holding its lock, it is not restarted while it solves', () => {
+    const { client, workers, outcomes } = setup();
+    client.solve(spanOf(22));
+    workers[0].announce('solver-b');
+    client.solve(spanOf(23));
+    client.solve(spanOf(24));
+    expect(workers).toHaveLength(1);
+    expect(workers[0].terminated).toBe(false);
+    workers[0].answer(workers[0].received[0]);
+    workers[0].answer(workers[0].received[1]);
+    expect(outcomes).toHaveLength(1);
+    expect(outcomes[0].ok && outcomes[0].project.supports[1].x).toBe(24);
+  });
+
+  it('does not take a worker it ended itself for a silent death', () => {
+    const { client, workers } = setup();
+    client.solve(spanOf(22));
+    workers[0].announce('solver-c');
+    workers[0].die('crash'); // the client terminates it (releasing its lock) and starts another
+    expect(workers).toHaveLength(2);
+    expect(workers[1].received).toHaveLength(1);
+  });
+
+  it('notices an idle worker that ended and starts a fresh one for the next change', () => {
+    const { client, workers, outcomes } = setup();
+    client.solve(spanOf(22));
+    workers[0].announce('solver-d');
+    workers[0].answer(workers[0].received[0]);
+    workers[0].endSilently();
+    expect(workers).toHaveLength(1); // nothing to send: no new worker yet
+    client.solve(spanOf(25));
+    expect(workers).toHaveLength(2);
+    workers[1].answer(workers[1].received[0]);
+    expect(outcomes.at(-1)?.ok && outcomes.at(-1)?.project.supports[1].x).toBe(25);
+  });
 });

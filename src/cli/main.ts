@@ -1,6 +1,7 @@
 /**
  * Sagwright command line: `solve FILE... [--table]` prints results (JSON, or a table for people);
- * `--catalog` lists the wire catalogue. Exit 0 solved, 2 invalid file, 1 a case not solved.
+ * `--catalog` lists the wire catalogue. Exit 0 every case solved and every check passes, 3 every
+ * case solved but a check fails, 2 invalid file, 1 a case not solved.
  */
 import { readFileSync } from 'node:fs';
 import { solveProject, validateProject, WIRE_CATALOG } from '../core/index.ts';
@@ -61,7 +62,7 @@ function main(args: string[]): number {
           `${file}: case "${c.name}" could not be solved: ${c.messages.join(' ')}\n`,
         );
         status = 1;
-      }
+      } else if (!c.ok && status === 0) status = 3;
     }
     if (table) process.stdout.write(`${resultsTable(checked.project.title, results)}\n\n`);
     else outputs.push(files.length === 1 ? results : { file, results });

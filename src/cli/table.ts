@@ -1,5 +1,10 @@
 /** Plain-text tables for people: the results of a project and the wire catalogue. */
-import type { ProjectResults, SupportReaction, WireProperties } from '../core/index.ts';
+import {
+  CAUTIONS,
+  type ProjectResults,
+  type SupportReaction,
+  type WireProperties,
+} from '../core/index.ts';
 
 /** Columns padded to a common width: the first `leftColumns` left-aligned; a free-text last column. */
 function pad(cells: string[][], leftColumns = 1, freeLast = false): string {
@@ -39,9 +44,14 @@ export function resultsTable(title: string, results: ProjectResults): string {
     String(c.iterations),
     c.ok ? 'pass' : 'FAIL',
   ]);
+  const fittings = results.endFittings;
+  const fittingLine = fittings.stated
+    ? `End fittings: start ${fittings.start.label} (${n(fittings.start.efficiency * 100, 0)} %), end ${fittings.end.label} (${n(fittings.end.efficiency * 100, 0)} %); utilisation uses ${n(fittings.efficiency * 100, 0)} % of the breaking load.`
+    : 'End fittings: not stated; utilisation assumes terminations as strong as the wire.';
   const lines = [
     title,
     `Cut (unstressed) length at installation: ${n(results.unstressedLength, 4)} m`,
+    fittingLine,
     '',
     pad([header, ...rows]),
     '',
@@ -78,9 +88,14 @@ export function resultsTable(title: string, results: ProjectResults): string {
     n(r.returnTime, 2),
   ]);
   lines.push(pad([['Temperature', 'H (N)', 'T max (N)', 'Sag (m)', 'Pulse return (s)'], ...setUp]));
+  const mesh = results.mesh;
   lines.push(
     '',
     `Governing: tension in "${results.governing.tension}", clearance in "${results.governing.clearance}".`,
+    `Mesh: ${mesh.elementsPerSpan} elements per span${mesh.refinement > 1 ? ` (refined ×${mesh.refinement} automatically)` : ''}; largest estimated discretisation error ${mesh.largestError.toExponential(1)}${mesh.reached ? '' : ` — above the ${mesh.errorTarget.toExponential(0)} target`}.`,
+    '',
+    'Cautions:',
+    ...CAUTIONS.map((c) => `  - ${c.title}: ${c.text}`),
   );
   return lines.join('\n');
 }

@@ -3,6 +3,8 @@
  * sag from the chord, lowest point, clearance over the ground line and in each zone, sideways
  * swing, support reactions (the wire's pull on each support), and a sampled profile.
  */
+
+import type { HungDrops } from './loads.ts';
 import type {
   Attachment,
   CaseProfile,
@@ -11,11 +13,14 @@ import type {
   GroundPoint,
   SpanResult,
   SupportReaction,
+  Theory,
 } from './project.ts';
 import {
+  heightAt,
   largestSwing,
   largestTension,
   minimumAboveLine,
+  type ShapePoint,
   slopesAt,
   tensionAt,
 } from './spanGeometry.ts';
@@ -27,18 +32,26 @@ export interface SolvedSpan {
 }
 
 export interface CheckInput {
+  /** The state's identity in the results: see caseIds.ts. */
+  id: string;
   name: string;
   temperature: number;
   spans: SolvedSpan[];
   /** Each support's attachment ("end" for the first and last). */
   attachments: readonly (Attachment | 'end')[];
-  /** Point forces placed exactly at each support, N (downward). */
+  /** Point loads placed exactly at each support, N: downward and sideways. */
   supportForcesN: readonly number[];
+  supportLateralN: readonly number[];
   ground: readonly GroundPoint[];
+  /** Hung items that hang below the wire in this state (clearance is measured to them). */
+  drops: HungDrops;
   zones: readonly ClearanceZone[];
   safetyFactor: number;
   minClearance: number;
   breakingLoadN: number;
+  theory: Theory;
+  /** Efficiency of the weaker end fitting, 0–1 (1: as strong as the wire). */
+  endFittingEfficiency: number;
   iterations: number;
   messages: string[];
   solved: boolean;
@@ -46,15 +59,18 @@ export interface CheckInput {
 
 const PROFILE_POINTS_PER_SPAN = 200;
 
-/** Smallest wire-minus-ground distance over [from, to] (ground piecewise linear, flat beyond). */
-export function clearanceOver(
-  spans: readonly SolvedSpan[],
-  ground: readonly GroundPoint[],
-  from: number,
-  to: number,
-) {
+interface GroundPiece {
+  a: number;
+  b: number;
+  x: number;
+  z: number;
+  slope: number;
+}
+
+/** The ground line as pieces z = z₀ + slope (x − x₀) on [a, b], flat beyond its ends. */
+function groundPieces(ground: readonly GroundPoint[]): GroundPiece[] {
   const line = ground.length > 0 ? ground : [{ x: 0, z: 0 }];
-  const pieces: { a: number; b: number; x: number; z: number; slope: number }[] = [];
+  const pieces: GroundPiece[] = [];
   pieces.push({ a: -Infinity, b: line[0].x, x: line[0].x, z: line[0].z, slope: 0 });
   for (let i = 0; i + 1 < line.length; i++) {
     const slope = (line[i + 1].z - line[i].z) / (line[i + 1].x - line[i].x);
@@ -62,18 +78,55 @@ export function clearanceOver(
   }
   const end = line[line.length - 1];
   pieces.push({ a: end.x, b: Infinity, x: end.x, z: end.z, slope: 0 });
+  return pieces;
+}
+
+function groundAt(pieces: readonly GroundPiece[], x: number): number {
+  const piece = pieces.find((p) => x >= p.a && x <= p.b) ?? pieces[pieces.length - 1];
+  return piece.z + piece.slope * (x - piece.x);
+}
+
+/**
+ * Smallest distance from the lowest of the wire and its hung items down to the ground over
+ * [from, to] (ground piecewise linear, flat beyond): z(x) − ground(x), and z(x) − drop − ground(x)
+ * under a hung item that hangs `drop` below the wire (over a uniform load's [from, to], or at a
+ * point load's x).
+ */
+export function clearanceOver(
+  spans: readonly SolvedSpan[],
+  ground: readonly GroundPoint[],
+  from: number,
+  to: number,
+  drops: HungDrops = NO_DROPS,
+): ShapePoint {
+  const pieces = groundPieces(ground);
   let best = { x: from, value: Number.POSITIVE_INFINITY };
-  for (const { span, tensionN } of spans) {
-    for (const piece of pieces) {
-      const a = Math.max(from, piece.a, span.x0);
-      const b = Math.min(to, piece.b, span.x1);
-      if (!(b >= a)) continue;
-      const m = minimumAboveLine(span, tensionN, a, b, piece.x, piece.z, piece.slope);
-      if (m.value < best.value) best = m;
+  const below = (a: number, b: number, dropM: number) => {
+    for (const { span, tensionN } of spans) {
+      for (const piece of pieces) {
+        const lo = Math.max(a, piece.a, span.x0);
+        const hi = Math.min(b, piece.b, span.x1);
+        if (!(hi >= lo)) continue;
+        const m = minimumAboveLine(span, tensionN, lo, hi, piece.x, piece.z + dropM, piece.slope);
+        if (m.value < best.value) best = m;
+      }
     }
+  };
+  below(from, to, 0);
+  for (const range of drops.ranges)
+    below(Math.max(from, range.from), Math.min(to, range.to), range.dropM);
+  for (const point of drops.points) {
+    if (point.x < from || point.x > to) continue;
+    const span = spans.find((s) => point.x >= s.span.x0 && point.x <= s.span.x1);
+    if (!span) continue;
+    const value =
+      heightAt(span.span, span.tensionN, point.x) - point.dropM - groundAt(pieces, point.x);
+    if (value < best.value) best = { x: point.x, value };
   }
   return best;
 }
+
+const NO_DROPS: HungDrops = { points: [], ranges: [] };
 
 function spanResult({ span, tensionN }: SolvedSpan): SpanResult {
   const sag = minimumAboveLine(span, tensionN, span.x0, span.x1, span.x0, span.z0, span.chordSlope);
@@ -112,13 +165,13 @@ interface SupportSums {
 /**
  * The wire's pull on each support: at the start of span j it pulls with H (1, y', z') toward
  * the span, at its end with H (−1, −y', −z'); a point load placed at a support adds to its
- * downward pull. Each side's wire tension and angle below the horizontal are reported as well.
+ * downward pull (and its wind to the sideways pull). Each side's wire tension and angle below the horizontal are reported as well.
  */
 function reactions(input: CheckInput): SupportReaction[] {
   const sums: SupportSums[] = input.attachments.map((_, i) => ({
     h: 0,
     v: input.supportForcesN[i] ?? 0,
-    l: 0,
+    l: input.supportLateralN[i] ?? 0,
   }));
   input.spans.forEach(({ span, tensionN: H }, j) => {
     const start = slopesAt(span, H, 0, -1);
@@ -174,36 +227,63 @@ export function sampleProfile(spans: readonly SolvedSpan[]): CaseProfile {
 
 const fmt = (value: number, digits = 2) => value.toFixed(digits);
 
+/** Above this sag/span the parabolic theory's H is visibly low (0.3 % at 5 %, 4.7 % at 20 %). */
+export const PARABOLIC_SAG_RATIO_LIMIT = 0.05;
+
+function parabolicNotes(spans: readonly SolvedSpan[], results: readonly SpanResult[]): string[] {
+  const notes: string[] = [];
+  results.forEach((r, j) => {
+    const ratio = r.sag / (spans[j].span.x1 - spans[j].span.x0);
+    if (ratio > PARABOLIC_SAG_RATIO_LIMIT)
+      notes.push(
+        `Parabolic theory: the sag of span ${j + 1} is ${fmt(ratio * 100, 1)} % of the span (above 5 %); the parabola under-estimates the tension as sag grows (about 5 % low at 20 %): use the exact theory.`,
+      );
+  });
+  return notes;
+}
+
 /** Build the contract's case result from a solved state. */
 export function checkCase(input: CheckInput): CaseResult {
   const { spans } = input;
   const spanResults = spans.map(spanResult);
   const maxTension = largestStateTension(spans);
   const horizontalTension = Math.max(...spans.map((s) => s.tensionN));
-  const utilisation = (maxTension * input.safetyFactor) / input.breakingLoadN;
+  const efficiency = input.endFittingEfficiency;
+  const capacityN = input.breakingLoadN * efficiency;
+  const utilisation = (maxTension * input.safetyFactor) / capacityN;
   const lowest = spanResults.reduce((a, b) =>
     b.lowestPoint.z < a.lowestPoint.z ? b : a,
   ).lowestPoint;
-  const clearance = clearanceOver(spans, input.ground, -Infinity, Infinity).value;
+  const clearance = clearanceOver(spans, input.ground, -Infinity, Infinity, input.drops).value;
   const swing = Math.max(...spans.map((s) => Math.abs(largestSwing(s.span, s.tensionN).value)));
   const messages = [...input.messages];
-  const allowedN = input.breakingLoadN / input.safetyFactor;
+  const allowedN = capacityN / input.safetyFactor;
+  const reduced = efficiency < 1;
+  const percent = `${fmt(efficiency * 100, 0)} %`;
   if (maxTension > input.breakingLoadN) {
     messages.push(
       `Largest tension ${fmt(maxTension, 0)} N exceeds the breaking load ${fmt(input.breakingLoadN, 0)} N: the wire would fail.`,
     );
-  } else if (utilisation > 1) {
+  } else if (maxTension > capacityN) {
     messages.push(
-      `Largest tension ${fmt(maxTension, 0)} N exceeds the working limit ${fmt(allowedN, 0)} N (breaking load / safety factor ${input.safetyFactor}).`,
+      `Largest tension ${fmt(maxTension, 0)} N exceeds what the weaker end fitting holds, ${fmt(capacityN, 0)} N (${percent} of the breaking load): the termination would fail.`,
+    );
+  } else if (utilisation > 1) {
+    const basis = reduced
+      ? `breaking load × end fitting ${percent} / safety factor ${input.safetyFactor}`
+      : `breaking load / safety factor ${input.safetyFactor}`;
+    messages.push(
+      `Largest tension ${fmt(maxTension, 0)} N exceeds the working limit ${fmt(allowedN, 0)} N (${basis}).`,
     );
   }
+  if (input.theory === 'parabolic') messages.push(...parabolicNotes(spans, spanResults));
   if (clearance < input.minClearance) {
     messages.push(
       `Clearance ${fmt(clearance)} m is below the required ${fmt(input.minClearance)} m.`,
     );
   }
   const zoneClearances = input.zones.map((zone, i) => {
-    const c = clearanceOver(spans, input.ground, zone.from, zone.to).value;
+    const c = clearanceOver(spans, input.ground, zone.from, zone.to, input.drops).value;
     const label = zone.label ?? `Zone ${i + 1}`;
     const ok = c >= zone.height;
     if (!ok)
@@ -216,6 +296,7 @@ export function checkCase(input: CheckInput): CaseResult {
     clearance >= input.minClearance &&
     zoneClearances.every((z) => z.ok);
   return {
+    id: input.id,
     name: input.name,
     solved: input.solved,
     horizontalTension,

@@ -1,6 +1,13 @@
 /** Public entry of the Sagwright core: the project contract, the solver, the catalogue, validation. */
 
+export { caseIndexOfId, caseResultId, INSTALLATION_ID, weatherCaseOfId } from './caseIds.ts';
 export { CAUTION_SUMMARY, CAUTIONS } from './cautions.ts';
+export {
+  END_FITTING_KINDS,
+  END_FITTING_TYPES,
+  type EndFittingType,
+  resolveEndFittings,
+} from './endFittings.ts';
 export {
   type Migration,
   migrateProjectDocument,
@@ -9,6 +16,6 @@ export {
   type ProjectDocument,
 } from './migrateProject.ts';
 export * from './project.ts';
-export { solveProject } from './solveProject.ts';
+export { type SolveOptions, solveProject } from './solveProject.ts';
 export { type ValidationIssue, type ValidationResult, validateProject } from './validateProject.ts';
 export { findCatalogWire, resolveWire, WIRE_CATALOG, type WireProperties } from './wireCatalog.ts';

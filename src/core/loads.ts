@@ -1,23 +1,31 @@
 /**
  * Loads per metre for one weather case (SI). Wire: self weight w = m g and radial ice
  * ρ_ice g π t (d + t) per metre of wire; wind q C_f (d + 2t) with q = ρ_air V² / 2 (N/m).
- * Hung uniform loads act per horizontal metre (with ice and wind on their own diameter);
- * point loads are vertical forces (N). Cases may leave the hung loads out.
+ * Hung uniform loads: their own mass per horizontal metre, ice and wind on their own diameter
+ * per metre of cable along the wire. Point loads: a vertical force (N) and the wind on their
+ * projected area, q C_d A (N, sideways). Cases may leave the hung loads out.
  */
-import type { Environment, Load, WeatherCase } from './project.ts';
+import type { Environment, Load, PointLoad, WeatherCase } from './project.ts';
 import type { WireProperties } from './wireCatalog.ts';
 
-/** A hung uniform load resolved for one case, per horizontal metre. */
+/** A hung uniform load resolved for one case. */
 export interface UniformLoadPerMetre {
   from: number;
   to: number;
+  /** Its own weight, N per horizontal metre. */
   verticalNPerM: number;
-  lateralNPerM: number;
+  /** Ice on its diameter, N per metre of cable along the wire (downward). */
+  iceNPerM: number;
+  /** Wind on its (iced) diameter, N per metre of cable along the wire (sideways). */
+  windNPerM: number;
 }
 
 export interface PointForce {
   x: number;
+  /** Downward force, N. */
   forceN: number;
+  /** Wind on the item's projected area, N (sideways, +y). */
+  lateralN: number;
 }
 
 export interface CaseLoads {
@@ -52,6 +60,14 @@ export function windLoadNPerM(
   return pressurePa * env.dragCoefficient * (diameterM + 2 * iceM);
 }
 
+/** Wind force on a hung item of projected area A (m²): q C_d A, C_d its own or the environment's. */
+export function pointWindN(env: Environment, load: PointLoad, speed: number): number {
+  const areaM2 = load.windArea ?? 0;
+  if (areaM2 <= 0 || speed <= 0) return 0;
+  const pressurePa = 0.5 * env.airDensity * speed * speed;
+  return pressurePa * (load.dragCoefficient ?? env.dragCoefficient) * areaM2;
+}
+
 export function loadStateOfCase(weather: WeatherCase): LoadState {
   return {
     temperature: weather.temperature,
@@ -80,15 +96,16 @@ export function caseLoads(
   for (const load of loads) {
     if (load.type === 'point') {
       const forceN = load.force ?? (load.mass ?? 0) * env.gravity;
-      result.points.push({ x: load.x, forceN });
+      result.points.push({ x: load.x, forceN, lateralN: pointWindN(env, load, V) });
     } else {
       const d = load.diameter ?? 0;
       const hasArea = d > 0;
       result.uniform.push({
         from: load.from,
         to: load.to,
-        verticalNPerM: load.massPerLength * env.gravity + (hasArea ? iceWeightNPerM(env, d, t) : 0),
-        lateralNPerM: hasArea ? windLoadNPerM(env, d, t, V) : 0,
+        verticalNPerM: load.massPerLength * env.gravity,
+        iceNPerM: hasArea ? iceWeightNPerM(env, d, t) : 0,
+        windNPerM: hasArea ? windLoadNPerM(env, d, t, V) : 0,
       });
     }
   }
@@ -103,4 +120,22 @@ export function loadBreakpoints(loads: readonly Load[]): number[] {
     else points.push(load.from, load.to);
   }
   return points;
+}
+
+/** Where hung items hang below the wire in a state: point drops and uniform-load drops (m). */
+export interface HungDrops {
+  points: { x: number; dropM: number }[];
+  ranges: { from: number; to: number; dropM: number }[];
+}
+
+export function hungDrops(loads: readonly Load[], withLoads: boolean): HungDrops {
+  const drops: HungDrops = { points: [], ranges: [] };
+  if (!withLoads) return drops;
+  for (const load of loads) {
+    const dropM = load.drop ?? 0;
+    if (!(dropM > 0)) continue;
+    if (load.type === 'point') drops.points.push({ x: load.x, dropM });
+    else drops.ranges.push({ from: load.from, to: load.to, dropM });
+  }
+  return drops;
 }

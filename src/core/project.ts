@@ -60,6 +60,12 @@ export interface PointLoad {
   mass?: number;
   /** N, downward. */
   force?: number;
+  /** Projected area that catches the wind, m² (optional; none by default). */
+  windArea?: number;
+  /** Drag coefficient of that area (optional; default the environment's). */
+  dragCoefficient?: number;
+  /** How far the item's lowest part hangs below the wire, m (optional; 0). */
+  drop?: number;
   label?: string;
 }
 
@@ -71,6 +77,8 @@ export interface UniformLoad {
   massPerLength: number;
   /** Diameter that catches wind and ice, m (optional). */
   diameter?: number;
+  /** How far its lowest part hangs below the wire, m (optional; 0). */
+  drop?: number;
   label?: string;
 }
 
@@ -111,10 +119,34 @@ export interface ClearanceZone {
   label?: string;
 }
 
+/** Termination kinds with a tabulated efficiency (endFittings.ts), or "custom" (own value). */
+export type EndFittingKind =
+  | 'ropeGrips'
+  | 'ferruleEye'
+  | 'socket'
+  | 'wedgeSocket'
+  | 'handSplice'
+  | 'swagedTerminal'
+  | 'custom';
+
+export interface EndFitting {
+  kind: EndFittingKind;
+  /** Fraction of the wire's breaking load the fitting holds, 0–1: only (and required) for custom. */
+  efficiency?: number;
+}
+
+/** The fittings at the first (start) and last (end) support. */
+export interface EndFittings {
+  start: EndFitting;
+  end: EndFitting;
+}
+
 export interface Limits {
   safetyFactor: number;
   minClearance: number;
   zones?: ClearanceZone[];
+  /** Optional; absent means no reduction (terminations as strong as the wire), said in results. */
+  endFittings?: EndFittings;
 }
 
 export type Theory = 'exact' | 'parabolic';
@@ -212,6 +244,9 @@ export interface CaseProfile {
 }
 
 export interface CaseResult {
+  /** Identity of the state: "installation", or "cases[i]" for the document's i-th weather case
+   * (0-based). Names are labels only and may repeat the installation's. */
+  id: string;
   name: string;
   /** False when the state could not be solved; messages say why. */
   solved: boolean;
@@ -250,12 +285,50 @@ export interface SetUpRow {
   returnTime: number;
 }
 
+/** One end's fitting as the results state it (table entry, own value, or not stated). */
+export interface EndFittingResult {
+  kind: EndFittingKind | 'notStated';
+  label: string;
+  efficiency: number;
+  source: string;
+}
+
+export interface EndFittingsResult {
+  /** False when the project names no end fittings: no reduction is applied. */
+  stated: boolean;
+  start: EndFittingResult;
+  end: EndFittingResult;
+  /** The weaker end's efficiency, used in every case's utilisation. */
+  efficiency: number;
+  /** Which end governs ("start" on a tie). */
+  governing: 'start' | 'end';
+}
+
+/** The mesh the results come from and how its discretisation error compares with the target. */
+export interface MeshResult {
+  /** Each element of the project's mesh split into this many (1: the mesh as set). */
+  refinement: number;
+  /** Elements in the most finely meshed span. */
+  elementsPerSpan: number;
+  /** Relative error the estimate must fall below (automatic refinement stops there). */
+  errorTarget: number;
+  /** The largest estimate over the cases, and whether it is below the target. */
+  largestError: number;
+  reached: boolean;
+}
+
 export interface ProjectResults {
   unstressedLength: number;
   cases: CaseResult[];
+  /** Names of the governing cases (labels; see governingIds for their identities). */
   governing: Governing;
+  /** Identities (CaseResult.id) of the governing cases. */
+  governingIds: Governing;
   /** What to set on the day at other temperatures (installation loads, cut length fixed). */
   setUpChart: SetUpRow[];
   /** The span whose sag the set-up chart lists (0-based). */
   setUpSpan: number;
+  /** The end fittings and the efficiency the utilisation uses. */
+  endFittings: EndFittingsResult;
+  mesh: MeshResult;
 }

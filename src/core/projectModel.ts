@@ -6,7 +6,7 @@
  */
 
 import type { JointKind, WireLoading } from './lengthCompatibility.ts';
-import { caseLoads, type LoadState, loadBreakpoints } from './loads.ts';
+import { caseLoads, type LoadState, loadBreakpoints, type PointForce } from './loads.ts';
 import {
   type Attachment,
   DEFAULT_ENVIRONMENT,
@@ -44,20 +44,22 @@ export interface ProjectModel {
    * tension equal, every other support the horizontal tension (see doc/model.md).
    */
   installationJoints: JointKind[];
-  /** Point forces placed exactly at each support in the last prepared state, N (downward). */
+  /** Point loads placed exactly at each support in the last prepared state, N: downward. */
   supportForcesN: number[];
+  /** … and sideways (wind on the item), N. */
+  supportLateralN: number[];
   installation: NamedState;
 }
 
 export const INSTALLATION_NAME = 'Installation';
 
-export function buildProjectModel(project: Project, elementsPerSpan?: number): ProjectModel {
+/** The model of a project; `refinement` k splits every element of the project's mesh into k. */
+export function buildProjectModel(project: Project, refinement = 1): ProjectModel {
   const settings: ModelSettings = { ...DEFAULT_MODEL, ...project.model };
   const env: Environment = { ...DEFAULT_ENVIRONMENT, ...project.environment };
   const wire = resolveWire(project.wire);
   if (!wire) throw new Error('wire: unknown catalogue id');
   const breakpoints = loadBreakpoints(project.loads);
-  const count = elementsPerSpan ?? settings.elementsPerSpan;
   const spans: SpanModel[] = [];
   const s = project.supports;
   const attachments = s.map((support, i) =>
@@ -71,8 +73,9 @@ export function buildProjectModel(project: Project, elementsPerSpan?: number): P
         s[j + 1].x,
         s[j + 1].z,
         breakpoints,
-        count,
+        settings.elementsPerSpan,
         settings.elementOrder,
+        refinement,
       ),
     );
   }
@@ -89,6 +92,7 @@ export function buildProjectModel(project: Project, elementsPerSpan?: number): P
       .slice(1, -1)
       .map((a) => (a === 'pulley' ? 'tension' : 'horizontal')),
     supportForcesN: attachments.map(() => 0),
+    supportLateralN: attachments.map(() => 0),
     installation: {
       name: INSTALLATION_NAME,
       temperature: inst.temperature,
@@ -129,12 +133,15 @@ export function supportIndexAt(spans: readonly SpanModel[], x: number): number {
   return -1;
 }
 
-/** Sum of the point forces at each support (they go straight into that support), N. */
-function forcesAtSupports(model: ProjectModel, points: readonly { x: number; forceN: number }[]) {
+/** Sum of the point loads at each support (they go straight into that support), N. */
+function forcesAtSupports(model: ProjectModel, points: readonly PointForce[]) {
   model.supportForcesN.fill(0);
+  model.supportLateralN.fill(0);
   for (const p of points) {
     const i = supportIndexAt(model.spans, p.x);
-    if (i >= 0) model.supportForcesN[i] += p.forceN;
+    if (i < 0) continue;
+    model.supportForcesN[i] += p.forceN;
+    model.supportLateralN[i] += p.lateralN;
   }
 }
 

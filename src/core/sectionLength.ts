@@ -36,6 +36,8 @@ export function spanUnstressedLength(
     const curvY = 0.5 * span.qLateral[e] * L * GAUSS2;
     let element = 0;
     let elementSlope = 0;
+    let arc = 0;
+    let arcSlope = 0;
     for (let g = -1; g <= 1; g += 2) {
       const av = span.slopeV1[e] - g * curvV;
       const ay = span.slopeY1[e] - g * curvY;
@@ -48,12 +50,16 @@ export function spanUnstressedLength(
       const dTdH = r + H * drdH;
       element += f;
       elementSlope += (drdH - (f * dTdH) / axialStiffness) / stretch;
+      arc += r;
+      arcSlope += drdH;
     }
     element *= 0.5 * L;
     elementSlope *= 0.5 * L;
     if (storeElements) {
       span.unstressedElement[e] = element;
       span.unstressedElementSlope[e] = elementSlope;
+      span.arcElement[e] = arc * 0.5 * L;
+      span.arcElementSlope[e] = arcSlope * 0.5 * L;
     }
     value += element;
     slope += elementSlope;
@@ -80,8 +86,11 @@ export function sectionUnstressedLength(
 
 /**
  * Set element loads from the wire loading and return the largest relative change. The exact
- * theory scales the wire's load by ds₀/dx of the last solved state, moved to first order by the
- * span's tension shift (N) when given (a warm start across states and trial tensions).
+ * theory scales the wire's load by ds₀/dx and the ice and wind on hung cables by ds/dx, both of
+ * the last solved state moved to first order by the span's tension shift (N) when given (a warm
+ * start across states and trial tensions; before any state ds₀/dx = 1 and ds/dx = √(1 + c²)).
+ * The parabolic theory keeps the wire's load per horizontal metre and turns the hung cables' ice
+ * and wind into per horizontal metre with the chord's ds/dx = √(1 + c²).
  */
 export function updateLoads(
   spans: readonly SpanModel[],
@@ -94,11 +103,16 @@ export function updateLoads(
   spans.forEach((span, j) => {
     const shift = tensionShiftN ? tensionShiftN[j] : 0;
     let lateral = false;
+    for (const force of span.pointLateral) if (force !== 0) lateral = true;
+    const chordArcRatio = Math.sqrt(1 + span.chordSlope * span.chordSlope);
     for (let e = 0; e < span.elementLength.length; e++) {
+      const L = span.elementLength[e];
       const unstressed = span.unstressedElement[e] + span.unstressedElementSlope[e] * shift;
-      const ratio = useGeometry && unstressed > 0 ? unstressed / span.elementLength[e] : 1;
-      const q = wire.weightNPerM * ratio + span.hungVertical[e];
-      const p = wire.windNPerM * ratio + span.hungLateral[e];
+      const ratio = useGeometry && unstressed > 0 ? unstressed / L : 1;
+      const arc = span.arcElement[e] + span.arcElementSlope[e] * shift;
+      const arcRatio = useGeometry && arc > 0 ? arc / L : chordArcRatio;
+      const q = wire.weightNPerM * ratio + span.hungVertical[e] + span.hungIceAlong[e] * arcRatio;
+      const p = wire.windNPerM * ratio + span.hungWindAlong[e] * arcRatio;
       change = Math.max(change, Math.abs(q - span.qVertical[e]), Math.abs(p - span.qLateral[e]));
       scale = Math.max(scale, Math.abs(q), Math.abs(p));
       span.qVertical[e] = q;

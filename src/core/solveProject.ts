@@ -1,79 +1,120 @@
 /**
  * solveProject: a validated project document → the contract's results (SI). The installation
  * target fixes the installation tension and so each span's cut length; every weather case is a
- * change of state at those lengths. The discretisation error is estimated by solving again on
- * half the elements: e ≈ |f_h − f_2h| / (2² − 1) for sag and largest tension.
+ * change of state at those lengths. Each case's discretisation error is estimated against a mesh
+ * with every element split in two (discretisation.ts); while the largest estimate is above
+ * 1e-4 the whole project is solved again on that finer mesh (at most six times, and never past
+ * 20 000 elements in a span).
  */
 
-import { checkCase, largestSag, largestStateTension } from './caseChecks.ts';
-import { findInstallationTension, targetSpanIndex } from './installation.ts';
-import { loadStateOfCase } from './loads.ts';
+import { checkCase } from './caseChecks.ts';
+import { caseResultId, INSTALLATION_ID } from './caseIds.ts';
+import { ERROR_TARGET, estimateErrors, type StateSummary, summarise } from './discretisation.ts';
+import { resolveEndFittings } from './endFittings.ts';
+import {
+  findInstallationTension,
+  type InstallationTension,
+  targetSpanIndex,
+} from './installation.ts';
+import { hungDrops, loadStateOfCase } from './loads.ts';
 import { migrateProjectDocument } from './migrateProject.ts';
-import type { CaseResult, Project, ProjectResults } from './project.ts';
+import type { CaseResult, EndFittingsResult, Project, ProjectResults } from './project.ts';
 import { buildProjectModel, type ProjectModel } from './projectModel.ts';
 import { setUpChart } from './setUpChart.ts';
 import { type StateSolution, solveChangeOfState, solveInstallation } from './states.ts';
 
-interface StateSummary {
-  sag: number;
-  maxTension: number;
+/** Largest refinement of the project's mesh (each element split into this many at most). */
+const MAX_REFINEMENT = 64;
+/** No refinement beyond this many elements in one span (the comparison mesh has twice that). */
+const MAX_REFINED_ELEMENTS = 20000;
+
+export interface SolveOptions {
+  /** Refine the mesh automatically until the error estimate is below 1e-4 (default true). */
+  refine?: boolean;
+}
+
+interface MeshRun {
+  model: ProjectModel;
+  refinement: number;
+  target: InstallationTension;
+  results: CaseResult[];
+  summaries: StateSummary[];
+  unstressed: number[];
 }
 
 function checkState(
   model: ProjectModel,
+  fittings: EndFittingsResult,
+  id: string,
   name: string,
   temperature: number,
+  withLoads: boolean,
   state: StateSolution,
 ): CaseResult {
   const p = model.project;
   return checkCase({
+    id,
     name,
     temperature,
     spans: state.spans,
     attachments: model.attachments,
     supportForcesN: state.supportForcesN,
+    supportLateralN: state.supportLateralN,
     ground: p.ground ?? [],
+    drops: hungDrops(p.loads, withLoads),
     zones: p.limits.zones ?? [],
     safetyFactor: p.limits.safetyFactor,
     minClearance: p.limits.minClearance,
     breakingLoadN: model.wire.breakingLoad,
+    theory: model.settings.theory,
+    endFittingEfficiency: fittings.efficiency,
     iterations: state.iterations,
     messages: state.messages,
     solved: state.solved,
   });
 }
 
-/** Solve every state of the model at installation tension H and finish each; in case order. */
-function solveStates<T>(
-  model: ProjectModel,
-  tensionN: number,
-  finish: (name: string, temperature: number, state: StateSolution) => T,
-  caseTensionGuesses?: readonly (readonly number[])[],
-): { results: T[]; unstressed: number[] } {
-  const installed = solveInstallation(model, tensionN);
-  const results = [finish(model.installation.name, model.installation.temperature, installed)];
-  const installedTensions = installed.spans.map((s) => s.tensionN);
-  for (const [i, weather] of model.project.cases.entries()) {
+/** Installation target, installation and every case on one mesh, checked; in case order. */
+function solveOnMesh(project: Project, refinement: number, fittings: EndFittingsResult): MeshRun {
+  const model = buildProjectModel(project, refinement);
+  const target = findInstallationTension(model, project.installation.target);
+  const installed = solveInstallation(model, target.tensionN);
+  const inst = model.installation;
+  const finish = (
+    id: string,
+    name: string,
+    temperature: number,
+    withLoads: boolean,
+    s: StateSolution,
+  ) => checkState(model, fittings, id, name, temperature, withLoads, s);
+  const results = [finish(INSTALLATION_ID, inst.name, inst.temperature, inst.withLoads, installed)];
+  const summaries = [summarise(installed)];
+  for (const [i, weather] of project.cases.entries()) {
     const state = solveChangeOfState(
       model,
       { ...loadStateOfCase(weather), name: weather.name },
       installed.unstressed,
-      caseTensionGuesses?.[i] ?? installedTensions,
+      installed.spans.map((s) => s.tensionN),
     );
-    results.push(finish(weather.name, weather.temperature, state));
+    results.push(
+      finish(caseResultId(i), weather.name, weather.temperature, weather.withLoads, state),
+    );
+    summaries.push(summarise(state));
   }
-  return { results, unstressed: installed.unstressed };
+  results[0].iterations += target.evaluations;
+  if (!target.ok) {
+    // Without its installation tension no state is meaningful: every case says so.
+    for (const r of results) {
+      r.solved = false;
+      r.ok = false;
+      r.messages.unshift(`Installation target: ${target.message ?? 'did not converge'}.`);
+    }
+  }
+  return { model, refinement, target, results, summaries, unstressed: installed.unstressed };
 }
 
-/** Sag and largest tension only: what the discretisation estimate compares. */
-function summarise(_name: string, _temperature: number, state: StateSolution): StateSummary {
-  return { sag: largestSag(state.spans), maxTension: largestStateTension(state.spans) };
-}
-
-function relativeChange(fine: StateSummary, coarse: StateSummary): number {
-  const dt = Math.abs(fine.maxTension - coarse.maxTension) / Math.max(fine.maxTension, 1e-300);
-  const ds = Math.abs(fine.sag - coarse.sag) / Math.max(fine.sag, 1e-300);
-  return Math.max(dt, ds) / 3;
+function largestElementCount(model: ProjectModel): number {
+  return Math.max(...model.spans.map((s) => s.mesh.elementCount));
 }
 
 function governing(project: Project, results: CaseResult[]) {
@@ -88,43 +129,56 @@ function governing(project: Project, results: CaseResult[]) {
     if (r.utilisation > tension.utilisation) tension = r;
     if (margin(r) < margin(clearance)) clearance = r;
   }
-  return { tension: tension.name, clearance: clearance.name };
+  return {
+    governing: { tension: tension.name, clearance: clearance.name },
+    governingIds: { tension: tension.id, clearance: clearance.id },
+  };
 }
 
 /**
  * Solve a project that has passed validateProject (an older version is read through the same
  * migration as validateProject). Never throws for physical failures.
  */
-export function solveProject(document: Project): ProjectResults {
+export function solveProject(document: Project, options: SolveOptions = {}): ProjectResults {
   const older = migrateProjectDocument(document as unknown as Record<string, unknown>);
   const project = older ? (older.document as unknown as Project) : document;
-  const model = buildProjectModel(project);
-  const target = findInstallationTension(model, project.installation.target);
-  const finish = (name: string, temperature: number, state: StateSolution) =>
-    checkState(model, name, temperature, state);
-  const { results, unstressed } = solveStates(model, target.tensionN, finish);
-  results[0].iterations += target.evaluations;
-  if (!target.ok) {
-    // Without its installation tension no state is meaningful: every case says so.
-    for (const r of results) {
-      r.solved = false;
-      r.ok = false;
-      r.messages.unshift(`Installation target: ${target.message ?? 'did not converge'}.`);
-    }
+  const fittings = resolveEndFittings(project.limits.endFittings);
+  let run = solveOnMesh(project, 1, fittings);
+  let errors = estimateErrors(run.model, 1, run.target.tensionN, run.summaries);
+  const worst = () => Math.max(0, ...errors.filter((_, i) => run.results[i].solved).map((e) => e));
+  while (
+    options.refine !== false &&
+    worst() >= ERROR_TARGET &&
+    run.refinement < MAX_REFINEMENT &&
+    2 * largestElementCount(run.model) <= MAX_REFINED_ELEMENTS
+  ) {
+    run = solveOnMesh(project, 2 * run.refinement, fittings);
+    errors = estimateErrors(run.model, run.refinement, run.target.tensionN, run.summaries);
   }
-  const coarseCount = Math.max(2, Math.round(model.settings.elementsPerSpan / 2));
-  const coarseModel = buildProjectModel(project, coarseCount);
-  const fineTensions = results.slice(1).map((r) => r.spans.map((s) => s.horizontalTension));
-  const coarse = solveStates(coarseModel, target.tensionN, summarise, fineTensions).results;
-  results.forEach((r, i) => {
-    r.discretisationError = relativeChange(r, coarse[i]);
+  const elements = largestElementCount(run.model);
+  run.results.forEach((r, i) => {
+    r.discretisationError = errors[i];
+    if (r.solved && errors[i] >= ERROR_TARGET)
+      r.messages.push(
+        `Mesh: the estimated discretisation error ${errors[i].toExponential(1)} is above ${ERROR_TARGET.toExponential(0)} with ${elements} elements per span${options.refine === false ? '' : ' (refinement limit reached)'}; treat the last digits as uncertain.`,
+      );
   });
+  const { model, results, unstressed } = run;
   const setUpSpan = targetSpanIndex(model, project.installation.target);
+  const largestError = worst();
   return {
     unstressedLength: unstressed.reduce((a, b) => a + b, 0),
     cases: results,
-    governing: governing(project, results),
-    setUpChart: setUpChart(model, unstressed, setUpSpan, target.tensionN),
+    ...governing(project, results),
+    setUpChart: setUpChart(model, unstressed, setUpSpan, run.target.tensionN),
     setUpSpan,
+    endFittings: fittings,
+    mesh: {
+      refinement: run.refinement,
+      elementsPerSpan: elements,
+      errorTarget: ERROR_TARGET,
+      largestError,
+      reached: largestError < ERROR_TARGET,
+    },
   };
 }

@@ -22,12 +22,15 @@ export interface SpanModel {
   readonly mesh: StringMesh;
   readonly system: StringSystem;
   readonly elementLength: Float64Array;
-  /** Hung loads of the current case per element, N per horizontal metre (vertical, lateral). */
+  /** Hung loads' own weight in the current case per element, N per horizontal metre. */
   readonly hungVertical: Float64Array;
-  readonly hungLateral: Float64Array;
-  /** Point loads of the current case: node index → force N. */
+  /** Ice and wind on hung cables per element, N per metre of cable along the wire. */
+  readonly hungIceAlong: Float64Array;
+  readonly hungWindAlong: Float64Array;
+  /** Point loads of the current case: node index → downward force N and sideways wind N. */
   pointNodes: number[];
   pointForces: number[];
+  pointLateral: number[];
   /** Current element loads (N per horizontal metre) used for the shape. */
   readonly qVertical: Float64Array;
   readonly qLateral: Float64Array;
@@ -42,6 +45,9 @@ export interface SpanModel {
   /** Unstressed length of each element at the last evaluated state, m, and its d/dH (m/N). */
   readonly unstressedElement: Float64Array;
   readonly unstressedElementSlope: Float64Array;
+  /** Arc length of each element at the last evaluated state, m, and its d/dH (m/N). */
+  readonly arcElement: Float64Array;
+  readonly arcElementSlope: Float64Array;
 }
 
 export function createSpanModel(
@@ -52,8 +58,9 @@ export function createSpanModel(
   breakpoints: readonly number[],
   elementCount: number,
   order: ElementOrder,
+  subdivide = 1,
 ): SpanModel {
-  const mesh = buildStringMesh(x0, x1, breakpoints, elementCount, order);
+  const mesh = buildStringMesh(x0, x1, breakpoints, elementCount, order, subdivide);
   const ne = mesh.elementCount;
   const elementLength = new Float64Array(ne);
   for (let e = 0; e < ne; e++) elementLength[e] = mesh.vertexX[e + 1] - mesh.vertexX[e];
@@ -68,9 +75,11 @@ export function createSpanModel(
     system: createStringSystem(mesh),
     elementLength,
     hungVertical: new Float64Array(ne),
-    hungLateral: new Float64Array(ne),
+    hungIceAlong: new Float64Array(ne),
+    hungWindAlong: new Float64Array(ne),
     pointNodes: [],
     pointForces: [],
+    pointLateral: [],
     qVertical: new Float64Array(ne),
     qLateral: new Float64Array(ne),
     lateralLoaded: false,
@@ -80,30 +89,39 @@ export function createSpanModel(
     slopeY1: new Float64Array(ne),
     unstressedElement: new Float64Array(ne),
     unstressedElementSlope: new Float64Array(ne),
+    arcElement: new Float64Array(ne),
+    arcElementSlope: new Float64Array(ne),
   };
 }
 
-/** Put one case's hung loads on the span (uniform per horizontal metre, point forces). */
+/**
+ * Put one case's hung loads on the span: own weight per horizontal metre, ice and wind on hung
+ * cables per metre of cable (turned into per horizontal metre by the theory's ds/dx), point forces.
+ */
 export function applyHungLoads(span: SpanModel, loads: CaseLoads): void {
-  const { mesh, hungVertical, hungLateral } = span;
+  const { mesh, hungVertical, hungIceAlong, hungWindAlong } = span;
   hungVertical.fill(0);
-  hungLateral.fill(0);
+  hungIceAlong.fill(0);
+  hungWindAlong.fill(0);
   for (const u of loads.uniform) {
     for (let e = 0; e < mesh.elementCount; e++) {
       const mid = 0.5 * (mesh.vertexX[e] + mesh.vertexX[e + 1]);
       if (mid > u.from && mid < u.to) {
         hungVertical[e] += u.verticalNPerM;
-        hungLateral[e] += u.lateralNPerM;
+        hungIceAlong[e] += u.iceNPerM;
+        hungWindAlong[e] += u.windNPerM;
       }
     }
   }
   span.pointNodes = [];
   span.pointForces = [];
+  span.pointLateral = [];
   const tol = 1e-9 * Math.max(1, span.x1 - span.x0);
   for (const p of loads.points) {
     if (p.x <= span.x0 + tol || p.x >= span.x1 - tol) continue; // carried by the support itself
     span.pointNodes.push(vertexNear(mesh, p.x) * mesh.order);
     span.pointForces.push(p.forceN);
+    span.pointLateral.push(p.lateralN);
   }
 }
 
@@ -115,7 +133,10 @@ export function solveUnitShapes(span: SpanModel): void {
   addElementLoads(mesh, span.qVertical, v1);
   for (let i = 0; i < span.pointNodes.length; i++) v1[span.pointNodes[i]] += span.pointForces[i];
   y1.fill(0);
-  if (span.lateralLoaded) addElementLoads(mesh, span.qLateral, y1);
+  if (span.lateralLoaded) {
+    addElementLoads(mesh, span.qLateral, y1);
+    for (let i = 0; i < span.pointNodes.length; i++) y1[span.pointNodes[i]] += span.pointLateral[i];
+  }
   if (last > 1) {
     span.system.factor.solve(v1.subarray(1, last));
     if (span.lateralLoaded) span.system.factor.solve(y1.subarray(1, last));

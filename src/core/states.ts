@@ -12,8 +12,10 @@ import { type ProjectModel, prepareState, thermalFactor } from './projectModel.t
 
 export interface StateSolution {
   spans: SolvedSpan[];
-  /** Point forces placed exactly at each support, N (downward): they load the support alone. */
+  /** Point loads placed exactly at each support, N, downward and sideways: they load the
+   * support alone. */
   supportForcesN: number[];
+  supportLateralN: number[];
   iterations: number;
   solved: boolean;
   messages: string[];
@@ -33,6 +35,7 @@ export function solveInstallation(
   return {
     spans: model.spans.map((span, j) => ({ span, tensionN: result.spanTensionsN[j] })),
     supportForcesN: [...model.supportForcesN],
+    supportLateralN: [...model.supportLateralN],
     iterations: result.iterations,
     solved: result.converged,
     messages: result.converged ? [] : [`Installation: ${result.reason}.`],
@@ -82,6 +85,7 @@ export function solveChangeOfState(
   return {
     spans: model.spans.map((span, j) => ({ span, tensionN: tensions[j] })),
     supportForcesN: [...model.supportForcesN],
+    supportLateralN: [...model.supportLateralN],
     iterations,
     solved,
     messages,

@@ -30,7 +30,8 @@ function breakpointsOf(x0: number, x1: number, interior: readonly number[]): num
 
 /**
  * Build a mesh with about `elementCount` elements (at least one per segment between
- * breakpoints), so that every breakpoint is a vertex node.
+ * breakpoints), so that every breakpoint is a vertex node. `subdivide` k splits every element of
+ * that mesh into k equal ones: the refined mesh nests the first and always differs from it.
  */
 export function buildStringMesh(
   x0: number,
@@ -38,13 +39,14 @@ export function buildStringMesh(
   interiorBreakpoints: readonly number[],
   elementCount: number,
   order: ElementOrder,
+  subdivide = 1,
 ): StringMesh {
   const points = breakpointsOf(x0, x1, interiorBreakpoints);
   const total = x1 - x0;
   const perSegment: number[] = [];
   for (let s = 0; s + 1 < points.length; s++) {
     const share = ((points[s + 1] - points[s]) / total) * elementCount;
-    perSegment.push(Math.max(1, Math.round(share)));
+    perSegment.push(Math.max(1, Math.round(share)) * subdivide);
   }
   const count = perSegment.reduce((a, b) => a + b, 0);
   const vertexX = new Float64Array(count + 1);

@@ -5,6 +5,7 @@
  * older one is read through the migration chain (migrateProject.ts) and says what changed.
  */
 
+import { END_FITTING_KINDS } from './endFittings.ts';
 import { migrateProjectDocument } from './migrateProject.ts';
 import { ATTACHMENTS, PROJECT_FORMAT, PROJECT_VERSION, type Project } from './project.ts';
 import { FieldChecker, type Json, type ValidationIssue } from './validateFields.ts';
@@ -118,7 +119,16 @@ function checkLoads(c: FieldChecker, raw: unknown, first: number, last: number):
     const path = `loads[${i}]`;
     const kind = (item as Json | null)?.type;
     if (kind === 'point') {
-      const p = c.object(item, path, ['type', 'x', 'mass', 'force', 'label']);
+      const p = c.object(item, path, [
+        'type',
+        'x',
+        'mass',
+        'force',
+        'windArea',
+        'dragCoefficient',
+        'drop',
+        'label',
+      ]);
       if (!p) return;
       c.number(p.x, `${path}.x`, first, last);
       c.string(p.label, `${path}.label`, 100, false);
@@ -126,9 +136,22 @@ function checkLoads(c: FieldChecker, raw: unknown, first: number, last: number):
         c.fail(path, 'needs exactly one of mass (kg) or force (N)');
       else if (p.mass !== undefined) c.number(p.mass, `${path}.mass`, 0, 1e5);
       else c.number(p.force, `${path}.force`, 0, 1e6);
+      if (p.windArea !== undefined) c.number(p.windArea, `${path}.windArea`, 0, 100);
+      if (p.dragCoefficient !== undefined)
+        c.number(p.dragCoefficient, `${path}.dragCoefficient`, 0, 5);
+      if (p.drop !== undefined) c.number(p.drop, `${path}.drop`, 0, 100);
     } else if (kind === 'uniform') {
-      const u = c.object(item, path, ['type', 'from', 'to', 'massPerLength', 'diameter', 'label']);
+      const u = c.object(item, path, [
+        'type',
+        'from',
+        'to',
+        'massPerLength',
+        'diameter',
+        'drop',
+        'label',
+      ]);
       if (!u) return;
+      if (u.drop !== undefined) c.number(u.drop, `${path}.drop`, 0, 100);
       const from = c.number(u.from, `${path}.from`, first, last);
       const to = c.number(u.to, `${path}.to`, first, last);
       if (from !== undefined && to !== undefined && to <= from)
@@ -213,11 +236,30 @@ function checkInstallation(
   }
 }
 
+function checkEndFitting(c: FieldChecker, raw: unknown, path: string): void {
+  const f = c.object(raw, path, ['kind', 'efficiency']);
+  if (!f) return;
+  const kind = c.oneOf(f.kind, `${path}.kind`, END_FITTING_KINDS);
+  if (kind === 'custom') c.positive(f.efficiency, `${path}.efficiency`, 1);
+  else if (kind !== undefined && f.efficiency !== undefined)
+    c.fail(
+      `${path}.efficiency`,
+      'applies only to kind "custom" (the table value is used for the other kinds)',
+    );
+}
+
 function checkLimits(c: FieldChecker, raw: unknown): void {
-  const l = c.object(raw, 'limits', ['safetyFactor', 'minClearance', 'zones']);
+  const l = c.object(raw, 'limits', ['safetyFactor', 'minClearance', 'zones', 'endFittings']);
   if (!l) return;
   c.number(l.safetyFactor, 'limits.safetyFactor', 1, 100);
   c.number(l.minClearance, 'limits.minClearance', 0, 1000);
+  if (l.endFittings !== undefined) {
+    const ends = c.object(l.endFittings, 'limits.endFittings', ['start', 'end']);
+    if (ends) {
+      checkEndFitting(c, ends.start, 'limits.endFittings.start');
+      checkEndFitting(c, ends.end, 'limits.endFittings.end');
+    }
+  }
   if (l.zones === undefined) return;
   (c.array(l.zones, 'limits.zones', 0, 50) ?? []).forEach((item, i) => {
     const path = `limits.zones[${i}]`;

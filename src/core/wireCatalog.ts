@@ -148,8 +148,17 @@ const NYLON: FibreRow[] = [
 const FIBRE_NOTE =
   'Fibre ropes creep and stretch: re-tension after loading; thermal expansion taken as 0.';
 
+/**
+ * Fibre rope stretches far more at low load than its secant to break suggests: the load–
+ * elongation curve stiffens toward break. EA is taken at the working load, 20 % of the breaking
+ * load (safety factor 5 [CP]), as that load over the elongation of new 3-strand rope there:
+ * nylon ≈ 12 %, polyester ≈ 5 % [M] (manufacturers' load–elongation curves, from memory).
+ */
+export const FIBRE_WORKING_FRACTION = 0.2;
+export const FIBRE_WORKING_STRAIN = { nylon: 0.12, polyester: 0.05 } as const;
+
 function fibreRopes(rows: FibreRow[], nylon: boolean): WireProperties[] {
-  const strainAtBreak = nylon ? 0.3 : 0.2; // mid of 25–35 % / 15–25 % [V]
+  const strain = FIBRE_WORKING_STRAIN[nylon ? 'nylon' : 'polyester'];
   return rows.map((row) => ({
     id: `${nylon ? 'nylon' : 'polyester'}-${row.dMm}`,
     label: `${nylon ? 'Nylon' : 'Polyester'} rope ${row.dMm} mm`,
@@ -157,13 +166,13 @@ function fibreRopes(rows: FibreRow[], nylon: boolean): WireProperties[] {
     construction: '3-strand',
     diameter: row.dMm / 1000,
     massPerLength: row.massKgPerM,
-    axialStiffness: (row.breakingKN * 1000) / strainAtBreak,
+    axialStiffness: (FIBRE_WORKING_FRACTION * row.breakingKN * 1000) / strain,
     thermalExpansion: 0,
     breakingLoad: row.breakingKN * 1000,
     sources: {
       diameter: 'nominal [V]',
       massPerLength: 'fibre rope table [V]',
-      axialStiffness: `secant EA = F / ${strainAtBreak} strain at break [D]`,
+      axialStiffness: `EA at working load: 0.2 F / ${strain * 100} % elongation at 20 % of break [M]`,
       thermalExpansion: 'taken as 0 for fibre rope [M]',
       breakingLoad: 'fibre rope table [V]',
     },

@@ -1,6 +1,7 @@
 /**
  * CSV of the wire profile of every case: one row per sampled point, columns case, x, height,
- * clearance above the ground line and wire tension, with units in the headers. The cautions
+ * clearance above the ground line, wire tension (units in the headers) and the case's identity
+ * ("installation" or "cases[i]"), which tells two cases apart even when their names repeat. The cautions
  * head the file as '#' comment lines so the data never travels without them.
  */
 import { CAUTIONS, type Project, type ProjectResults } from '../core/index.ts';
@@ -28,6 +29,7 @@ export function csvHeader(system: UnitSystem): string[] {
     `height z (${length})`,
     `clearance above ground (${length})`,
     `tension (${force})`,
+    'case id',
   ];
 }
 
@@ -62,6 +64,7 @@ export function profilesCsv(
           csvNumber(toDisplay(system, 'length', z), lengthDigits),
           csvNumber(toDisplay(system, 'length', clearance), lengthDigits),
           csvNumber(toDisplay(system, 'force', profile.tension[i]), 1),
+          result.id,
         ].join(','),
       );
     }

@@ -4,7 +4,7 @@
  * SI in the project and results, shown in the chosen display units.
  */
 import type { CaseResult, Project, ProjectResults } from '../core/index.ts';
-import { DEFAULT_MODEL, resolveWire } from '../core/index.ts';
+import { DEFAULT_MODEL, resolveWire, weatherCaseOfId } from '../core/index.ts';
 import { attachmentWords } from './attachmentWords.ts';
 import { formatForceShort, formatQuantity as fq, type UnitSystem } from './displayUnits.ts';
 
@@ -111,7 +111,6 @@ function caseVerdict(c: CaseResult): string {
 }
 
 export function caseTable(project: Project, results: ProjectResults, units: UnitSystem): Table {
-  const weather = new Map(project.cases.map((c) => [c.name, c]));
   return {
     head: [
       'Case',
@@ -127,7 +126,7 @@ export function caseTable(project: Project, results: ProjectResults, units: Unit
       'Result',
     ],
     rows: results.cases.map((c) => {
-      const w = weather.get(c.name);
+      const w = weatherCaseOfId(project.cases, c.id);
       const blank = (text: string) => (c.solved ? text : '-');
       return [
         c.name,

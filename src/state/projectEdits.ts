@@ -1,7 +1,8 @@
 /**
  * Immutable edits of the project document, one small function per kind of change. Each returns
  * a function from the old document to the new one, so an edit can be validated on a copy
- * before it is committed.
+ * before it is committed (src/state/commit.ts, the only way an edit reaches the document).
+ * What depends on a removed item is carried along there (dependants.ts), not here.
  */
 import type {
   ClearanceZone,
@@ -44,17 +45,12 @@ export const addSupport = (): Edit => (p) => {
   return { ...p, supports: [...p.supports, { x: last.x + 10, z: last.z, label: 'New fixing' }] };
 };
 
-/** An end support holds the wire fast: a support that becomes an end loses its attachment. */
 export const removeSupport =
   (index: number): Edit =>
-  (p) => {
-    const supports = removeAt(p.supports, index).map((s, i, all) => {
-      if (s.attachment === undefined || (i > 0 && i < all.length - 1)) return s;
-      const { attachment: _dropped, ...end } = s;
-      return end;
-    });
-    return { ...p, supports };
-  };
+  (p) => ({
+    ...p,
+    supports: removeAt(p.supports, index),
+  });
 
 export const patchGround =
   (index: number, patch: Partial<GroundPoint>): Edit =>
@@ -189,22 +185,10 @@ export const duplicateCase =
     return { ...p, cases: insertAt(p.cases, index + 1, copy) };
   };
 
-function withoutCase(target: InstallationTarget): InstallationTarget {
-  const { case: _dropped, ...rest } = target;
-  return rest;
-}
-
+/** A target stated in the removed case is carried back to the installation by commit(). */
 export const removeCase =
   (index: number): Edit =>
-  (p) => {
-    const removed = p.cases[index];
-    const target = p.installation.target;
-    const installation =
-      target.case === removed.name
-        ? { ...p.installation, target: withoutCase(target) }
-        : p.installation;
-    return { ...p, cases: removeAt(p.cases, index), installation };
-  };
+  (p) => ({ ...p, cases: removeAt(p.cases, index) });
 
 export const patchLimits =
   (patch: Partial<Limits>): Edit =>

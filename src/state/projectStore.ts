@@ -1,64 +1,83 @@
 /**
- * The project document store: one immutable Project replaced on every edit, with undo/redo of
- * document edits (zundo) and autosave to the browser's storage on every change. Keystrokes in
- * the same field within a short time form one undo step.
+ * The project document store, made by a factory so each test (and each workbench) has its own:
+ * one immutable Project replaced on every edit, with undo/redo of document edits (zundo).
+ * Keystrokes in the same field within a short time form one undo step. The store knows nothing
+ * of storage or the solver: src/state/session.ts wires those to it. Edits reach it only through
+ * commit() (src/state/commit.ts), which validates them first.
  */
 import { temporal } from 'zundo';
 import { create } from 'zustand';
 import type { Project } from '../core/index.ts';
-import { browserStorage, readAutosave, writeAutosave } from './autosave.ts';
 import { demoProject } from './demoProject.ts';
 
 export interface ProjectState {
   project: Project;
   /** Replace the document. Edits sharing `mergeKey` within MERGE_WINDOW_MS make one undo step. */
   setProject(next: Project, mergeKey?: string): void;
+  /** Replace the document and forget the undo history (opening the autosave, another tab's copy). */
+  resetProject(next: Project): void;
 }
 
 export const MERGE_WINDOW_MS = 1200;
 export const UNDO_LIMIT = 200;
 
-let lastMerge: { key: string; at: number } | undefined;
-
-export const useProjectStore = create<ProjectState>()(
-  temporal(
-    (set, _get, api) => ({
-      project: readAutosave(browserStorage()) ?? demoProject,
-      setProject(next, mergeKey) {
-        const now = Date.now();
-        const merge =
-          mergeKey !== undefined &&
-          lastMerge?.key === mergeKey &&
-          now - lastMerge.at < MERGE_WINDOW_MS;
-        lastMerge = mergeKey === undefined ? undefined : { key: mergeKey, at: now };
-        if (!merge) {
+export function createProjectStore(initial: Project) {
+  let lastMerge: { key: string; at: number } | undefined;
+  const store = create<ProjectState>()(
+    temporal(
+      (set) => ({
+        project: initial,
+        setProject(next, mergeKey) {
+          const now = Date.now();
+          const merge =
+            mergeKey !== undefined &&
+            lastMerge?.key === mergeKey &&
+            now - lastMerge.at < MERGE_WINDOW_MS;
+          lastMerge = mergeKey === undefined ? undefined : { key: mergeKey, at: now };
+          if (!merge) {
+            set({ project: next });
+            return;
+          }
+          const history = store.temporal.getState();
+          history.pause();
           set({ project: next });
-          return;
-        }
-        const history = (api as unknown as typeof useProjectStore).temporal.getState();
-        history.pause();
-        set({ project: next });
-        history.resume();
+          history.resume();
+        },
+        resetProject(next) {
+          lastMerge = undefined;
+          const history = store.temporal.getState();
+          history.pause();
+          set({ project: next });
+          history.resume();
+          history.clear();
+        },
+      }),
+      {
+        partialize: (state) => ({ project: state.project }),
+        equality: (past, current) => past.project === current.project,
+        limit: UNDO_LIMIT,
       },
-    }),
-    {
-      partialize: (state) => ({ project: state.project }),
-      equality: (past, current) => past.project === current.project,
-      limit: UNDO_LIMIT,
-    },
-  ),
-);
+    ),
+  );
+  const history = () => {
+    lastMerge = undefined;
+    return store.temporal.getState();
+  };
+  return Object.assign(store, {
+    undo: () => history().undo(),
+    redo: () => history().redo(),
+  });
+}
 
-useProjectStore.subscribe((state, previous) => {
-  if (state.project !== previous.project) writeAutosave(browserStorage(), state.project);
-});
+export type ProjectStore = ReturnType<typeof createProjectStore>;
+
+/** The workbench's document. It starts as the demo; the session opens the autosave into it. */
+export const useProjectStore: ProjectStore = createProjectStore(demoProject);
 
 export function undo(): void {
-  lastMerge = undefined;
-  useProjectStore.temporal.getState().undo();
+  useProjectStore.undo();
 }
 
 export function redo(): void {
-  lastMerge = undefined;
-  useProjectStore.temporal.getState().redo();
+  useProjectStore.redo();
 }

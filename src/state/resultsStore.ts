@@ -17,10 +17,16 @@ export interface ResultsState {
   errorCause: 'design' | 'solver' | null;
 }
 
-export const useResultsStore = create<ResultsState>()(() => ({
-  results: null,
-  resultsProject: null,
-  stale: true,
-  error: null,
-  errorCause: null,
-}));
+export function createResultsStore() {
+  return create<ResultsState>()(() => ({
+    results: null,
+    resultsProject: null,
+    stale: true,
+    error: null,
+    errorCause: null,
+  }));
+}
+
+export type ResultsStore = ReturnType<typeof createResultsStore>;
+
+export const useResultsStore: ResultsStore = createResultsStore();

@@ -5,9 +5,10 @@
  * lives in the export menu.
  */
 import { useEffect } from 'react';
+import { appSession } from '../state/appSession.ts';
 import { setTitle } from '../state/projectEdits.ts';
 import { useProjectStore } from '../state/projectStore.ts';
-import { connectSolver } from '../worker/connectSolver.ts';
+import { useSessionStore } from '../state/sessionStore.ts';
 import { CautionsStrip } from './CautionsStrip.tsx';
 import { ExportMenu } from './export/ExportMenu.tsx';
 import { TextField } from './fields/TextField.tsx';
@@ -18,11 +19,12 @@ import { LoadsPanel } from './panels/LoadsPanel.tsx';
 import { SpanPanel } from './panels/SpanPanel.tsx';
 import { WirePanel } from './panels/WirePanel.tsx';
 import { ResultsPane } from './ResultsPane.tsx';
+import { SessionNotices } from './SessionNotices.tsx';
 import { Toolbar } from './Toolbar.tsx';
 
-function Inputs() {
+function Inputs({ locked }: { locked: boolean }) {
   return (
-    <section className="inputs" aria-label="Design inputs">
+    <section className="inputs" aria-label="Design inputs" inert={locked}>
       <SpanPanel />
       <WirePanel />
       <LoadsPanel />
@@ -33,22 +35,37 @@ function Inputs() {
   );
 }
 
+/** Coming back to this tab: another tab may have taken the project meanwhile. */
+function useOwnerCheck() {
+  useEffect(() => {
+    const check = () => document.visibilityState === 'visible' && appSession()?.checkOwner();
+    document.addEventListener('visibilitychange', check);
+    window.addEventListener('focus', check);
+    return () => {
+      document.removeEventListener('visibilitychange', check);
+      window.removeEventListener('focus', check);
+    };
+  }, []);
+}
+
 export function App() {
-  useEffect(() => connectSolver(), []);
+  useOwnerCheck();
   const title = useProjectStore((s) => s.project.title);
+  const locked = useSessionStore((s) => s.otherTabEditing);
   return (
     <div className="app">
       <header className="app-header">
         <h1>Sagwright</h1>
-        <div className="project-title">
+        <div className="project-title" inert={locked}>
           <TextField path="title" label="Project title" value={title} edit={setTitle} />
         </div>
         <Toolbar />
         <ExportMenu />
       </header>
       <CautionsStrip />
+      <SessionNotices />
       <main className="layout-split">
-        <Inputs />
+        <Inputs locked={locked} />
         <ResultsPane />
       </main>
     </div>

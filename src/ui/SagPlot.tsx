@@ -7,6 +7,7 @@ import { useId, useMemo, useRef } from 'react';
 import type { Project, ProjectResults } from '../core/index.ts';
 import type { UnitSystem } from '../core/units.ts';
 import { useResultsStore } from '../state/resultsStore.ts';
+import { documentRevision } from '../state/revision.ts';
 import { useUiStore } from '../state/uiStore.ts';
 import { show } from './format.ts';
 import { usePlotViewStore } from './plot/plotViewStore.ts';
@@ -89,7 +90,10 @@ export function SagPlot({ project, results }: { project: Project; results: Proje
   // A newer result is on its way: drawing this one would be wasted main-thread time.
   const newerPending = useResultsStore((s) => s.stale && s.error === null);
   const figure = useMemo(
-    () => buildSagFigure(project, results, units, { equalAspect, view }),
+    () => ({
+      ...buildSagFigure(project, results, units, { equalAspect, view }),
+      revision: documentRevision(project),
+    }),
     [project, results, units, equalAspect, view],
   );
   const state = usePlotlyDraw(containerRef, figure, newerPending);

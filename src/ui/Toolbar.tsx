@@ -1,7 +1,9 @@
 /** Header tools: undo/redo of document edits and the unit system. */
 import { useEffect } from 'react';
 import { useStore } from 'zustand';
-import { redo, undo, useProjectStore } from '../state/projectStore.ts';
+import { redoEdit as redo, undoEdit as undo } from '../state/commit.ts';
+import { useProjectStore } from '../state/projectStore.ts';
+import { useSessionStore } from '../state/sessionStore.ts';
 import { useUiStore } from '../state/uiStore.ts';
 
 function isTextEntry(target: EventTarget | null): boolean {
@@ -29,16 +31,17 @@ function useUndoKeys() {
 
 export function Toolbar() {
   useUndoKeys();
-  const canUndo = useStore(useProjectStore.temporal, (s) => s.pastStates.length > 0);
-  const canRedo = useStore(useProjectStore.temporal, (s) => s.futureStates.length > 0);
+  const locked = useSessionStore((s) => s.otherTabEditing);
+  const canUndo = useStore(useProjectStore.temporal, (s) => s.pastStates.length > 0) && !locked;
+  const canRedo = useStore(useProjectStore.temporal, (s) => s.futureStates.length > 0) && !locked;
   const units = useUiStore((s) => s.unitSystem);
   const setUnits = useUiStore((s) => s.setUnitSystem);
   return (
     <div className="toolbar" role="toolbar" aria-label="Workbench tools">
-      <button type="button" onClick={undo} disabled={!canUndo}>
+      <button type="button" onClick={() => undo()} disabled={!canUndo}>
         Undo
       </button>
-      <button type="button" onClick={redo} disabled={!canRedo}>
+      <button type="button" onClick={() => redo()} disabled={!canRedo}>
         Redo
       </button>
       <fieldset className="units">

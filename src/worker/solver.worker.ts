@@ -3,7 +3,7 @@
  * request's id, so the main thread can drop replies to requests it no longer wants.
  */
 import { solveProject, validateProject } from '../core/index.ts';
-import type { SolveReply, SolveRequest } from './protocol.ts';
+import type { SolveReply, SolveRequest, WorkerMessage } from './protocol.ts';
 
 function solve(request: SolveRequest): SolveReply {
   const checked = validateProject(request.project);
@@ -21,7 +21,18 @@ function solve(request: SolveRequest): SolveReply {
 
 const scope = globalThis as unknown as {
   onmessage: ((event: MessageEvent<SolveRequest>) => void) | null;
-  postMessage(reply: SolveReply): void;
+  postMessage(message: WorkerMessage): void;
+  navigator?: { locks?: { request(name: string, callback: () => Promise<void>): unknown } };
 };
 
 scope.onmessage = (event) => scope.postMessage(solve(event.data));
+
+// Held until this worker ends: its release is the main thread's signal that the worker is gone.
+const locks = scope.navigator?.locks;
+if (locks) {
+  const lock = `sagwright-solver-${Date.now()}-${Math.random().toString(36).slice(2)}`;
+  locks.request(lock, () => {
+    scope.postMessage({ alive: true, lock });
+    return new Promise<void>(() => {});
+  });
+}

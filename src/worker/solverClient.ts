@@ -5,7 +5,13 @@
  * the latest request sent again. Nothing here blocks: every call returns at once.
  */
 import type { Project, ProjectResults } from '../core/index.ts';
-import type { SolveReply, SolveRequest, WorkerLike } from './protocol.ts';
+import type {
+  LockWaiter,
+  SolveReply,
+  SolveRequest,
+  WorkerLike,
+  WorkerMessage,
+} from './protocol.ts';
 
 export type SolveOutcome =
   | { ok: true; results: ProjectResults; project: Project }
@@ -25,6 +31,13 @@ export interface SolverClientOptions {
   watchdogMs?: number;
   /** Restarts in a row without a reply before giving up on the request. */
   maxRestarts?: number;
+  /** Web Locks, to learn the moment a worker ends (default: the browser's navigator.locks). */
+  locks?: LockWaiter;
+}
+
+function browserLocks(): LockWaiter | undefined {
+  const nav = (globalThis as { navigator?: { locks?: LockWaiter } }).navigator;
+  return nav?.locks;
 }
 
 export class SolverClient {
@@ -49,8 +62,9 @@ export class SolverClient {
 
   dispose(): void {
     clearTimeout(this.watchdog);
-    this.worker?.terminate();
-    this.worker = undefined;
+    const worker = this.worker;
+    this.worker = undefined; // first, so its released lock is not taken for a death
+    worker?.terminate();
     this.inFlight = undefined;
     this.pending = undefined;
   }
@@ -58,7 +72,7 @@ export class SolverClient {
   private ensureWorker(): WorkerLike {
     if (this.worker) return this.worker;
     const worker = this.options.createWorker();
-    worker.onmessage = (event) => this.receive(event.data);
+    worker.onmessage = (event) => this.receiveMessage(worker, event.data);
     worker.onerror = (event) => {
       event.preventDefault?.();
       // A script that fails to load or start gives a bare Event; an uncaught error in the
@@ -81,6 +95,23 @@ export class SolverClient {
     this.watchdog = setTimeout(() => this.restart(`no answer within ${ms / 1000} s`), ms);
   }
 
+  private receiveMessage(worker: WorkerLike, message: WorkerMessage): void {
+    if ('alive' in message) this.watchExit(worker, message.lock);
+    else this.receive(message);
+  }
+
+  /** The worker's lock is granted to us only once the worker has ended: replace it then. */
+  private watchExit(worker: WorkerLike, lock: string): void {
+    const locks = this.options.locks ?? browserLocks();
+    locks
+      ?.request(lock, () => {
+        if (this.worker === worker) this.restart('the solver stopped without a word');
+      })
+      .catch(() => {
+        // locks unavailable here: the watchdog still notices a worker that never answers
+      });
+  }
+
   private receive(reply: SolveReply): void {
     const request = this.inFlight;
     if (!request || reply.id !== request.id) return;
@@ -101,8 +132,9 @@ export class SolverClient {
 
   private restart(reason: string): void {
     clearTimeout(this.watchdog);
-    this.worker?.terminate();
-    this.worker = undefined;
+    const worker = this.worker;
+    this.worker = undefined; // first, so its released lock is not taken for a death
+    worker?.terminate();
     const latest = this.pending ?? this.inFlight;
     this.inFlight = undefined;
     this.pending = undefined;

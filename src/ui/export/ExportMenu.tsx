@@ -6,6 +6,7 @@
 import { useEffect, useMemo, useRef, useState } from 'react';
 import './export.css';
 import { type OpenResult, PROJECT_FILE_EXTENSION } from '../../deliverables/projectFile.ts';
+import { commitOpened } from '../../state/commit.ts';
 import { useProjectStore } from '../../state/projectStore.ts';
 import { useUiStore } from '../../state/uiStore.ts';
 import { ClientView } from './ClientView.tsx';
@@ -45,7 +46,6 @@ function useMenuDismiss(
 
 export function ExportMenu() {
   const project = useProjectStore((s) => s.project);
-  const setProject = useProjectStore((s) => s.setProject);
   const units = useUiStore((s) => s.unitSystem);
   const [open, setOpen] = useState(false);
   const [dialog, setDialog] = useState<Dialog>('none');
@@ -105,7 +105,15 @@ export function ExportMenu() {
       });
       return;
     }
-    setProject(result.project);
+    const committed = commitOpened(result.project);
+    if (!committed.ok) {
+      setNotice({
+        kind: 'refused',
+        title: `${source} was not opened; your project is unchanged`,
+        issues: committed.issues,
+      });
+      return;
+    }
     setDialog('none');
     setNotice({ kind: 'status', text: `Opened “${result.project.title}”.` });
   };

@@ -1,12 +1,14 @@
 /**
- * Opening a share link: the shared project is shown, but the person's own autosaved work stays
- * in storage until they choose "Keep it". "Go back to mine" restores their project. A link
- * that does not validate changes nothing and says why.
+ * Opening a share link: the link is cleared from the address first (so a link that hurts the
+ * page cannot do so again on reload), the shared project is shown and the session's autosave is
+ * paused, so the person's own work stays stored until they choose "Keep it". "Go back to mine"
+ * restores their stored work. A link that does not validate changes nothing and says why.
  */
 import { useEffect, useState } from 'react';
 import type { Project, ValidationIssue } from '../../core/index.ts';
 import { hasSharedProject, openShareFragment } from '../../deliverables/shareLink.ts';
-import { AUTOSAVE_KEY, browserStorage, writeAutosave } from '../../state/autosave.ts';
+import { appSession } from '../../state/appSession.ts';
+import { commitOpened } from '../../state/commit.ts';
 import { useProjectStore } from '../../state/projectStore.ts';
 
 export type SharedState =
@@ -20,27 +22,33 @@ function clearFragment(): void {
 
 export function useSharedProject() {
   const [state, setState] = useState<SharedState>({ kind: 'none' });
-  const [own, setOwn] = useState<{ project: Project; stored: string | null } | null>(null);
+  const [own, setOwn] = useState<Project | null>(null);
 
   // On load, and when a link is pasted into a tab that already shows the app (only the
   // fragment changes, so the page does not reload).
   useEffect(() => {
     const openFromHash = () => {
       if (!hasSharedProject(location.hash)) return;
-      const opened = openShareFragment(location.hash);
+      const hash = location.hash;
+      clearFragment();
+      const opened = openShareFragment(hash);
       if (!opened.ok) {
         setState({ kind: 'refused', issues: opened.issues });
-        clearFragment();
+        // Writing was paused at start for the link; nothing of it is shown, so carry on.
+        appSession()?.resume();
         return;
       }
       // Taken before the shared project replaces it. A second link while viewing the first
       // keeps the person's own work, not the first link.
-      const mine = {
-        project: useProjectStore.getState().project,
-        stored: browserStorage()?.getItem(AUTOSAVE_KEY) ?? null,
-      };
+      const mine = useProjectStore.getState().project;
+      appSession()?.pause();
+      const committed = commitOpened(opened.project);
+      if (!committed.ok) {
+        setState({ kind: 'refused', issues: committed.issues });
+        appSession()?.resume();
+        return;
+      }
       setOwn((previous) => previous ?? mine);
-      useProjectStore.getState().setProject(opened.project);
       setState({ kind: 'viewing', title: opened.project.title });
     };
     openFromHash();
@@ -48,34 +56,15 @@ export function useSharedProject() {
     return () => window.removeEventListener('hashchange', openFromHash);
   }, []);
 
-  // While viewing, every autosave of the shared project is put back to the person's own work.
-  useEffect(() => {
-    if (state.kind !== 'viewing' || !own) return;
-    const restore = () => {
-      try {
-        if (own.stored === null) localStorage.removeItem(AUTOSAVE_KEY);
-        else localStorage.setItem(AUTOSAVE_KEY, own.stored);
-      } catch {
-        // storage blocked: nothing was autosaved either
-      }
-    };
-    restore();
-    return useProjectStore.subscribe(restore);
-  }, [state, own]);
-
   const keep = () => {
-    writeAutosave(browserStorage(), useProjectStore.getState().project);
-    clearFragment();
+    appSession()?.resume();
     setOwn(null);
     setState({ kind: 'none' });
   };
   const goBack = () => {
-    if (own) {
-      setState({ kind: 'none' });
-      useProjectStore.getState().setProject(own.project);
-      setOwn(null);
-    }
-    clearFragment();
+    setState({ kind: 'none' });
+    if (own) appSession()?.restoreStored(own);
+    setOwn(null);
   };
   const dismiss = () => setState({ kind: 'none' });
   return { state, keep, goBack, dismiss };

@@ -1,12 +1,6 @@
 /** A checkbox and a drop-down for document values that cannot be mistyped. */
 import { useId } from 'react';
-import { useProjectStore } from '../../state/projectStore.ts';
-import type { Edit } from './useDocumentEdit.ts';
-
-function commit(edit: Edit): void {
-  const { project, setProject } = useProjectStore.getState();
-  setProject(edit(project));
-}
+import { type CommitOptions, commit, commitAction, type Edit } from '../../state/commit.ts';
 
 export function CheckField(props: {
   label: string;
@@ -60,7 +54,10 @@ export function SelectField<T extends string>(props: {
   );
 }
 
-/** Apply an edit to the document directly (buttons: add, remove, duplicate). */
-export function applyEdit(edit: Edit): void {
-  commit(edit);
+/**
+ * A button's edit (add, remove, duplicate): validated like any other; what it carries along or
+ * why it was refused is told in the edit notice. `what` is the button's own words.
+ */
+export function applyEdit(edit: Edit, what: string, options: CommitOptions = {}): void {
+  commitAction(edit, { what, ...options });
 }

@@ -1,13 +1,13 @@
 /**
- * Checks a proposed edit against the project rules before it reaches the document: the edit
- * is applied to a copy, the copy is validated, and only a valid copy is committed. A refusal
- * comes back as a message naming the rule (bounds shown in the field's display units).
+ * Checks a proposed edit from a field before it reaches the document, through the one commit
+ * function (src/state/commit.ts): only a valid document is committed. A refusal comes back as a
+ * message naming the rule (bounds shown in the field's display units).
  */
-import { type Project, type ValidationIssue, validateProject } from '../../core/index.ts';
+import type { ValidationIssue } from '../../core/index.ts';
 import { fromSi, type Quantity, type UnitSystem, unitSymbol } from '../../core/units.ts';
-import { useProjectStore } from '../../state/projectStore.ts';
+import { commit, type Edit } from '../../state/commit.ts';
 
-export type Edit = (project: Project) => Project;
+export type { Edit };
 
 const BOUND = /(at least|at most|greater than|less than) (-?\d+(?:\.\d+)?(?:e[-+]?\d+)?)/;
 
@@ -21,7 +21,9 @@ export function localiseRule(message: string, quantity: Quantity, units: UnitSys
 }
 
 function describeElsewhere(issue: ValidationIssue): string {
-  return `this would make ${issue.path} invalid: it ${issue.message}`;
+  return issue.path
+    ? `this would make ${issue.path} invalid: it ${issue.message}`
+    : `not changed: ${issue.message}`;
 }
 
 /**
@@ -34,14 +36,9 @@ export function tryEdit(
   quantity: Quantity,
   units: UnitSystem,
 ): string | null {
-  const { project, setProject } = useProjectStore.getState();
-  const candidate = edit(project);
-  const checked = validateProject(candidate);
-  if (checked.ok) {
-    setProject(candidate, path);
-    return null;
-  }
-  const own = checked.issues.find((issue) => issue.path === path);
+  const outcome = commit(edit, { mergeKey: path });
+  if (outcome.ok) return null;
+  const own = outcome.issues.find((issue) => issue.path === path);
   if (own) return localiseRule(own.message, quantity, units);
-  return describeElsewhere(checked.issues[0]);
+  return describeElsewhere(outcome.issues[0]);
 }

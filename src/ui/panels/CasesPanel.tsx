@@ -84,14 +84,14 @@ export function CasesPanel() {
                   <button
                     type="button"
                     aria-label={`Duplicate ${name}`}
-                    onClick={() => applyEdit(edits.duplicateCase(i))}
+                    onClick={() => applyEdit(edits.duplicateCase(i), `Duplicate ${name}`)}
                   >
                     Copy
                   </button>
                   <button
                     type="button"
                     aria-label={`Delete ${name}`}
-                    onClick={() => applyEdit(edits.removeCase(i))}
+                    onClick={() => applyEdit(edits.removeCase(i), `Delete ${name}`)}
                   >
                     Delete
                   </button>
@@ -101,7 +101,7 @@ export function CasesPanel() {
           })}
         </tbody>
       </table>
-      <button type="button" onClick={() => applyEdit(edits.addCase())}>
+      <button type="button" onClick={() => applyEdit(edits.addCase(), 'Add a weather case')}>
         Add a weather case
       </button>
     </section>

@@ -2,7 +2,13 @@
  * Installation: the day's temperature, whether the loads are hung, and what is set on the day
  * (horizontal tension, largest tension, sag or cut length), optionally stated in another case.
  */
-import type { InstallationTarget, Project, ProjectResults } from '../../core/index.ts';
+import {
+  caseResultId,
+  INSTALLATION_ID,
+  type InstallationTarget,
+  type Project,
+  type ProjectResults,
+} from '../../core/index.ts';
 import type { Quantity } from '../../core/units.ts';
 import * as edits from '../../state/projectEdits.ts';
 import { useProjectStore } from '../../state/projectStore.ts';
@@ -25,8 +31,10 @@ function kindOf(target: InstallationTarget): TargetKind {
 
 /** A new target of another kind starts at what the current design gives, so nothing jumps. */
 function startingValue(kind: TargetKind, project: Project, results: ProjectResults | null): number {
+  const stated = project.installation.target.case;
+  const index = stated === undefined ? -1 : project.cases.findIndex((c) => c.name === stated);
   const state = results?.cases.find(
-    (c) => c.name === (project.installation.target.case ?? 'Installation'),
+    (c) => c.id === (index < 0 ? INSTALLATION_ID : caseResultId(index)),
   );
   const span = project.supports[project.supports.length - 1].x - project.supports[0].x;
   if (kind === 'unstressedLength') return results?.unstressedLength ?? span;

@@ -101,7 +101,7 @@ function LoadRow({ load, index }: { load: Load; index: number }) {
       ) : (
         <UniformRow load={load} index={index} />
       )}
-      <button type="button" onClick={() => applyEdit(edits.removeLoad(index))}>
+      <button type="button" onClick={() => applyEdit(edits.removeLoad(index), `Remove ${name}`)}>
         Remove {name}
       </button>
     </Row>
@@ -119,10 +119,13 @@ export function LoadsPanel() {
         <LoadRow key={index} load={load} index={index} />
       ))}
       <div className="actions">
-        <button type="button" onClick={() => applyEdit(edits.addLoad('point'))}>
+        <button type="button" onClick={() => applyEdit(edits.addLoad('point'), 'Add a point load')}>
           Add a point load
         </button>
-        <button type="button" onClick={() => applyEdit(edits.addLoad('uniform'))}>
+        <button
+          type="button"
+          onClick={() => applyEdit(edits.addLoad('uniform'), 'Add a part-span load')}
+        >
           Add a part-span load
         </button>
       </div>

@@ -61,14 +61,22 @@ function Supports({ project }: { project: Project }) {
               />
             )}
             {count > 2 && (
-              <button type="button" onClick={() => applyEdit(edits.removeSupport(i))}>
+              <button
+                type="button"
+                onClick={() =>
+                  applyEdit(edits.removeSupport(i), `Remove ${name}`, { removedSupport: i })
+                }
+              >
                 Remove {name}
               </button>
             )}
           </Row>
         );
       })}
-      <button type="button" onClick={() => applyEdit(edits.addSupport())}>
+      <button
+        type="button"
+        onClick={() => applyEdit(edits.addSupport(), 'Add a fixing at the far end')}
+      >
         Add a fixing at the far end
       </button>
     </fieldset>
@@ -100,12 +108,15 @@ function Ground({ project }: { project: Project }) {
             value={point.z}
             edit={(z) => edits.patchGround(i, { z })}
           />
-          <button type="button" onClick={() => applyEdit(edits.removeGroundPoint(i))}>
+          <button
+            type="button"
+            onClick={() => applyEdit(edits.removeGroundPoint(i), `Remove ground point ${i + 1}`)}
+          >
             Remove ground point {i + 1}
           </button>
         </Row>
       ))}
-      <button type="button" onClick={() => applyEdit(edits.addGroundPoint())}>
+      <button type="button" onClick={() => applyEdit(edits.addGroundPoint(), 'Add a ground point')}>
         Add a ground point
       </button>
     </fieldset>
@@ -154,13 +165,13 @@ function Zones({ project }: { project: Project }) {
               value={zone.height}
               edit={(height) => edits.patchZone(i, { height })}
             />
-            <button type="button" onClick={() => applyEdit(edits.removeZone(i))}>
+            <button type="button" onClick={() => applyEdit(edits.removeZone(i), `Remove ${name}`)}>
               Remove {name}
             </button>
           </Row>
         );
       })}
-      <button type="button" onClick={() => applyEdit(edits.addZone())}>
+      <button type="button" onClick={() => applyEdit(edits.addZone(), 'Add a clearance zone')}>
         Add a clearance zone
       </button>
     </fieldset>

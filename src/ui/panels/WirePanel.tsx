@@ -56,7 +56,7 @@ function CataloguePicker({ selectedId }: { selectedId: string }) {
         id={listId}
         size={6}
         value={selectedId}
-        onChange={(event) => applyEdit(setWire({ catalogId: event.target.value }))}
+        onChange={(event) => applyEdit(setWire({ catalogId: event.target.value }), 'Choose a wire')}
       >
         {found.map((wire) => (
           <option key={wire.id} value={wire.id}>
@@ -133,7 +133,7 @@ export function WirePanel() {
             type="radio"
             name="wire-source"
             checked={isCatalogue}
-            onChange={() => applyEdit(setWire({ catalogId: firstWire.id }))}
+            onChange={() => applyEdit(setWire({ catalogId: firstWire.id }), 'Use a catalogue wire')}
           />
           From the catalogue
         </label>
@@ -142,7 +142,9 @@ export function WirePanel() {
             type="radio"
             name="wire-source"
             checked={!isCatalogue}
-            onChange={() => resolved && applyEdit(setWire(toCustom(resolved)))}
+            onChange={() =>
+              resolved && applyEdit(setWire(toCustom(resolved)), 'Use my own wire values')
+            }
           />
           My own values
         </label>

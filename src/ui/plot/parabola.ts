@@ -10,6 +10,7 @@ import {
   type Project,
   resolveWire,
   type WeatherCase,
+  weatherCaseOfId,
 } from '../../core/index.ts';
 import { type CaseLoads, caseLoads, loadStateOfCase } from '../../core/loads.ts';
 
@@ -34,9 +35,12 @@ function spanMoment(loads: CaseLoads, span: SpanEnds, x: number): number {
   const w = loads.wireWeightNPerM;
   let reactionMoment = (w * length * length) / 2; // Σ load × lever arm to b, times R_a L
   let loadMoment = (w * (x - a) ** 2) / 2;
+  // Ice on a hung cable acts per metre of cable: per horizontal metre × the chord's ds/dx.
+  const chordArcRatio = Math.hypot(1, (span.zb - span.za) / length);
   for (const u of loads.uniform) {
-    reactionMoment += uniformMomentPart(b, a, u.from, u.to, u.verticalNPerM);
-    loadMoment += uniformMomentPart(x, a, u.from, u.to, u.verticalNPerM);
+    const q = u.verticalNPerM + u.iceNPerM * chordArcRatio;
+    reactionMoment += uniformMomentPart(b, a, u.from, u.to, q);
+    loadMoment += uniformMomentPart(x, a, u.from, u.to, q);
   }
   for (const p of loads.points) {
     if (p.x <= a || p.x >= b) continue;
@@ -47,7 +51,8 @@ function spanMoment(loads: CaseLoads, span: SpanEnds, x: number): number {
 }
 
 function weatherOf(project: Project, result: CaseResult): WeatherCase {
-  const found = project.cases.find((c) => c.name === result.name);
+  // By identity, never by name: a case may be named like the installation state.
+  const found = weatherCaseOfId(project.cases, result.id);
   if (found) return found;
   const inst = project.installation;
   return {

@@ -19,7 +19,7 @@ function swingTrace(result: CaseResult, index: number, units: UnitSystem): Data 
     type: 'scatter',
     mode: 'lines',
     name: result.name,
-    legendgroup: result.name,
+    legendgroup: result.id,
     x: profile.x.map(len),
     y: profile.y.map(len),
     customdata: profile.tension.map((t) => fromSi(t, 'force', units)),

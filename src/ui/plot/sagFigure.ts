@@ -25,6 +25,8 @@ export interface SagFigureOptions {
 }
 
 export interface ParabolaComparison {
+  /** The compared state's identity (CaseResult.id); caseName is its label. */
+  caseId: string;
   caseName: string;
   /** Largest vertical distance between the FE wire and the parabola, m. */
   differenceM: number;
@@ -56,7 +58,7 @@ function caseTraces(
     type: 'scatter',
     mode: 'lines',
     name: result.name,
-    legendgroup: result.name,
+    legendgroup: result.id,
     x: profile.x.map(len),
     y: profile.z.map(len),
     customdata,
@@ -71,7 +73,7 @@ function caseTraces(
     type: 'scatter',
     mode: 'lines',
     name: `${result.name} — parabola`,
-    legendgroup: result.name,
+    legendgroup: result.id,
     showlegend: false,
     x: profile.x.map(len),
     y: parabola.map(len),
@@ -146,7 +148,7 @@ export function buildSagFigure(
     const traces = options.showParabola === false ? drawn.traces.slice(0, 1) : drawn.traces;
     data.push(...traces);
     if (drawn.traces.length > 1 && (!parabola || drawn.differenceM > parabola.differenceM))
-      parabola = { caseName: result.name, differenceM: drawn.differenceM };
+      parabola = { caseId: result.id, caseName: result.name, differenceM: drawn.differenceM };
   });
   data.push(supportTrace(project, unitSystem));
   const layout: Partial<Layout> = {

@@ -3,7 +3,8 @@
  * drawn at the next animation frame; figures arriving in a burst (typing) wait until the burst
  * pauses (drawPolicy.ts); a figure that a newer result is about to replace is not drawn at all.
  * The last drawing stays meanwhile. Each draw is recorded as the performance measure
- * "sagwright:plot-draw" (its main-thread time), for measurement, never for assertions.
+ * "sagwright:plot-draw" (its main-thread time) with the document version drawn, for
+ * measurement, never for assertions.
  */
 
 import type { Config, Data, Layout } from 'plotly.js';
@@ -16,6 +17,8 @@ export type PlotState = 'loading' | 'drawn' | 'failed';
 export interface DrawableFigure {
   data: Data[];
   layout: Partial<Layout>;
+  /** The document version drawn, recorded with the draw measure. */
+  revision?: number;
 }
 
 export const PLOT_DRAW_MEASURE = 'sagwright:plot-draw';
@@ -69,7 +72,11 @@ export function usePlotlyDraw(
         setState('failed');
         return;
       }
-      performance.measure(PLOT_DRAW_MEASURE, { start, end: performance.now() });
+      performance.measure(PLOT_DRAW_MEASURE, {
+        start,
+        end: performance.now(),
+        detail: { revision: figure.revision },
+      });
       drawn.current = figure;
       firstUndrawnAt.current = null;
       done.then(

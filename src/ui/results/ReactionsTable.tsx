@@ -30,7 +30,7 @@ export function ReactionsTable({ results }: { results: ProjectResults }) {
             {results.cases.flatMap((result) =>
               result.supports.map((reaction, i) => (
                 // biome-ignore lint/suspicious/noArrayIndexKey: one row per fixing, in order
-                <tr key={`${result.name}-${i}`}>
+                <tr key={`${result.id}-${i}`}>
                   {i === 0 && (
                     <th scope="rowgroup" rowSpan={result.supports.length}>
                       {result.name}

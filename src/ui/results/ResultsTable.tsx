@@ -15,8 +15,8 @@ function Verdict({ result }: { result: CaseResult }) {
 
 function governs(result: CaseResult, results: ProjectResults): string[] {
   const marks: string[] = [];
-  if (results.governing.tension === result.name) marks.push('governs tension');
-  if (results.governing.clearance === result.name) marks.push('governs clearance');
+  if (results.governingIds.tension === result.id) marks.push('governs tension');
+  if (results.governingIds.clearance === result.id) marks.push('governs clearance');
   return marks;
 }
 
@@ -50,7 +50,7 @@ export function ResultsTable({ results }: { results: ProjectResults }) {
               )
               .join('; ');
             return (
-              <tr key={result.name} className={marks.length ? 'governing' : undefined}>
+              <tr key={result.id} className={marks.length ? 'governing' : undefined}>
                 <th scope="row">
                   {result.name}
                   <span className="case-meta">

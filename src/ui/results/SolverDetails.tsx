@@ -29,7 +29,7 @@ export function SolverDetails({ results }: { results: ProjectResults }) {
         </thead>
         <tbody>
           {results.cases.map((result) => (
-            <tr key={result.name}>
+            <tr key={result.id}>
               <th scope="row">{result.name}</th>
               <td>{result.iterations}</td>
               <td>{result.discretisationError.toExponential(1)}</td>

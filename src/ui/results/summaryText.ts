@@ -7,9 +7,9 @@ import type { UnitSystem } from '../../core/units.ts';
 import { percent, show, showForceShort } from '../format.ts';
 
 export function summaryText(results: ProjectResults, units: UnitSystem): string {
-  const byName = (name: string) => results.cases.find((c) => c.name === name);
-  const clearanceCase = byName(results.governing.clearance);
-  const tensionCase = byName(results.governing.tension);
+  const byId = (id: string) => results.cases.find((c) => c.id === id);
+  const clearanceCase = byId(results.governingIds.clearance);
+  const tensionCase = byId(results.governingIds.tension);
   const parts: string[] = [];
   if (clearanceCase)
     parts.push(

@@ -1,0 +1,177 @@
+/**
+ * The built app in headless Chromium (measured, never asserted):
+ * (a) page weight: the JS and CSS the page fetches until the first sag plot is drawn, gzip
+ *     sizes of those files in dist/ (level 9, as the build reports them);
+ * (b) edit to plot: the installation temperature is edited once after each drawing settles;
+ *     from the input event to the end of the plot draw for that edit, split into waiting for
+ *     the result (solve, messages) and drawing (React, frame wait, Plotly);
+ * (c) a continuous edit, one new value every 33 ms (a drag on a touch screen): drawings per
+ *     second and that the drawings follow the edits in order and end on the last one.
+ * Needs `npm run build` first. The page is served by `vite preview` on BENCH_PORT (default 4399).
+ */
+import { existsSync, readFileSync } from 'node:fs';
+import { gzipSync } from 'node:zlib';
+import { chromium, type Page } from '@playwright/test';
+import { preview } from 'vite';
+import { benchPageScript, type PageLog } from './pageLog.ts';
+
+const EDITS = 40;
+const DRAG_STEPS = 60;
+const DRAG_STEP_MS = 33;
+const FIELD = 'Temperature on the day (°C)';
+
+export interface BrowserFigures {
+  weight: { file: string; gzipBytes: number }[];
+  edits: { totalMs: number; waitMs: number; drawMs: number; plotlyMs: number }[];
+  drag: { edits: number; draws: number; seconds: number; inOrder: boolean; lastShown: boolean };
+}
+
+function gzipSize(path: string): number {
+  return gzipSync(readFileSync(path), { level: 9 }).length;
+}
+
+async function pageWeight(page: Page, port: number): Promise<BrowserFigures['weight']> {
+  const fetched = new Set<string>();
+  page.on('request', (request) => {
+    const url = new URL(request.url());
+    if (url.port === String(port) && /\.(js|css)$/.test(url.pathname)) fetched.add(url.pathname);
+  });
+  await page.goto(`http://localhost:${port}/`);
+  await page.locator('figure[data-plot-state="drawn"]').waitFor({ timeout: 60_000 });
+  return [...fetched].sort().map((file) => ({ file, gzipBytes: gzipSize(`dist${file}`) }));
+}
+
+const log = (page: Page) =>
+  page.evaluate(() => ({ ...(window as unknown as { benchLog: PageLog }).benchLog }));
+
+async function editOnce(page: Page, value: string): Promise<BrowserFigures['edits'][number]> {
+  const before = (await log(page)).edits.length;
+  await page.getByLabel(FIELD, { exact: true }).fill(value);
+  await page.waitForFunction(
+    (count) => {
+      const l = (window as unknown as { benchLog: PageLog }).benchLog;
+      const edit = l.edits[count];
+      return edit !== undefined && l.draws.some((d) => d.revision === edit.revision);
+    },
+    before,
+    { timeout: 30_000 },
+  );
+  const l = await log(page);
+  const edit = l.edits[before];
+  const input = l.inputs.filter((t) => t <= edit.at).at(-1) ?? edit.at;
+  const result = l.results.find((r) => r.revision === edit.revision);
+  const draw = l.draws.find((d) => d.revision === edit.revision);
+  if (!result || !draw) throw new Error('an edit was not drawn');
+  return {
+    totalMs: draw.end - input,
+    waitMs: result.at - input,
+    drawMs: draw.end - result.at,
+    plotlyMs: draw.end - draw.start,
+  };
+}
+
+/** One new value every DRAG_STEP_MS, set inside the page so the timing is the page's own. */
+async function continuousEdit(page: Page): Promise<BrowserFigures['drag']> {
+  const start = (await log(page)).edits.length;
+  const startDraws = (await log(page)).draws.length;
+  await page.evaluate(
+    ({ label, steps, stepMs }) =>
+      new Promise<void>((resolve) => {
+        const input = [...document.querySelectorAll('input')].find(
+          (el) => el.labels?.[0]?.textContent?.includes(label) ?? false,
+        );
+        if (!input) throw new Error(`no field ${label}`);
+        const setter = Object.getOwnPropertyDescriptor(HTMLInputElement.prototype, 'value')?.set;
+        let step = 0;
+        const timer = setInterval(() => {
+          setter?.call(input, (5 + step * 0.25).toFixed(2));
+          input.dispatchEvent(new Event('input', { bubbles: true }));
+          step += 1;
+          if (step === steps) {
+            clearInterval(timer);
+            resolve();
+          }
+        }, stepMs);
+      }),
+    { label: FIELD, steps: DRAG_STEPS, stepMs: DRAG_STEP_MS },
+  );
+  await page.waitForTimeout(1500);
+  const l = await log(page);
+  const edits = l.edits.slice(start);
+  const draws = l.draws.slice(startDraws);
+  const seconds = (DRAG_STEPS * DRAG_STEP_MS) / 1000;
+  const revisions = draws.map((d) => d.revision);
+  return {
+    edits: edits.length,
+    draws: draws.filter((d) => d.end <= edits[edits.length - 1].at + 100).length,
+    seconds,
+    inOrder: revisions.every((r, i) => i === 0 || r > revisions[i - 1]),
+    lastShown: revisions.at(-1) === edits.at(-1)?.revision,
+  };
+}
+
+const quantile = (values: number[], q: number) => {
+  const sorted = [...values].sort((a, b) => a - b);
+  return sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))];
+};
+
+export async function measureBrowser(port: number): Promise<BrowserFigures> {
+  const server = await preview({
+    logLevel: 'silent',
+    preview: { port, strictPort: true, host: 'localhost' },
+  });
+  const browser = await chromium.launch({
+    executablePath: existsSync('/usr/bin/chromium') ? '/usr/bin/chromium' : undefined,
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-background-networking',
+      '--disable-component-update',
+    ],
+  });
+  try {
+    const context = await browser.newContext({ viewport: { width: 1366, height: 768 } });
+    // tsx keeps function names with a __name helper that the page does not have.
+    await context.addInitScript({ content: `var __name = (f) => f; (${benchPageScript})();` });
+    const page = await context.newPage();
+    const weight = await pageWeight(page, port);
+    await page.waitForTimeout(1000);
+    const edits: BrowserFigures['edits'] = [];
+    for (let i = 0; i < EDITS; i++) {
+      edits.push(await editOnce(page, (12 + (i % 16) * 0.5).toFixed(1)));
+      await page.waitForTimeout(150);
+    }
+    const drag = await continuousEdit(page);
+    return { weight, edits, drag };
+  } finally {
+    await browser.close();
+    await new Promise<void>((resolve) => server.httpServer.close(() => resolve()));
+  }
+}
+
+/** The figures as Markdown lines. */
+export function browserLines(figures: BrowserFigures): string[] {
+  const kb = (bytes: number) => (bytes / 1024).toFixed(1);
+  const total = figures.weight.reduce((sum, f) => sum + f.gzipBytes, 0);
+  const e = figures.edits;
+  const row = (name: string, pick: (x: (typeof e)[number]) => number) =>
+    `| ${name} | ${quantile(e.map(pick), 0.5).toFixed(1)} | ${quantile(e.map(pick), 0.95).toFixed(1)} |`;
+  const d = figures.drag;
+  return [
+    `| JS + CSS fetched until the first plot (gzip) | KB |`,
+    '|---|---:|',
+    ...figures.weight.map((f) => `| ${f.file} | ${kb(f.gzipBytes)} |`),
+    `| **total** (goal ≤ 450) | **${kb(total)}** |`,
+    '',
+    `| edit to plot, ${e.length} edits of "${FIELD}" at 1366×768 (ms) | p50 | p95 |`,
+    '|---|---:|---:|',
+    row('**input event → plot drawn** (goal p95 ≤ 50)', (x) => x.totalMs),
+    row('waiting for the result (store, worker solve, reply)', (x) => x.waitMs),
+    row('drawing (React, next frame, Plotly)', (x) => x.drawMs),
+    row('of which the Plotly call', (x) => x.plotlyMs),
+    '',
+    `Continuous edit, one value every ${DRAG_STEP_MS} ms for ${d.seconds.toFixed(1)} s: ${d.edits} edits, ` +
+      `${d.draws} plot drawings (${(d.draws / d.seconds).toFixed(1)} per second, goal ≥ 30); ` +
+      `drawings in edit order: ${d.inOrder ? 'yes' : 'NO'}; last edit shown: ${d.lastShown ? 'yes' : 'NO'}.`,
+  ];
+}

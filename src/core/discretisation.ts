@@ -1,0 +1,86 @@
+/**
+ * Discretisation error estimate: the project is solved again on a nested mesh with every element
+ * split in two (always a different mesh) at the same installation tension, and for each case
+ * e ≈ max over f ∈ {H, T_max, sag} of |f_h − f_{h/2}| / |f_{h/2}| · 2²/(2² − 1)
+ * (Richardson, order 2: the error of the coarser, reported mesh). Relative, dimensionless.
+ */
+import { largestSag, largestStateTension } from './caseChecks.ts';
+import { loadStateOfCase } from './loads.ts';
+import { buildProjectModel, type ProjectModel } from './projectModel.ts';
+import { type StateSolution, solveChangeOfState, solveInstallation } from './states.ts';
+
+/** The relative error the automatic refinement aims below. */
+export const ERROR_TARGET = 1e-4;
+/** Convergence order of the string FE quantities (tests confirm 2 for the exact theory). */
+const ORDER = 2;
+const RICHARDSON = 2 ** ORDER / (2 ** ORDER - 1);
+
+export interface StateSummary {
+  horizontalTension: number;
+  /** Each span's horizontal tension, N: the refined mesh's starting values. */
+  spanTensions: number[];
+  maxTension: number;
+  sag: number;
+}
+
+export function summarise(state: StateSolution): StateSummary {
+  return {
+    horizontalTension: Math.max(...state.spans.map((s) => s.tensionN)),
+    spanTensions: state.spans.map((s) => s.tensionN),
+    maxTension: largestStateTension(state.spans),
+    sag: largestSag(state.spans),
+  };
+}
+
+/** Every state of a model at installation tension H, summarised; in case order. */
+export function summariseStates(
+  model: ProjectModel,
+  tensionN: number,
+  caseTensionGuesses: readonly (readonly number[])[],
+): StateSummary[] {
+  const installed = solveInstallation(model, tensionN);
+  const installedTensions = installed.spans.map((s) => s.tensionN);
+  const out = [summarise(installed)];
+  for (const [i, weather] of model.project.cases.entries()) {
+    const state = solveChangeOfState(
+      model,
+      { ...loadStateOfCase(weather), name: weather.name },
+      installed.unstressed,
+      caseTensionGuesses[i] ?? installedTensions,
+    );
+    out.push(summarise(state));
+  }
+  return out;
+}
+
+function relative(coarse: number, fine: number): number {
+  const scale = Math.max(Math.abs(fine), 1e-300);
+  return Math.abs(coarse - fine) / scale;
+}
+
+/** Estimated relative error of `coarse` given the same quantities on the nested finer mesh. */
+export function estimatedError(coarse: StateSummary, fine: StateSummary): number {
+  const change = Math.max(
+    relative(coarse.horizontalTension, fine.horizontalTension),
+    relative(coarse.maxTension, fine.maxTension),
+    relative(coarse.sag, fine.sag),
+  );
+  // A change that cannot be measured (an unsolved state) is reported as 100 %, never NaN.
+  return Number.isFinite(change) ? RICHARDSON * change : 1;
+}
+
+/**
+ * Estimates for results solved on the mesh `refinement` of the project at installation tension H:
+ * one number per state (installation first), from the nested mesh 2 · refinement.
+ */
+export function estimateErrors(
+  model: ProjectModel,
+  refinement: number,
+  tensionN: number,
+  results: readonly StateSummary[],
+): number[] {
+  const fine = buildProjectModel(model.project, 2 * refinement);
+  const guesses = results.slice(1).map((r) => r.spanTensions);
+  const refined = summariseStates(fine, tensionN, guesses);
+  return results.map((r, i) => estimatedError(r, refined[i]));
+}

@@ -1,0 +1,53 @@
+/**
+ * The browser workbench's one session over the app's stores, started once by the entry point
+ * with the browser's storage, a BroadcastChannel between tabs and the solver worker.
+ */
+
+import type { WorkerLike } from '../worker/protocol.ts';
+import { SolverClient } from '../worker/solverClient.ts';
+import { browserStorage } from './autosave.ts';
+import { demoProject } from './demoProject.ts';
+import { useProjectStore } from './projectStore.ts';
+import { useResultsStore } from './resultsStore.ts';
+import { type ChannelLike, createSession, type Session } from './session.ts';
+import { useSessionStore } from './sessionStore.ts';
+import { applyOutcome } from './solverLink.ts';
+
+export const TAB_CHANNEL = 'sagwright:tabs';
+
+let current: Session | undefined;
+
+function tabChannel(): ChannelLike | undefined {
+  try {
+    return typeof BroadcastChannel === 'undefined'
+      ? undefined
+      : (new BroadcastChannel(TAB_CHANNEL) as unknown as ChannelLike);
+  } catch {
+    return undefined;
+  }
+}
+
+export function startAppSession(createWorker: () => WorkerLike, paused: boolean): Session {
+  current?.dispose();
+  const solver = new SolverClient({
+    createWorker,
+    onOutcome: (outcome) => applyOutcome(outcome, useProjectStore, useResultsStore),
+  });
+  current = createSession({
+    store: useProjectStore,
+    session: useSessionStore,
+    results: useResultsStore,
+    storage: browserStorage(),
+    fallback: demoProject,
+    channel: tabChannel(),
+    solver,
+    unloadTarget: typeof window === 'undefined' ? undefined : window,
+  });
+  current.start({ paused });
+  return current;
+}
+
+/** The running session, if the entry point has started one (tests of components may not). */
+export function appSession(): Session | undefined {
+  return current;
+}

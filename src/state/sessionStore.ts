@@ -1,0 +1,61 @@
+/**
+ * What the person must know about their work beyond the document itself: whether it is being
+ * saved in this browser, whether another tab is editing it, whether the stored copy had to be
+ * repaired on opening, and the outcome of the last edit that changed more than its own field.
+ * Written by the session (session.ts) and the commit function (commit.ts); read by the UI.
+ */
+import { create } from 'zustand';
+import type { ValidationIssue } from '../core/index.ts';
+
+export type SaveState =
+  /** The document on screen is the one stored. */
+  | { kind: 'saved' }
+  /** Not written on purpose (viewing a shared project); the person's own work stays stored. */
+  | { kind: 'paused' }
+  /** The browser refused the write: storage full, or storage switched off or blocked. */
+  | { kind: 'failed'; reason: 'full' | 'refused'; detail: string };
+
+/** The stored autosave could not be opened as it was; what was done about it. */
+export interface Recovery {
+  issues: ValidationIssue[];
+  changes: string[];
+  /** The stored text exactly as found, for download. */
+  original: string;
+  /** True when nothing could be kept and the demo opened instead. */
+  openedDemo: boolean;
+}
+
+/** The outcome of an edit that carried other items along, or was refused, in words. */
+export interface EditNotice {
+  kind: 'carried' | 'refused';
+  text: string;
+  details: string[];
+  /** Undo the carried edit in one step. */
+  undoable: boolean;
+}
+
+export interface SessionState {
+  save: SaveState;
+  /** Another tab holds the document for editing; this one shows it and may take over. */
+  otherTabEditing: boolean;
+  /** Edits made here that are not in storage (storage failed, or another tab took over). */
+  unsavedEdits: boolean;
+  recovery: Recovery | null;
+  editNotice: EditNotice | null;
+}
+
+export const initialSessionState: SessionState = {
+  save: { kind: 'saved' },
+  otherTabEditing: false,
+  unsavedEdits: false,
+  recovery: null,
+  editNotice: null,
+};
+
+export function createSessionStore() {
+  return create<SessionState>()(() => ({ ...initialSessionState }));
+}
+
+export type SessionStore = ReturnType<typeof createSessionStore>;
+
+export const useSessionStore: SessionStore = createSessionStore();
