@@ -11,9 +11,9 @@ export const ATTACHMENT_NAME: Readonly<Record<Attachment | 'end', string>> = {
 
 /** What each choice means, for the editor's list. */
 export const ATTACHMENT_CHOICE: Readonly<Record<Attachment, string>> = {
-  clamped: 'Clamped: each span keeps its own length of wire',
-  pulley: 'Pulley, sheave or smooth eye: the wire slides, same tension both sides',
-  swingLink: 'Swing link: clamped to a link that swings along the line, same horizontal pull',
+  clamped: 'Clamped (each span keeps its wire)',
+  pulley: 'Pulley or smooth eye (wire slides, same tension)',
+  swingLink: 'Swing link (same horizontal pull)',
 };
 
 /** The attachment of support i of a project: the two ends are end fixings. */

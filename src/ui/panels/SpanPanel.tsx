@@ -73,6 +73,14 @@ function Supports({ project }: { project: Project }) {
           </Row>
         );
       })}
+      {count > 2 && (
+        <p className="muted">
+          A fixing between spans holds the wire clamped (each span keeps its own length of wire),
+          over a pulley or smooth eye (the wire slides through: the same tension on both sides) or
+          on a swing link (a hanging link that swings along the line: the same horizontal pull on
+          both sides).
+        </p>
+      )}
       <button
         type="button"
         onClick={() => applyEdit(edits.addSupport(), 'Add a fixing at the far end')}
