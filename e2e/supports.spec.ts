@@ -32,6 +32,7 @@ function postRow(page: Page) {
 test('a version-1 file with a free post opens as a pulley and says its results changed', async ({
   page,
 }) => {
+  test.slow(); // opens a file and waits for two solves
   await page.goto('/');
   await openFile(page);
   const notice = page.getByRole('status', { name: 'Older file' });
@@ -45,6 +46,7 @@ test('a version-1 file with a free post opens as a pulley and says its results c
 });
 
 test('choosing how the post holds the wire changes its pull along the line', async ({ page }) => {
+  test.slow(); // opens a file, changes a fixing and waits for both solves
   await page.goto('/');
   await openFile(page);
   const row = postRow(page);
