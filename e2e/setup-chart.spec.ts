@@ -42,7 +42,7 @@ function expectedSi(row: SetUpRow): Shown {
     horizontalTension: fixed(0).format(row.horizontalTension),
     maxTension: fixed(0).format(row.maxTension),
     sag: fixed(3).format(row.sag),
-    returnTime: row.returnTime.toFixed(2),
+    returnTime: row.returnTime === null ? '—' : row.returnTime.toFixed(2),
   };
 }
 
@@ -52,7 +52,7 @@ function expectedImperial(row: SetUpRow): Shown {
     horizontalTension: fixed(0).format(row.horizontalTension / POUND_FORCE_N),
     maxTension: fixed(0).format(row.maxTension / POUND_FORCE_N),
     sag: fixed(3).format(row.sag / FOOT_M),
-    returnTime: row.returnTime.toFixed(2),
+    returnTime: row.returnTime === null ? '—' : row.returnTime.toFixed(2),
   };
 }
 
@@ -139,7 +139,7 @@ test('the PDF report carries the set-up chart after the case table', async ({ pa
       `${row.horizontalTension.toFixed(0)} N`,
       `${row.maxTension.toFixed(0)} N`,
       `${row.sag.toFixed(3)} m`,
-      `${row.returnTime.toFixed(2)} s`,
+      row.returnTime === null ? 'not valid' : `${row.returnTime.toFixed(2)} s`,
     ];
     expect(flat).toContain(cells.join(' '));
   }

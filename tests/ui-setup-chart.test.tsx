@@ -51,7 +51,9 @@ describe('set-up chart words and report table', () => {
       expect(cells[1]).toBe(`${(row.horizontalTension / lbf).toFixed(0)} lbf`);
       expect(cells[2]).toBe(`${(row.maxTension / lbf).toFixed(0)} lbf`);
       expect(cells[3]).toBe(`${(row.sag / 0.3048).toFixed(2)} ft`);
-      expect(cells[4]).toBe(`${row.returnTime.toFixed(2)} s`);
+      // The demo sets the wire with its lights hung: the pulse check does not hold.
+      expect(row.returnTime).toBeNull();
+      expect(cells[4]).toBe('not valid');
     });
     const marked = table.rows.filter((r) => r[0].includes('(installation)'));
     expect(marked.map((r) => r[0])).toEqual(['59°F (installation)']);
@@ -87,7 +89,7 @@ describe('set-up chart in the workbench', () => {
       row.horizontalTension.toFixed(0),
       row.maxTension.toFixed(0),
       row.sag.toFixed(3),
-      row.returnTime.toFixed(2),
+      '—',
     ]);
     expect(rows.filter((r) => r.textContent?.includes('installation temperature'))).toHaveLength(1);
   });

@@ -85,7 +85,7 @@ export function resultsTable(title: string, results: ProjectResults): string {
     n(r.horizontalTension, 0),
     n(r.maxTension, 0),
     n(r.sag, 3),
-    n(r.returnTime, 2),
+    r.returnTime === null ? 'n/a (loads hung)' : n(r.returnTime, 2),
   ]);
   lines.push(pad([['Temperature', 'H (N)', 'T max (N)', 'Sag (m)', 'Pulse return (s)'], ...setUp]));
   const mesh = results.mesh;

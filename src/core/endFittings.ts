@@ -25,7 +25,7 @@ export const END_FITTING_TYPES: readonly EndFittingType[] = [
     kind: 'ropeGrips',
     label: 'Wire rope grips',
     efficiency: 0.8,
-    source: 'EN 13411-5: grip terminations hold at least 80 % of the rope’s breaking force [M]',
+    source: 'EN 13411-5: grip terminations hold at least 80 % of the rope breaking force [M]',
   },
   {
     kind: 'ferruleEye',
@@ -56,7 +56,7 @@ export const END_FITTING_TYPES: readonly EndFittingType[] = [
     label: 'Machine-swaged terminal (1x19 strand)',
     efficiency: 1,
     source:
-      'swaged terminals on 1x19 strand commonly rated at the strand’s full breaking load [CP]',
+      'swaged terminals on 1x19 strand commonly rated at the full breaking load of the strand [CP]',
   },
 ];
 

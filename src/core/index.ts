@@ -2,6 +2,16 @@
 
 export { caseIndexOfId, caseResultId, INSTALLATION_ID, weatherCaseOfId } from './caseIds.ts';
 export { CAUTION_SUMMARY, CAUTIONS } from './cautions.ts';
+export { type DaySetting, type SagPosition, settingAt } from './design/daySetting.ts';
+export { type TensionWindow, tensionWindow, type WindowEnd } from './design/tensionWindow.ts';
+export { type WindowCurve, windowCurve, windowPosition } from './design/windowPosition.ts';
+export {
+  chooseWires,
+  SUGGESTION_RULE,
+  type WireChoice,
+  type WireFamily,
+  wireFamily,
+} from './design/wireChooser.ts';
 export {
   END_FITTING_KINDS,
   END_FITTING_TYPES,

@@ -281,8 +281,11 @@ export interface SetUpRow {
   maxTension: number;
   /** Sag of the reference span (the sag target's span, else the longest), m. */
   sag: number;
-  /** Time for a pulse to run to the far fixing and back once, s. */
-  returnTime: number;
+  /**
+   * Time for a pulse to run to the far fixing and back once, 2 ∫ ds / c (s); null when hung
+   * loads are on the wire while it is set (the pulse would reflect off them).
+   */
+  returnTime: number | null;
 }
 
 /** One end's fitting as the results state it (table entry, own value, or not stated). */

@@ -2,12 +2,13 @@
  * Set-up chart: what to set on the day. The wire is cut to the design length L₀ (at the
  * installation temperature t₀); tensioned at another temperature t with the installation loads
  * (no ice, no wind), pulled through as at installation (pulleys: equal tension; other supports:
- * equal horizontal tension), it shows the largest H, the sag and the largest tension of
- * L₀(1 + α(t − t₀)). Field check [CP, textbook string physics]: a pulse sent along
- * the wire returns after t_r = √(32 f / g) seconds for sag f (sag ≈ g t_r² / 32, one return).
+ * equal horizontal tension), it shows the largest span H, the sag and the largest tension of
+ * L₀(1 + α(t − t₀)). Field check: the pulse return time 2 ∫ ds / c of the reference
+ * span, c = √(T / μ) (fieldChecks.ts); null when hung loads are on the wire while it is set.
  */
 
-import { largestSpanSag, largestStateTension } from './caseChecks.ts';
+import { largestSpanSag, largestStateTension, type SolvedSpan } from './caseChecks.ts';
+import { fieldChecksHold, pulseReturnTime } from './fieldChecks.ts';
 import { solveSectionForLength } from './lengthCompatibility.ts';
 import type { SetUpRow } from './project.ts';
 import { type ProjectModel, prepareState, thermalFactor } from './projectModel.ts';
@@ -28,33 +29,77 @@ export function setUpTemperatures(model: ProjectModel): number[] {
   return temperatures.sort((a, b) => a - b);
 }
 
+export interface SetUpState {
+  spans: SolvedSpan[];
+  /** Horizontal tension of the first span, N (the next row's starting value). */
+  tensionN: number;
+  /** The largest span horizontal tension, N (every span's when no pulley makes them differ). */
+  largestTensionN: number;
+  solved: boolean;
+}
+
+/**
+ * The wire of cut lengths `unstressedSpans` (m, at t₀) pulled through as at installation at
+ * `temperature` (°C), installation loads, no ice or wind: pulleys keep the tension equal, every
+ * other support the horizontal tension. Leaves the span models in that state.
+ */
+export function solveSetUpState(
+  model: ProjectModel,
+  unstressedSpans: readonly number[],
+  temperature: number,
+  tensionGuessN: number,
+): SetUpState {
+  const total = unstressedSpans.reduce((a, b) => a + b, 0);
+  const wire = prepareState(model, { ...model.installation, temperature });
+  const solution = solveSectionForLength(
+    model.spans,
+    wire,
+    total * thermalFactor(model, temperature),
+    tensionGuessN,
+    model.installationJoints,
+  );
+  const spans = model.spans.map((span, j) => ({ span, tensionN: solution.spanTensionsN[j] }));
+  return {
+    spans,
+    tensionN: solution.tensionN,
+    largestTensionN: Math.max(...solution.spanTensionsN),
+    solved: solution.converged,
+  };
+}
+
+/** Pulse return time (s) of span `index` in a set-up state, or null when the check fails. */
+export function setUpReturnTime(
+  model: ProjectModel,
+  state: SetUpState,
+  index: number,
+  temperature: number,
+): number | null {
+  if (!fieldChecksHold(model.project)) return null;
+  const { span, tensionN } = state.spans[index];
+  return pulseReturnTime(span, tensionN, {
+    massPerLength: model.wire.massPerLength,
+    axialStiffness: model.wire.axialStiffness,
+    thermalFactor: thermalFactor(model, temperature),
+  });
+}
+
 export function setUpChart(
   model: ProjectModel,
   unstressedSpans: readonly number[],
   sagSpanIndex: number,
   installationTensionN: number,
 ): SetUpRow[] {
-  const total = unstressedSpans.reduce((a, b) => a + b, 0);
   let guess = installationTensionN;
   return setUpTemperatures(model).map((temperature) => {
-    const wire = prepareState(model, { ...model.installation, temperature });
-    const solution = solveSectionForLength(
-      model.spans,
-      wire,
-      total * thermalFactor(model, temperature),
-      guess,
-      model.installationJoints,
-    );
-    const spans = model.spans.map((span, j) => ({ span, tensionN: solution.spanTensionsN[j] }));
-    guess = solution.tensionN;
-    const sag = largestSpanSag(spans[sagSpanIndex]);
+    const state = solveSetUpState(model, unstressedSpans, temperature, guess);
+    guess = state.tensionN;
     return {
       temperature,
-      solved: solution.converged,
-      horizontalTension: Math.max(...solution.spanTensionsN),
-      maxTension: largestStateTension(spans),
-      sag,
-      returnTime: Math.sqrt((32 * sag) / model.env.gravity),
+      solved: state.solved,
+      horizontalTension: state.largestTensionN,
+      maxTension: largestStateTension(state.spans),
+      sag: largestSpanSag(state.spans[sagSpanIndex]),
+      returnTime: setUpReturnTime(model, state, sagSpanIndex, temperature),
     };
   });
 }

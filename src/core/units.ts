@@ -18,6 +18,7 @@ export type Quantity =
   | 'speed'
   | 'expansion'
   | 'ratio'
+  | 'area'
   | 'count';
 
 export interface DisplayUnit {
@@ -54,6 +55,7 @@ export const DISPLAY_UNITS: Record<UnitSystem, Record<Quantity, DisplayUnit>> = 
     speed: unit('m/s', 1),
     expansion: unit('×10⁻⁶ /K', 1e-6),
     ratio: unit('', 1),
+    area: unit('m²', 1),
     count: unit('', 1),
   },
   imperial: {
@@ -67,6 +69,7 @@ export const DISPLAY_UNITS: Record<UnitSystem, Record<Quantity, DisplayUnit>> = 
     speed: unit('mph', MILE_PER_HOUR_M_PER_S),
     expansion: unit('×10⁻⁶ /°F', 1e-6 * 1.8),
     ratio: unit('', 1),
+    area: unit('ft²', FOOT_M * FOOT_M),
     count: unit('', 1),
   },
 };

@@ -6,6 +6,12 @@
  */
 import type { jsPDF } from 'jspdf';
 import { CAUTION_SUMMARY, CAUTIONS, type Project, type ProjectResults } from '../core/index.ts';
+import {
+  DESIGN_HEADING,
+  type DesignReport,
+  settingParagraphs,
+  windowParagraphs,
+} from './designContent.ts';
 import { formatQuantity as fq, type UnitSystem } from './displayUnits.ts';
 import { ACCENT, MUTED, PdfWriter, pdfText, RULE } from './pdfWriter.ts';
 import {
@@ -49,6 +55,8 @@ export interface ReportOptions {
   /** Plot width : height. */
   plotAspect: number;
   parabola?: { caseName: string; differenceM: number } | null;
+  /** The tension window and today's setting; left out when not given. */
+  design?: DesignReport | null;
 }
 
 const PASS = [26, 122, 62] as const;
@@ -212,7 +220,22 @@ function setUpSection(
         isInstallationRow(project, results.setUpChart[row]) ? INSTALLATION_FILL : undefined,
     },
   );
-  w.paragraph(pulseCheck(span), 7.5);
+  w.paragraph(
+    pulseCheck(
+      span,
+      results.setUpChart.some((row) => row.returnTime !== null),
+    ),
+    7.5,
+  );
+}
+
+function designSection(w: PdfWriter, project: Project, options: ReportOptions): void {
+  if (!options.design) return;
+  w.heading(DESIGN_HEADING);
+  for (const text of windowParagraphs(project, options.design, options.unitSystem))
+    w.paragraph(text, 8.5);
+  for (const text of settingParagraphs(project, options.design, options.unitSystem))
+    w.paragraph(text, 8.5);
 }
 
 function inputsSection(
@@ -288,6 +311,7 @@ export async function buildPdfReport(
   doc.addPage();
   w.y = w.margin;
   setUpSection(w, project, results, options.unitSystem);
+  designSection(w, project, options);
   inputsSection(w, project, results, options.unitSystem);
   closingSections(w, project, results, options);
   w.footers(`Sagwright report - ${project.title}`, `Caution: ${CAUTION_SUMMARY}`);

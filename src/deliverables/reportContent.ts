@@ -4,7 +4,7 @@
  * SI in the project and results, shown in the chosen display units.
  */
 import type { CaseResult, Project, ProjectResults } from '../core/index.ts';
-import { DEFAULT_MODEL, resolveWire, weatherCaseOfId } from '../core/index.ts';
+import { DEFAULT_MODEL, resolveEndFittings, resolveWire, weatherCaseOfId } from '../core/index.ts';
 import { attachmentWords } from './attachmentWords.ts';
 import { formatForceShort, formatQuantity as fq, type UnitSystem } from './displayUnits.ts';
 
@@ -203,18 +203,38 @@ export function loadTable(project: Project, units: UnitSystem): Table {
           label,
           'point',
           `x = ${fq(units, 'length', load.x)}`,
-          load.mass !== undefined
+          (load.mass !== undefined
             ? fq(units, 'mass', load.mass)
-            : fq(units, 'force', load.force ?? 0),
+            : fq(units, 'force', load.force ?? 0)) + hungExtras(load, units),
         ];
       return [
         label,
         'uniform',
         `${fq(units, 'length', load.from)} to ${fq(units, 'length', load.to)}`,
-        fq(units, 'massPerLength', load.massPerLength),
+        fq(units, 'massPerLength', load.massPerLength) + hungExtras(load, units),
       ];
     }),
   };
+}
+
+/** The end fittings and the working limit they set (one line for the design basis). */
+export function endFittingsLine(project: Project): string {
+  const f = resolveEndFittings(project.limits.endFittings);
+  const pct = (e: number) => `${Math.round(e * 1000) / 10} %`;
+  if (!f.stated)
+    return `End fittings: not stated; the working limit assumes terminations as strong as the wire (breaking load / ${project.limits.safetyFactor}).`;
+  return `End fittings: first fixing ${f.start.label} (${pct(f.start.efficiency)}; ${f.start.source}), last fixing ${f.end.label} (${pct(f.end.efficiency)}; ${f.end.source}). Working limit = breaking load x ${pct(f.efficiency)} / ${project.limits.safetyFactor}.`;
+}
+
+/** Wind area and drop of a hung item, when stated. */
+function hungExtras(load: Project['loads'][number], units: UnitSystem): string {
+  const parts: string[] = [];
+  if (load.type === 'point' && load.windArea)
+    parts.push(
+      `wind area ${load.windArea} m2${load.dragCoefficient !== undefined ? `, Cd ${load.dragCoefficient}` : ''}`,
+    );
+  if (load.drop) parts.push(`hangs ${fq(units, 'length', load.drop)} below the wire`);
+  return parts.length ? `; ${parts.join(', ')}` : '';
 }
 
 export function installationLines(project: Project, units: UnitSystem): string[] {
@@ -227,6 +247,7 @@ export function installationLines(project: Project, units: UnitSystem): string[]
   return [
     `Installed at ${fq(units, 'temperature', inst.temperature)} ${inst.withLoads ? 'with' : 'without'} the hung loads, to a ${targetText(project, units)}.`,
     `Safety factor on the minimum breaking load: ${limits.safetyFactor}. Minimum clearance over the ground: ${fq(units, 'length', limits.minClearance)}.`,
+    endFittingsLine(project),
     ...(zones.length ? [`Clearance zones: ${zones.join('; ')}.`] : []),
   ];
 }
@@ -241,11 +262,11 @@ export function methodParagraphs(
   const order = model.elementOrder === 2 ? 'three-node (quadratic)' : 'two-node (linear)';
   const worstMesh = Math.max(0, ...results.cases.map((c) => c.discretisationError));
   return [
-    `The wire is treated as a taut string and divided into ${model.elementsPerSpan} ${order} string finite elements per span, with a node at every support and every point load. Each case is solved for the horizontal tension that makes the stretched wire exactly as long as the wire cut at installation, after thermal expansion and elastic stretch (EA).`,
+    `The wire is treated as a taut string and divided into ${results.mesh.elementsPerSpan} ${order} string finite elements per span${results.mesh.refinement > 1 ? ` (refined automatically from ${model.elementsPerSpan} until the error estimate fell below ${results.mesh.errorTarget.toExponential(0)})` : ''}, with a node at every support and every point load. Each case is solved for the horizontal tension that makes the stretched wire exactly as long as the wire cut at installation, after thermal expansion and elastic stretch (EA).`,
     model.theory === 'exact'
       ? 'Theory: exact. The wire weight acts per metre of wire, so the shape is the elastic catenary.'
       : 'Theory: parabolic. The wire weight acts per horizontal metre, the classic approximation for shallow spans.',
-    'Ice adds a ring of the stated thickness around the wire and any cable; wind acts across the span on the iced diameter and swings the wire sideways. Tension, sag, clearance and the pull on each fixing follow for every case.',
+    'Ice adds a ring of the stated thickness around the wire and any cable (on a hung cable per metre of cable along the wire); wind acts across the span on the iced diameter and on the stated area of signs and lamps, and swings the wire sideways. Clearance is measured to the lowest of the wire and anything hanging below it. Tension, sag, clearance and the pull on each fixing follow for every case.',
     `Check against closed forms: the dashed lines on the plot are the closed-form parabola for the same span and loads${parabola ? `; the largest difference is ${fq(units, 'diameter', parabola.differenceM)} (${parabola.caseName})` : ''}. The mesh error estimate is ${worstMesh < 1e-5 ? 'below 0.001 %' : `at most ${(worstMesh * 100).toFixed(3)} %`}.`,
   ];
 }

@@ -45,12 +45,22 @@ export function sagSpanNote(span: string): string {
 }
 
 /** The field check by pulse return time, for the span the chart lists. */
-export function pulseCheck(span: string): string {
+export function pulseCheck(span: string, holds = true): string {
+  if (!holds)
+    return (
+      'Pulse check: not valid for this set-up, because hung loads are on the wire while it is ' +
+      'tensioned and the pulse reflects off them. Measure the sag instead.'
+    );
   return (
     `Pulse check: flick the wire near a fixing of ${span} and time the wave's first return to ` +
-    'that fixing; it takes about the time in the last column (a rough check: it follows the ' +
-    'sag alone).'
+    "that fixing; it takes the time in the last column (the wave's travel along the bare wire " +
+    'and back, from the tension along it).'
   );
+}
+
+/** A row's pulse return time in seconds, or a dash when the check does not hold. */
+export function returnTimeText(row: SetUpRow): string {
+  return row.returnTime === null ? '—' : row.returnTime.toFixed(2);
 }
 
 /** The set-up chart as a report table: temperature, H, largest tension, sag, pulse return. */
@@ -66,7 +76,7 @@ export function setUpTable(project: Project, results: ProjectResults, units: Uni
         fq(units, 'force', row.horizontalTension),
         fq(units, 'force', row.maxTension),
         fq(units, 'length', row.sag),
-        `${row.returnTime.toFixed(2)} s`,
+        row.returnTime === null ? 'not valid' : `${row.returnTime.toFixed(2)} s`,
       ];
     }),
   };

@@ -6,6 +6,7 @@
  */
 import type {
   ClearanceZone,
+  EndFitting,
   GroundPoint,
   Installation,
   InstallationTarget,
@@ -109,6 +110,19 @@ export const removeZone =
 export const setWire =
   (wire: WireSpec): Edit =>
   (p) => ({ ...p, wire });
+
+/**
+ * Set one end's fitting. Without fittings in the file the other end takes the same kind (shown
+ * at once, to be changed); `undefined` removes the fittings of both ends (no reduction).
+ */
+export const setEndFitting =
+  (end: 'start' | 'end', fitting: EndFitting | undefined): Edit =>
+  (p) => {
+    const { endFittings: old, ...rest } = p.limits;
+    if (!fitting) return { ...p, limits: rest };
+    const both = old ?? { start: fitting, end: fitting };
+    return { ...p, limits: { ...rest, endFittings: { ...both, [end]: fitting } } };
+  };
 
 export const patchLoad =
   (index: number, patch: Partial<Load>): Edit =>

@@ -5,6 +5,7 @@
 import type { SolveOutcome, SolverClient } from '../worker/solverClient.ts';
 import type { ProjectStore } from './projectStore.ts';
 import type { ResultsStore } from './resultsStore.ts';
+import { EDIT_MARK, markRevision, RESULT_MARK } from './revision.ts';
 
 export type SolverPort = Pick<SolverClient, 'solve' | 'dispose'>;
 
@@ -15,6 +16,7 @@ export function applyOutcome(
 ): void {
   const current = store.getState().project;
   if (outcome.ok) {
+    markRevision(RESULT_MARK, outcome.project);
     results.setState({
       results: outcome.results,
       resultsProject: outcome.project,
@@ -32,6 +34,7 @@ export function linkSolver(store: ProjectStore, results: ResultsStore, solver: S
   solver.solve(store.getState().project);
   const unsubscribe = store.subscribe((state, previous) => {
     if (state.project === previous.project) return;
+    markRevision(EDIT_MARK, state.project);
     results.setState({ stale: true });
     solver.solve(state.project);
   });

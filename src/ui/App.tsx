@@ -9,6 +9,7 @@ import { appSession } from '../state/appSession.ts';
 import { setTitle } from '../state/projectEdits.ts';
 import { useProjectStore } from '../state/projectStore.ts';
 import { useSessionStore } from '../state/sessionStore.ts';
+import { connectDesign } from '../worker/connectDesign.ts';
 import { CautionsStrip } from './CautionsStrip.tsx';
 import { ExportMenu } from './export/ExportMenu.tsx';
 import { TextField } from './fields/TextField.tsx';
@@ -21,6 +22,7 @@ import { WirePanel } from './panels/WirePanel.tsx';
 import { ResultsPane } from './ResultsPane.tsx';
 import { SessionNotices } from './SessionNotices.tsx';
 import { Toolbar } from './Toolbar.tsx';
+import { UpdateNotice } from './UpdateNotice.tsx';
 
 function Inputs({ locked }: { locked: boolean }) {
   return (
@@ -49,6 +51,7 @@ function useOwnerCheck() {
 }
 
 export function App() {
+  useEffect(() => connectDesign(), []);
   useOwnerCheck();
   const title = useProjectStore((s) => s.project.title);
   const locked = useSessionStore((s) => s.otherTabEditing);
@@ -62,6 +65,7 @@ export function App() {
         <Toolbar />
         <ExportMenu />
       </header>
+      <UpdateNotice />
       <CautionsStrip />
       <SessionNotices />
       <main className="layout-split">

@@ -8,6 +8,7 @@ import { useDraftStore } from '../state/draftStore.ts';
 import { useProjectStore } from '../state/projectStore.ts';
 import { useResultsStore } from '../state/resultsStore.ts';
 import { useUiStore } from '../state/uiStore.ts';
+import { DesignPanel } from './design/DesignPanel.tsx';
 import { ReactionsTable } from './results/ReactionsTable.tsx';
 import { ResultsTable } from './results/ResultsTable.tsx';
 import { SetUpChart } from './results/SetUpChart.tsx';
@@ -74,6 +75,7 @@ export function ResultsPane() {
       ) : (
         <p className="muted">Working out {title}…</p>
       )}
+      <DesignPanel />
     </section>
   );
 }

@@ -10,3 +10,12 @@ declare module 'plotly.js/lib/scatter' {
   const scatter: PlotlyModule;
   export default scatter;
 }
+
+// Plotly's source modules, imported one by one for a lean core (src/ui/plot/plotlyLean.ts).
+declare module 'plotly.js/src/*' {
+  // biome-ignore lint/suspicious/noExplicitAny: untyped CommonJS modules of Plotly's source
+  const module: any;
+  export default module;
+}
+
+declare module 'plotly.js/build/plotcss';

@@ -3,6 +3,7 @@
  * request's id, so the main thread can drop replies to requests it no longer wants.
  */
 import { solveProject, validateProject } from '../core/index.ts';
+import { answerDesign } from './designAnswers.ts';
 import type { SolveReply, SolveRequest, WorkerMessage } from './protocol.ts';
 
 function solve(request: SolveRequest): SolveReply {
@@ -12,7 +13,10 @@ function solve(request: SolveRequest): SolveReply {
     return { id: request.id, ok: false, message: reasons };
   }
   try {
-    return { id: request.id, ok: true, results: solveProject(checked.project) };
+    const results = solveProject(checked.project);
+    if (!request.design) return { id: request.id, ok: true, results };
+    const design = answerDesign(checked.project, results, request.design);
+    return { id: request.id, ok: true, results, design };
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);
     return { id: request.id, ok: false, message };

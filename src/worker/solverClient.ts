@@ -5,6 +5,7 @@
  * the latest request sent again. Nothing here blocks: every call returns at once.
  */
 import type { Project, ProjectResults } from '../core/index.ts';
+import type { DesignAnswers, DesignQuestion } from './designAnswers.ts';
 import type {
   LockWaiter,
   SolveReply,
@@ -14,7 +15,7 @@ import type {
 } from './protocol.ts';
 
 export type SolveOutcome =
-  | { ok: true; results: ProjectResults; project: Project }
+  | { ok: true; results: ProjectResults; project: Project; design?: DesignAnswers }
   | {
       ok: false;
       message: string;
@@ -53,8 +54,9 @@ export class SolverClient {
 
   constructor(private readonly options: SolverClientOptions) {}
 
-  solve(project: Project): void {
-    const request = { id: this.nextId++, project };
+  solve(project: Project, design?: DesignQuestion): void {
+    const request: SolveRequest = { id: this.nextId++, project };
+    if (design) request.design = design;
     this.latestId = request.id;
     if (this.inFlight) this.pending = request;
     else this.send(request);
@@ -121,7 +123,7 @@ export class SolverClient {
     if (reply.id === this.latestId) {
       this.options.onOutcome(
         reply.ok
-          ? { ok: true, results: reply.results, project: request.project }
+          ? { ok: true, results: reply.results, project: request.project, design: reply.design }
           : { ok: false, message: reply.message, project: request.project, cause: 'design' },
       );
     } else {

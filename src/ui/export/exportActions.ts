@@ -6,6 +6,7 @@
 import { type Project, type ProjectResults, solveProject } from '../../core/index.ts';
 import type { UnitSystem } from '../../core/units.ts';
 import { profilesCsv } from '../../deliverables/csv.ts';
+import { designReport } from '../../deliverables/designContent.ts';
 import type { PaperSize, ReportDetails } from '../../deliverables/pdfReport.ts';
 import {
   openProjectFile,
@@ -13,6 +14,7 @@ import {
   serializeProject,
 } from '../../deliverables/projectFile.ts';
 import { shareUrl } from '../../deliverables/shareLink.ts';
+import { useDesignStore } from '../../state/designStore.ts';
 import { downloadBlob, downloadUrl, fileStem } from './download.ts';
 import { parseSvg, renderPlotImage, svgMarkupFromDataUrl } from './plotImage.ts';
 
@@ -75,6 +77,7 @@ export async function buildReportBlob(
   units: UnitSystem,
   paper: PaperSize,
   details: ReportDetails,
+  temperatureNow: number | null = null,
 ): Promise<Blob> {
   const results = solved(project);
   const [{ buildPdfReport }, { exportFigure }] = await Promise.all([
@@ -102,6 +105,7 @@ export async function buildReportBlob(
       plot: svg,
       plotAspect: PDF_PLOT.width / PDF_PLOT.height,
       parabola: exportFigure(project, results, units, false).parabola,
+      design: designReport(project, results.cases[0].horizontalTension, temperatureNow),
     });
     return doc.output('blob');
   } finally {
@@ -115,6 +119,12 @@ export async function saveReport(
   paper: PaperSize,
   details: ReportDetails,
 ): Promise<void> {
-  const blob = await buildReportBlob(project, units, paper, details);
+  const blob = await buildReportBlob(
+    project,
+    units,
+    paper,
+    details,
+    useDesignStore.getState().temperatureNow,
+  );
   downloadBlob(blob, `${fileStem(projectFileName(project.title))}-report.pdf`);
 }

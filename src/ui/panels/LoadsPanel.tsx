@@ -1,5 +1,13 @@
-/** What hangs on the wire: point loads (lamps, signs) and part-span loads (cables), add/remove/edit. */
-import type { Load, PointLoad, UniformLoad } from '../../core/index.ts';
+/**
+ * What hangs on the wire: point loads (lamps, signs: weight, wind area, drag, drop) and part-span
+ * loads (cables: weight, diameter for ice and wind, drop), add/remove/edit.
+ */
+import {
+  DEFAULT_ENVIRONMENT,
+  type Load,
+  type PointLoad,
+  type UniformLoad,
+} from '../../core/index.ts';
 import * as edits from '../../state/projectEdits.ts';
 import { useProjectStore } from '../../state/projectStore.ts';
 import { applyEdit } from '../fields/ChoiceFields.tsx';
@@ -10,6 +18,9 @@ import { Row } from './Row.tsx';
 function PointRow({ load, index }: { load: PointLoad; index: number }) {
   const path = `loads[${index}]`;
   const name = load.label || `Load ${index + 1}`;
+  const environmentDrag = useProjectStore(
+    (s) => s.project.environment?.dragCoefficient ?? DEFAULT_ENVIRONMENT.dragCoefficient,
+  );
   return (
     <>
       <NumberField
@@ -39,7 +50,37 @@ function PointRow({ load, index }: { load: PointLoad; index: number }) {
           edit={(mass) => edits.patchLoad(index, { mass })}
         />
       )}
+      <NumberField
+        path={`${path}.windArea`}
+        context={name}
+        label="Wind area"
+        quantity="area"
+        value={load.windArea ?? 0}
+        edit={(windArea) => edits.patchLoad(index, { windArea })}
+      />
+      <NumberField
+        path={`${path}.dragCoefficient`}
+        context={name}
+        label="Drag coefficient"
+        quantity="ratio"
+        value={load.dragCoefficient ?? environmentDrag}
+        edit={(dragCoefficient) => edits.patchLoad(index, { dragCoefficient })}
+      />
+      <DropField path={path} name={name} index={index} drop={load.drop} />
     </>
+  );
+}
+
+function DropField(props: { path: string; name: string; index: number; drop?: number }) {
+  return (
+    <NumberField
+      path={`${props.path}.drop`}
+      context={props.name}
+      label="Hangs below the wire"
+      quantity="length"
+      value={props.drop ?? 0}
+      edit={(drop) => edits.patchLoad(props.index, { drop })}
+    />
   );
 }
 
@@ -80,6 +121,7 @@ function UniformRow({ load, index }: { load: UniformLoad; index: number }) {
         value={load.diameter ?? 0}
         edit={(diameter) => edits.patchLoad(index, { diameter })}
       />
+      <DropField path={path} name={name} index={index} drop={load.drop} />
     </>
   );
 }

@@ -15,6 +15,7 @@ import { applyEdit } from '../fields/ChoiceFields.tsx';
 import { NumberField } from '../fields/NumberField.tsx';
 import { TextField } from '../fields/TextField.tsx';
 import { show } from '../format.ts';
+import { EndFittingsFields } from './EndFittingsFields.tsx';
 
 function matches(wire: WireProperties, query: string): boolean {
   const words = query.toLowerCase().split(/\s+/).filter(Boolean);
@@ -157,6 +158,7 @@ export function WirePanel() {
       ) : (
         <CustomValues wire={wireSpec} />
       )}
+      <EndFittingsFields />
     </section>
   );
 }

@@ -1,7 +1,8 @@
 /**
  * The pull of the wire on each fixing, per case: how the fixing holds the wire, the net pull
- * along the line, down and sideways (signed), resultant and angle, and the wire's tension and
- * angle on each side — what sizes a post, its stay and the fittings either side.
+ * along the line, down and sideways (signed), resultant and angle, the wire's tension and angle
+ * on each side — what sizes a post, its stay and the fittings either side — and at the two end
+ * fixings the end fitting the wire is terminated with.
  */
 import type { ProjectResults, SupportReaction } from '../../core/index.ts';
 import { unitSymbol } from '../../core/units.ts';
@@ -44,6 +45,14 @@ function ReactionCells({
   );
 }
 
+function fittingAt(results: ProjectResults, index: number, count: number): string {
+  const end =
+    index === 0 ? results.endFittings.start : index === count - 1 ? results.endFittings.end : null;
+  if (!end) return '—';
+  if (end.kind === 'notStated') return 'not stated';
+  return `${end.label}, ${Math.round(end.efficiency * 1000) / 10} %`;
+}
+
 export function ReactionsTable({ results }: { results: ProjectResults }) {
   const units = useUiStore((s) => s.unitSystem);
   const supports = useProjectStore((s) => s.project.supports);
@@ -67,6 +76,7 @@ export function ReactionsTable({ results }: { results: ProjectResults }) {
               <th scope="col">Angle below horizontal (°)</th>
               <th scope="col">Wire toward the previous fixing</th>
               <th scope="col">Wire toward the next fixing</th>
+              <th scope="col">End fitting</th>
             </tr>
           </thead>
           <tbody>
@@ -81,6 +91,7 @@ export function ReactionsTable({ results }: { results: ProjectResults }) {
                   )}
                   <th scope="row">{supports[i]?.label || `Fixing ${i + 1}`}</th>
                   <ReactionCells reaction={reaction} force={force} fu={fu} />
+                  <td>{fittingAt(results, i, result.supports.length)}</td>
                 </tr>
               )),
             )}

@@ -20,12 +20,22 @@ function governs(result: CaseResult, results: ProjectResults): string[] {
   return marks;
 }
 
+/** How the utilisation is formed, naming the end fitting that limits it. */
+export function utilisationBasis(results: ProjectResults): string {
+  const f = results.endFittings;
+  if (!f.stated)
+    return 'Utilisation = largest tension × safety factor / breaking load. No end fittings stated: terminations taken as strong as the wire.';
+  const weaker = f[f.governing];
+  return `Utilisation = largest tension × safety factor / (breaking load × ${percent(f.efficiency)}): the weaker end fitting is ${weaker.label.toLowerCase()} at the ${f.governing === 'start' ? 'first' : 'last'} fixing.`;
+}
+
 export function ResultsTable({ results }: { results: ProjectResults }) {
   const units = useUiStore((s) => s.unitSystem);
   const lu = unitSymbol('length', units);
   const fu = unitSymbol('force', units);
   return (
     <div className="table-scroll">
+      <p className="case-meta utilisation-basis">{utilisationBasis(results)}</p>
       <table className="results" aria-label="Results by case">
         <thead>
           <tr>

@@ -9,6 +9,7 @@ import { fromSi, type UnitSystem, unitSymbol } from '../../core/units.ts';
 import {
   isInstallationRow,
   pulseCheck,
+  returnTimeText,
   SET_UP_HEADING,
   setUpExplanation,
   spanName,
@@ -44,7 +45,7 @@ function Row({ row, installation, units }: RowProps) {
       <td>{num(row.horizontalTension, 'force', units)}</td>
       <td>{num(row.maxTension, 'force', units)}</td>
       <td>{num(row.sag, 'length', units)}</td>
-      <td>{row.returnTime.toFixed(2)}</td>
+      <td>{returnTimeText(row)}</td>
     </tr>
   );
 }
@@ -95,7 +96,12 @@ export function SetUpChart({ project, results }: { project: Project; results: Pr
           </tbody>
         </table>
       </div>
-      <p className="setup-note muted">{pulseCheck(span)}</p>
+      <p className="setup-note muted">
+        {pulseCheck(
+          span,
+          results.setUpChart.some((row) => row.returnTime !== null),
+        )}
+      </p>
     </section>
   );
 }

@@ -15,10 +15,21 @@ export function SolverDetails({ results }: { results: ProjectResults }) {
         {model.theory === 'exact'
           ? 'Elastic catenary: self weight per length of wire, iterated to convergence.'
           : 'Parabolic: self weight per horizontal metre.'}{' '}
-        {model.elementsPerSpan} {model.elementOrder === 2 ? 'quadratic' : 'linear'} string elements
-        per span; cut length (unstressed, installation temperature){' '}
+        {results.mesh.elementsPerSpan} {model.elementOrder === 2 ? 'quadratic' : 'linear'} string
+        elements in the most finely meshed span
+        {results.mesh.refinement > 1
+          ? ` (the ${model.elementsPerSpan} set were refined ×${results.mesh.refinement} automatically to bring the error estimate below ${results.mesh.errorTarget.toExponential(0)})`
+          : ''}
+        ; cut length (unstressed, installation temperature){' '}
         {show(results.unstressedLength, 'length', units, 4)}.
       </p>
+      {!results.mesh.reached && (
+        <p className="warning">
+          The estimated discretisation error {results.mesh.largestError.toExponential(1)} is above{' '}
+          {results.mesh.errorTarget.toExponential(0)}: treat the last digits as uncertain, or raise
+          the elements per span.
+        </p>
+      )}
       <table className="results" aria-label="Solver details by case">
         <thead>
           <tr>

@@ -1,0 +1,177 @@
+/**
+ * Tension window: the range of installation horizontal tension H₀ (N, at the installation
+ * temperature and loads) for which every case passes every check. The worst utilisation u(H₀)
+ * and the worst clearance margin m(H₀) both rise with H₀, so the high end is the root of
+ * ln u = 0 and the low end the root of m = 0, each found in ln H₀ by a bracketing root find.
+ * Each root is first found for the case that governs at the start only (two states per step
+ * instead of all), then checked with every case; a case that governs there joins and the root
+ * is found again from that point, until the governing case is among those solved.
+ */
+import { type ProjectModel, prepareState } from '../projectModel.ts';
+import { type RangeRoot, rootInRange } from './rangeRoot.ts';
+import {
+  type CaseSubset,
+  createWindowResponse,
+  TENSION_CHECK,
+  type WindowResponse,
+} from './windowResponse.ts';
+
+export interface WindowEnd {
+  horizontalTension: number;
+  case: string;
+  /** "tension", "clearance" or a zone's label. */
+  check: string;
+}
+
+/** Why a window is empty: nothing within the tension limit, clearance never met, or both ends cross. */
+export type ShutReason = 'tension' | 'clearance' | 'overlap' | null;
+
+export interface WindowEnds {
+  low: WindowEnd | null;
+  high: WindowEnd | null;
+  empty: boolean;
+  reason: ShutReason;
+  /** The search range of H₀ (N): sag about a quarter span … twice the breaking load. */
+  floorN: number;
+  ceilingN: number;
+  /** The responses at the ends found (for advice), and the evaluator itself. */
+  atLow: WindowResponse | null;
+  atHigh: WindowResponse | null;
+  atFloor: WindowResponse | null;
+  response: (tensionN: number, only?: CaseSubset) => WindowResponse;
+  evaluations: number;
+}
+
+export interface WindowOptions {
+  /** Absolute tolerance on ln H₀ (relative on H₀). */
+  tolerance?: number;
+  /** Stop as soon as the window is known to be empty (the chooser needs no more). */
+  stopWhenEmpty?: boolean;
+  /** Where to start looking for the low end (N), e.g. a similar wire's low end. */
+  lowGuessN?: number;
+}
+
+/** Slackest tension searched: the parabola's H for a sag of a quarter of each span, H = q l / 2. */
+function floorTension(model: ProjectModel): number {
+  const wire = prepareState(model, model.installation);
+  let floor = 0;
+  for (const span of model.spans) {
+    const l = span.x1 - span.x0;
+    const hung = span.hungVertical.reduce((a, q, e) => a + q * span.elementLength[e], 0) / l;
+    const points = span.pointForces.reduce((a, p) => a + p, 0) / l;
+    floor = Math.max(floor, ((wire.weightNPerM + hung + 2 * points) * l) / 2);
+  }
+  return floor;
+}
+
+type Kind = 'tension' | 'clearance';
+
+interface WorstRoot {
+  status: RangeRoot['status'];
+  x: number;
+  /** Every case evaluated at x (null when a state could not be solved). */
+  full: WindowResponse | null;
+}
+
+/**
+ * Root in ln H₀ of the worst check of one kind over every case: found for the governing cases
+ * only, then checked with all of them (see the file header).
+ */
+function worstRoot(
+  ends: WindowEnds,
+  kind: Kind,
+  x0: number,
+  range: [number, number],
+  tolerance: number,
+  count: { evaluations: number },
+): WorstRoot {
+  const at = (x: number, only?: CaseSubset) => {
+    count.evaluations++;
+    return ends.response(Math.exp(x), only);
+  };
+  let full = at(x0);
+  if (!full.solved) return { status: 'failed', x: x0, full: null };
+  const scale = Math.max(full.clearanceSagM, 1e-3);
+  const value = (r: WindowResponse) =>
+    kind === 'tension' ? Math.log(r.utilisation) : r.clearanceMargin / scale;
+  const governing = (r: WindowResponse) => (kind === 'tension' ? r.tensionIndex : r.clearanceIndex);
+  const focus = new Set<number>();
+  let x = x0;
+  for (let round = 0; round < 60; round++) {
+    const g = governing(full);
+    if (g >= 0) focus.add(g);
+    const f = (t: number) => {
+      const r = at(t, focus);
+      return r.solved ? value(r) : Number.NaN;
+    };
+    const root = rootInRange(f, x, range[0], range[1], tolerance);
+    if (root.status === 'failed') return { status: 'failed', x: root.x, full: null };
+    full = at(root.x);
+    if (!full.solved) return { status: 'failed', x: root.x, full: null };
+    const now = governing(full);
+    if (now < 0 || focus.has(now)) return { status: root.status, x: root.x, full };
+    x = root.x;
+  }
+  return { status: 'failed', x, full: null };
+}
+
+/** The window's two ends for a built model. */
+export function findWindowEnds(model: ProjectModel, options: WindowOptions = {}): WindowEnds {
+  const tolerance = options.tolerance ?? 1e-12;
+  const floorN = floorTension(model);
+  const ceilingN = Math.max(2 * model.wire.breakingLoad, 4 * floorN);
+  const range: [number, number] = [Math.log(floorN), Math.log(ceilingN)];
+  const ends: WindowEnds = {
+    low: null,
+    high: null,
+    empty: false,
+    reason: null,
+    floorN,
+    ceilingN,
+    atLow: null,
+    atHigh: null,
+    atFloor: null,
+    response: createWindowResponse(model),
+    evaluations: 0,
+  };
+  const count = { evaluations: 0 };
+  const allowed = model.wire.breakingLoad / model.project.limits.safetyFactor / 2;
+  const start = Math.min(range[1], Math.max(range[0], Math.log(allowed)));
+  const high = worstRoot(ends, 'tension', start, range, tolerance, count);
+  if (high.status === 'root' && high.full) {
+    ends.atHigh = high.full;
+    ends.high = {
+      horizontalTension: Math.exp(high.x),
+      case: high.full.tensionCase,
+      check: TENSION_CHECK,
+    };
+    if (high.full.clearanceMargin < 0) {
+      ends.empty = true;
+      ends.reason = 'overlap';
+    }
+  } else {
+    ends.atFloor = high.status === 'positive' ? high.full : null;
+    ends.empty = true;
+    ends.reason = 'tension';
+  }
+  if (!(ends.empty && options.stopWhenEmpty)) {
+    let from = high.status === 'root' ? high.x : range[0];
+    if (options.lowGuessN !== undefined && options.lowGuessN > 0)
+      from = Math.min(from, Math.log(options.lowGuessN));
+    const low = worstRoot(ends, 'clearance', from, range, tolerance, count);
+    if (low.status === 'root' && low.full) {
+      ends.atLow = low.full;
+      ends.low = {
+        horizontalTension: Math.exp(low.x),
+        case: low.full.clearanceCase,
+        check: low.full.clearanceCheck,
+      };
+    } else if (low.status === 'negative' || low.status === 'failed') {
+      // Not even the tightest wire searched clears: no tension opens the window.
+      ends.empty = true;
+      if (ends.reason !== 'tension') ends.reason = 'clearance';
+    }
+  }
+  ends.evaluations = count.evaluations;
+  return ends;
+}

@@ -1,0 +1,86 @@
+/**
+ * Wire chooser: the tension window of every catalogue wire (and the project's own custom wire)
+ * for this project; the wires whose window is open, lightest first (kg/m), each with a suggested
+ * installation horizontal tension H_s = √(H_low · H_high), the middle of the window in ln H: the
+ * same factor of margin to the slack end (clearance) and to the tight end (tension limit).
+ */
+import type { Project, WireSpec } from '../project.ts';
+import { buildProjectModel } from '../projectModel.ts';
+import { resolveWire, WIRE_CATALOG, type WireKind, type WireProperties } from '../wireCatalog.ts';
+import { findWindowEnds } from './windowEnds.ts';
+
+export type WireFamily = 'galvanised' | 'stainless' | 'fibre' | 'custom';
+
+export const SUGGESTION_RULE =
+  'Suggested tension: the middle of the window in log terms, √(lowest × highest): the same ' +
+  'factor of margin to the slack end (clearance) and to the tight end (tension limit).';
+
+export interface WireChoice {
+  /** Catalogue id, or null for the project's own (custom) wire. */
+  catalogId: string | null;
+  label: string;
+  family: WireFamily;
+  /** kg/m. */
+  massPerLength: number;
+  /** Window ends, installation horizontal tension (N); low null when no clearance limits it. */
+  low: number | null;
+  high: number;
+  suggestedHorizontalTension: number;
+}
+
+export function wireFamily(kind: WireKind): WireFamily {
+  if (kind === 'stainless steel') return 'stainless';
+  if (kind === 'polyester rope' || kind === 'nylon rope') return 'fibre';
+  if (kind === 'custom') return 'custom';
+  return 'galvanised';
+}
+
+/** The candidate wires: the catalogue, plus the project's wire when it is custom. */
+function candidates(project: Project): { spec: WireSpec; wire: WireProperties }[] {
+  const list = WIRE_CATALOG.map((wire) => ({ spec: { catalogId: wire.id } as WireSpec, wire }));
+  const own = resolveWire(project.wire);
+  if (own && own.kind === 'custom') list.push({ spec: project.wire, wire: own });
+  return list;
+}
+
+/**
+ * The window of one wire for this project, or null when it is shut. The ends are found to
+ * 1e-9 relative; `lowGuessN` starts the low-end search (a similar wire's low end: the slack
+ * limit depends mostly on the hung loads, not on the wire).
+ */
+export function chooseWire(
+  project: Project,
+  spec: WireSpec,
+  wire: WireProperties,
+  lowGuessN?: number,
+): WireChoice | null {
+  const model = buildProjectModel({ ...project, wire: spec });
+  const ends = findWindowEnds(model, { stopWhenEmpty: true, tolerance: 1e-9, lowGuessN });
+  if (ends.empty || !ends.high) return null;
+  const high = ends.high.horizontalTension;
+  const low = ends.low?.horizontalTension ?? null;
+  return {
+    catalogId: 'catalogId' in spec ? spec.catalogId : null,
+    label: wire.label,
+    family: wireFamily(wire.kind),
+    massPerLength: wire.massPerLength,
+    low,
+    high,
+    suggestedHorizontalTension: Math.sqrt((low ?? ends.floorN) * high),
+  };
+}
+
+/** Every wire that works, lightest first; optionally only some families. */
+export function chooseWires(project: Project, families?: readonly WireFamily[]): WireChoice[] {
+  const choices: WireChoice[] = [];
+  let lowGuessN: number | undefined;
+  for (const { spec, wire } of candidates(project)) {
+    if (families && !families.includes(wireFamily(wire.kind))) continue;
+    const choice = chooseWire(project, spec, wire, lowGuessN);
+    if (choice) choices.push(choice);
+    if (choice?.low) lowGuessN = choice.low;
+  }
+  return choices.sort(
+    (a, b) => a.massPerLength - b.massPerLength || a.label.localeCompare(b.label),
+  );
+}

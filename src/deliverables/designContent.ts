@@ -1,0 +1,85 @@
+/**
+ * The report's "Tension window and today's setting": the window's ends (tension, case, check),
+ * where the design sits in it, the advice, and the tension and sag to set at the temperature of
+ * the day with where to measure the sag and whether the pulse and pluck checks hold.
+ */
+import {
+  type DaySetting,
+  type Project,
+  settingAt,
+  type TensionWindow,
+  tensionWindow,
+  type WindowEnd,
+  windowPosition,
+} from '../core/index.ts';
+import { formatQuantity as fq, type UnitSystem } from './displayUnits.ts';
+import { fixingName, spanName, temperatureText } from './setUpContent.ts';
+
+export const DESIGN_HEADING = "Tension window and today's setting";
+
+export interface DesignReport {
+  window: TensionWindow;
+  /** Installation horizontal tension of the design, N. */
+  currentTension: number;
+  setting: DaySetting | null;
+}
+
+/** Work out the report's design aids for a project (pure core; fast enough at export time). */
+export function designReport(
+  project: Project,
+  currentTension: number,
+  temperatureNow: number | null,
+): DesignReport {
+  return {
+    window: tensionWindow(project),
+    currentTension,
+    setting: temperatureNow === null ? null : settingAt(project, temperatureNow),
+  };
+}
+
+function endLine(end: WindowEnd | null, what: string, units: UnitSystem): string {
+  if (!end) return `${what}: none within the range searched.`;
+  const check =
+    end.check === 'tension'
+      ? 'the tension limit'
+      : end.check === 'clearance'
+        ? 'the clearance over the ground'
+        : `the clearance over ${end.check}`;
+  return `${what}: ${fq(units, 'force', end.horizontalTension)}, set by ${check} in "${end.case}".`;
+}
+
+/** The window as report paragraphs. */
+export function windowParagraphs(project: Project, d: DesignReport, units: UnitSystem): string[] {
+  const { window } = d;
+  const lines = [
+    `Installation horizontal tension at ${temperatureText(units, project.installation.temperature)} ` +
+      'with the installation loads for which every case passes every check' +
+      (window.empty ? ': none. ' : '. ') +
+      `${endLine(window.low, 'Lowest', units)} ${endLine(window.high, 'Highest', units)}`,
+    `This design, ${fq(units, 'force', d.currentTension)}: ${windowPosition(project, window, d.currentTension)}`,
+  ];
+  if (window.empty) lines.push(...window.advice);
+  return lines;
+}
+
+/** Today's setting as report paragraphs (empty when no temperature of the day was given). */
+export function settingParagraphs(project: Project, d: DesignReport, units: UnitSystem): string[] {
+  const s = d.setting;
+  if (!s) return [];
+  const a = fixingName(project, s.span);
+  const x0 = project.supports[s.span].x;
+  const l = project.supports[s.span + 1].x - x0;
+  const len = (m: number) => fq(units, 'length', m);
+  const field =
+    s.returnTime === null || s.frequency === null
+      ? 'Pulse and pluck checks do not hold: the hung loads are on the wire while it is set and a pulse reflects off them; check the sag.'
+      : `Pulse check: a pulse flicked near ${a} returns after ${s.returnTime.toFixed(2)} s; plucked sideways the wire swings at about ${s.frequency.toFixed(2)} Hz (bare wire only).`;
+  return [
+    `At ${temperatureText(units, s.temperature)}: set a horizontal tension of ${fq(units, 'force', s.horizontalTension)} ` +
+      `(largest tension ${fq(units, 'force', s.maxTension)}). Sag of ${spanName(project, s.span)} from a string line ` +
+      `between the fixings: ${len(s.sag)} largest, at ${len(s.sagAt.distance)} from ${a} (measured level); ` +
+      `at mid-span (${len(l / 2)} from ${a}) ${len(s.midSpanSag)}. Lowest point ${len(s.lowestPoint.z)} above the ` +
+      `ground datum, ${len(s.lowestPoint.x - x0)} from ${a}.`,
+    field,
+  ];
+}

@@ -1,0 +1,71 @@
+/**
+ * The tension window in the workbench: its ends (tension, case and check) in the chosen units,
+ * where the current setting sits in words, the plot, and the advice when it is shut.
+ */
+import type { Project, TensionWindow, WindowEnd } from '../../core/index.ts';
+import type { UnitSystem } from '../../core/units.ts';
+import type { DesignAnswers } from '../../worker/designAnswers.ts';
+import { show } from '../format.ts';
+import { WindowPlot } from './WindowPlot.tsx';
+
+function endText(end: WindowEnd | null, units: UnitSystem, what: string): string {
+  if (!end) return `${what}: none found`;
+  const check =
+    end.check === 'tension'
+      ? 'tension limit'
+      : end.check === 'clearance'
+        ? 'clearance over the ground'
+        : `clearance over ${end.check}`;
+  return `${what}: ${show(end.horizontalTension, 'force', units)} (${check}, ${end.case})`;
+}
+
+function Ends({ window, units }: { window: TensionWindow; units: UnitSystem }) {
+  return (
+    <ul className="window-ends">
+      <li data-testid="window-low">{endText(window.low, units, 'Lowest')}</li>
+      <li data-testid="window-high">{endText(window.high, units, 'Highest')}</li>
+    </ul>
+  );
+}
+
+export function WindowView({
+  answers,
+  project,
+  units,
+}: {
+  answers: DesignAnswers;
+  project: Project;
+  units: UnitSystem;
+}) {
+  const { window } = answers;
+  return (
+    <section className="design-block" aria-labelledby="window-heading">
+      <h3 id="window-heading">Tension window</h3>
+      <p className="setup-note">
+        The installation horizontal tension, at{' '}
+        {show(project.installation.temperature, 'temperature', units)} with the installation loads,
+        for which every case passes every check.
+      </p>
+      <p className={window.empty ? 'verdict-fail' : 'verdict-pass'} data-testid="window-verdict">
+        {window.empty
+          ? '✗ No tension passes every case.'
+          : '✓ Every case passes inside the window.'}
+      </p>
+      <Ends window={window} units={units} />
+      <p data-testid="window-position">
+        Current setting, {show(answers.currentTension, 'force', units)}: {answers.position}
+      </p>
+      <WindowPlot
+        curve={answers.curve}
+        window={window}
+        currentN={answers.currentTension}
+        units={units}
+      />
+      <ul className="window-advice" aria-label="Window advice">
+        {window.advice.map((line) => (
+          <li key={line}>{line}</li>
+        ))}
+      </ul>
+    </section>
+  );
+}
