@@ -10,8 +10,10 @@ import { describe, expect, it } from 'vitest';
 import {
   type Attachment,
   type CaseResult,
+  type CustomWire,
   type Project,
   solveProject,
+  tensionWindow,
   validateProject,
 } from '../src/core/index.ts';
 import { singleSpan } from './helpers/projects.ts';
@@ -286,5 +288,38 @@ describe('installation targets on a line with a pulley', () => {
     const project = { ...base, installation: { ...base.installation, target } };
     const c = solved(project).cases[0];
     expect(Math.abs(c.spans[1].sag - 0.5)).toBeLessThan(1e-9);
+  });
+});
+
+describe('the tension window of a line with a pulley speaks the target’s horizontal tension', () => {
+  // Reference: the definition of the window's high end — a project installed at it has the
+  // largest utilisation exactly 1 — with the installation target's horizontalTension, the
+  // largest span H.
+  it('installing at the high end puts the worst case exactly at the working limit', () => {
+    const base = line({
+      massPerLength: 0.1,
+      axialStiffness: 1.2e6,
+      thermalExpansion: 1.2e-5,
+      cutLength: 31,
+      supports: [
+        { x: 0, z: 3 },
+        { x: 5, z: 7.5, attachment: 'pulley' },
+        { x: 30, z: 7 },
+      ],
+      cases: [still('Cold, iced', -10, 0.01)],
+    });
+    const wire = { ...(base.wire as CustomWire), breakingLoad: 8000 };
+    const project: Project = { ...base, wire, model: { ...base.model, elementsPerSpan: 200 } };
+    const high = tensionWindow(project).high;
+    expect(high).not.toBeNull();
+    const installed = solved({
+      ...project,
+      installation: {
+        ...project.installation,
+        target: { horizontalTension: high?.horizontalTension ?? 0 },
+      },
+    });
+    const worst = Math.max(...installed.cases.map((c) => c.utilisation));
+    expect(Math.abs(worst - 1)).toBeLessThan(1e-6);
   });
 });

@@ -44,6 +44,16 @@ export function solveInstallation(
 }
 
 /**
+ * The largest span horizontal tension at installation (N) — what a horizontalTension target and
+ * every case's horizontalTension mean — for the first span's H₁. Equal to H₁ unless a pulley
+ * makes the spans' H differ.
+ */
+export function largestInstallationTension(model: ProjectModel, tensionN: number): number {
+  if (model.installationJoints.every((joint) => joint === 'horizontal')) return tensionN;
+  return Math.max(...solveInstallation(model, tensionN).spans.map((s) => s.tensionN));
+}
+
+/**
  * A change of state at fixed unstressed span lengths (m, at the installation temperature);
  * tensionGuessesN holds a starting horizontal tension for every span (N).
  */
