@@ -18,7 +18,11 @@ import {
 } from '../src/deliverables/projectFile.ts';
 import { openShareFragment, shareUrl } from '../src/deliverables/shareLink.ts';
 
-const EXAMPLES = ['courtyard-lights.json', 'workshop-yard-inclined.json'];
+const EXAMPLES = [
+  'courtyard-lights.json',
+  'workshop-yard-inclined.json',
+  'terrace-corner-pulley.json',
+];
 const exampleText = (name: string) =>
   readFileSync(new URL(`../examples/${name}`, import.meta.url), 'utf8');
 const courtyard = (): Record<string, unknown> => JSON.parse(exampleText('courtyard-lights.json'));
