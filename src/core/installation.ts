@@ -78,6 +78,10 @@ function initialGuess(model: ProjectModel, target: InstallationTarget, value: nu
   return ((wire.weightNPerM + hung + 2 * points) * l * l) / (8 * value);
 }
 
+/** Why a slack target may be out of reach over a pulley, appended to the refusal. */
+const PULLEY_HINT =
+  ' (over a pulley the wire on each side carries the same tension, so a span must be pulled at least hard enough to hold up the weight of the span beyond the pulley)';
+
 export function findInstallationTension(
   model: ProjectModel,
   target: InstallationTarget,
@@ -124,6 +128,6 @@ export function findInstallationTension(
     tensionN: Math.exp(start),
     evaluations: root.evaluations,
     ok: false,
-    message: `the ${what} target ${value} ${unit} cannot be reached with this wire and load${target.case ? ` in "${target.case}"` : ''}`,
+    message: `the ${what} target ${value} ${unit} cannot be reached with this wire and load${target.case ? ` in "${target.case}"` : ''}${equalH ? '' : PULLEY_HINT}`,
   };
 }
