@@ -7,12 +7,33 @@
  */
 import { fileURLToPath } from 'node:url';
 import react from '@vitejs/plugin-react';
-import { defineConfig } from 'vite';
+import { defineConfig, type Plugin } from 'vite';
 import { VitePWA } from 'vite-plugin-pwa';
+import {
+  CONTENT_SECURITY_POLICY,
+  CONTENT_SECURITY_POLICY_HEADER,
+} from './contentSecurityPolicy.ts';
+
+/** The policy as a <meta> tag in the built page (the dev server injects inline scripts). */
+function contentSecurityPolicy(): Plugin {
+  return {
+    name: 'sagwright-content-security-policy',
+    apply: 'build',
+    transformIndexHtml: {
+      order: 'post',
+      handler: (html) =>
+        html.replace(
+          '<meta charset="UTF-8" />',
+          `<meta charset="UTF-8" />\n    <meta http-equiv="Content-Security-Policy" content="${CONTENT_SECURITY_POLICY}" />`,
+        ),
+    },
+  };
+}
 
 export default defineConfig({
   plugins: [
     react(),
+    contentSecurityPolicy(),
     VitePWA({
       // The page registers the worker itself (src/ui/UpdateNotice.tsx): no inline script, so a
       // content security policy of script-src 'self' holds.
@@ -41,9 +62,18 @@ export default defineConfig({
         ],
       },
       workbox: {
-        // The app shell, the solver worker, Plotly and the report code: everything built.
-        globPatterns: ['**/*.{js,css,html,svg,png,webmanifest}'],
+        // The app shell, the solver worker, Plotly and the report code: everything built, with
+        // the report's Latin/Greek/Cyrillic font (Noto Sans, 0.63 MB a weight).
+        globPatterns: ['**/*.{js,css,html,svg,png,webmanifest}', 'assets/NotoSans_*.ttf'],
         maximumFileSizeToCacheInBytes: 4 * 1024 * 1024,
+        // The Japanese font (5.5 MB) is fetched only by a report that needs it, then kept.
+        runtimeCaching: [
+          {
+            urlPattern: /\/assets\/NotoSansJP_[^/]*\.ttf$/,
+            handler: 'CacheFirst',
+            options: { cacheName: 'sagwright-report-fonts' },
+          },
+        ],
         navigateFallback: '/index.html',
         cleanupOutdatedCaches: true,
         sourcemap: false,
@@ -63,11 +93,15 @@ export default defineConfig({
     ],
   },
   server: { host: 'localhost', port: 5173, strictPort: true },
-  preview: { host: 'localhost' },
+  preview: {
+    host: 'localhost',
+    headers: { 'Content-Security-Policy': CONTENT_SECURITY_POLICY_HEADER },
+  },
   worker: { format: 'es' },
   build: {
     target: ['es2022', 'chrome111', 'edge111', 'firefox114', 'safari16.4'],
-    sourcemap: true,
+    // No source maps in the shipped build (they would publish the source with it).
+    sourcemap: false,
     // Plotly core + scatter is about 1 MB; it is lazy, so the warning is noise.
     chunkSizeWarningLimit: 1500,
     rolldownOptions: {

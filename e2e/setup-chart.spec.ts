@@ -77,7 +77,9 @@ async function expectChart(page: Page, rows: SetUpRow[], shown: (row: SetUpRow) 
 
 async function openDemo(page: Page) {
   await page.goto('/');
-  await expect(page.getByRole('status')).toHaveText('Up to date.');
+  await expect(
+    page.getByRole('region', { name: 'Results' }).getByRole('status').first(),
+  ).toHaveText('Up to date.');
 }
 
 test('the set-up chart shows the core values, names the span and marks the installation row', async ({
@@ -114,10 +116,12 @@ test('a new installation temperature re-solves the chart and adds its row', asyn
   await expect(marked.getByRole('rowheader')).toContainText('12.5\u00a0°C');
 });
 
-test('the PDF report carries the set-up chart after the case table', async ({ page }, info) => {
+test('the PDF report carries the set-up chart as a ticked appendix', async ({ page }, info) => {
+  test.slow();
   await openDemo(page);
   await page.getByRole('button', { name: 'File and export' }).click();
   await page.getByRole('button', { name: 'PDF report…', exact: true }).click();
+  await page.getByLabel('Set-up chart (what to set on other days)').check();
   const downloadPromise = page.waitForEvent('download');
   await page.getByRole('button', { name: 'Create PDF' }).click();
   const pdfPath = info.outputPath('report.pdf');
@@ -125,8 +129,9 @@ test('the PDF report carries the set-up chart after the case table', async ({ pa
 
   const text = execFileSync('pdftotext', ['-layout', pdfPath, '-'], { encoding: 'utf8' });
   const flat = text.replace(/\s+/g, ' ');
-  const heading = flat.indexOf('Setting the wire on the day');
+  const heading = flat.indexOf('Appendix A. Set-up chart');
   expect(heading).toBeGreaterThan(flat.indexOf('Results by case'));
+  expect(flat).toContain('On a warmer or colder day');
   expect(flat).toContain('Pulse check');
   // Each row as pdftotext reads it: temperature, H, largest tension, sag, return time.
   const project = demoProject();

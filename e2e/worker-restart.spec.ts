@@ -38,14 +38,21 @@ async function expectResultsOf(page: Page, results: ProjectResults) {
 
 /**
  * A worker script that behaves like the real one (it imports it) until request number
- * `failOn`, where it either throws out of the message handler (crash) or closes itself
- * without a word (silent: only the main thread's watchdog can notice).
+ * `failOn`, where it throws out of the message handler (crash), closes itself without a word
+ * (silent: only the release of its lock tells), spins forever while alive (hang: only the
+ * watchdog can tell), or is busy for 3 s before answering (busy: must be left alone).
  */
-function standInWorker(realUrl: string, failOn: number, how: 'crash' | 'silent'): string {
-  const fail =
-    how === 'crash'
-      ? "throw new Error('solver stand-in crashed on purpose');"
-      : 'self.close(); return;';
+function standInWorker(
+  realUrl: string,
+  failOn: number,
+  how: 'crash' | 'silent' | 'hang' | 'busy',
+): string {
+  const fail = {
+    crash: "throw new Error('solver stand-in crashed on purpose');",
+    silent: 'self.close(); return;',
+    hang: 'for (;;) {}',
+    busy: 'const until = performance.now() + 3000; while (performance.now() < until) {}',
+  }[how];
   return `import ${JSON.stringify(`${realUrl}?real`)};
 const real = self.onmessage;
 let count = 0;
@@ -113,7 +120,7 @@ test('a worker that crashes while solving an edit is replaced and the edit is so
   expect(problems).toEqual([]);
 });
 
-test('a worker that goes silent is replaced after the watchdog time and the edit is solved', async ({
+test('a worker that ends without a word is noticed at once and the edit is solved', async ({
   page,
 }) => {
   await page.clock.install();
@@ -125,14 +132,51 @@ test('a worker that goes silent is replaced after the watchdog time and the edit
   );
   await page.goto('/');
   await expect(page.getByRole('status')).toHaveText('Up to date.');
-  // From here the page's timers run only when the test moves its clock, so a slow machine
-  // cannot reach the watchdog early.
+  // The page's timers stand still from here: no watchdog can fire, so only the worker's
+  // released lock (doc/ui.md) can tell the page that the worker is gone.
   await page.clock.pauseAt((await page.evaluate(() => Date.now())) + 1000);
   const project = demoProject();
   await page.getByLabel('Hot summer temperature (°C)').fill('45');
   project.cases[0].temperature = 45;
-  // The silent worker never answers: the change stays unsolved until the watchdog (20 s,
-  // doc/ui.md) gives up on it.
+  await expect(page.getByRole('status')).toHaveText('Up to date.');
+  await expectResultsOf(page, solveProject(project));
+  expect(starts()).toBe(2);
+});
+
+test('a worker busy with a long solve is left alone and its answer is used', async ({ page }) => {
+  const starts = await routeWorker(page, async (route) =>
+    route.fulfill({
+      contentType: 'text/javascript',
+      body: standInWorker(route.request().url(), 2, 'busy'),
+    }),
+  );
+  await page.goto('/');
+  await expect(page.getByRole('status')).toHaveText('Up to date.');
+  const project = demoProject();
+  await page.getByLabel('Hot summer temperature (°C)').fill('38');
+  project.cases[0].temperature = 38;
+  await expect(page.getByRole('status')).toHaveText('Up to date.');
+  await expectResultsOf(page, solveProject(project));
+  expect(starts()).toBe(1);
+});
+
+test('a worker that hangs while alive is replaced after the watchdog time and the edit is solved', async ({
+  page,
+}) => {
+  await page.clock.install();
+  const starts = await routeWorker(page, async (route) =>
+    route.fulfill({
+      contentType: 'text/javascript',
+      body: standInWorker(route.request().url(), 2, 'hang'),
+    }),
+  );
+  await page.goto('/');
+  await expect(page.getByRole('status')).toHaveText('Up to date.');
+  await page.clock.pauseAt((await page.evaluate(() => Date.now())) + 1000);
+  const project = demoProject();
+  await page.getByLabel('Hot summer temperature (°C)').fill('45');
+  project.cases[0].temperature = 45;
+  // A hung worker still holds its lock: only the watchdog (20 s, doc/ui.md) gives up on it.
   await expect(page.getByRole('status')).toHaveText('Solving the change…');
   await page.clock.runFor('00:19');
   await expect(page.getByRole('status')).toHaveText('Solving the change…');

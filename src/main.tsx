@@ -9,7 +9,10 @@ import { startAppSession } from './state/appSession.ts';
 import { App } from './ui/App.tsx';
 import { WorkbenchErrorBoundary } from './ui/WorkbenchErrorBoundary.tsx';
 import { createSolverWorker } from './worker/createSolverWorker.ts';
+import './shell.css';
 import './ui/workbench.css';
+// After the workbench's own rules, so the phone and tablet rules win where they overlap.
+import './ui/smallScreens.css';
 
 const container = document.getElementById('root');
 if (!container) throw new Error('index.html has no #root element');

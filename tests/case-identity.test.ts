@@ -74,8 +74,8 @@ describe('case identities in the results', () => {
   it('reports the weather of each case by id in the report table', () => {
     const rows = caseTable(renamed, results, 'si').rows;
     // The installation row has no weather of its own; the renamed iced case keeps its ice.
-    expect(rows[0][2]).toBe('-');
-    expect(rows[2][2]).not.toBe('-');
+    expect(rows[0][1]).not.toContain('ice');
+    expect(rows[2][1]).toContain('ice 6.5 mm');
   });
 
   it('names the governing case in the summary by identity', () => {
@@ -87,7 +87,7 @@ describe('case identities in the results', () => {
   it('writes the case id beside the name in the profiles CSV', () => {
     const lines = profilesCsv(renamed, results, 'si').split('\r\n');
     const ids = new Set(
-      lines.filter((l) => l.startsWith('Installation,')).map((l) => l.split(',').at(-1)),
+      lines.filter((l) => l.startsWith('"Installation",')).map((l) => l.split(',').at(-1)),
     );
     expect(ids).toEqual(new Set(['installation', 'cases[1]']));
   });

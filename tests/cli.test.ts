@@ -77,7 +77,16 @@ describe('npm run solve (src/cli/main.ts)', () => {
       const printed = JSON.parse(run.stdout);
       expect(printed.cases.every((c: { solved: boolean }) => c.solved)).toBe(true);
       expect(printed.cases.some((c: { ok: boolean }) => !c.ok)).toBe(true);
-      expect(solveCli(file, '--table').status).toBe(3);
+    },
+    TIMEOUT_MS,
+  );
+
+  it(
+    'every case solved but a check fails: exit 3 with --table too',
+    () => {
+      const run = solveCli('tests/fixtures/clearance-fails.json', '--table');
+      expect(run.status).toBe(3);
+      expect(run.stdout).toContain('FAIL');
     },
     TIMEOUT_MS,
   );

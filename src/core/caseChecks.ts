@@ -25,6 +25,7 @@ import {
   tensionAt,
 } from './spanGeometry.ts';
 import type { SpanModel } from './spanModel.ts';
+import type { StrainLimit } from './strainLimit.ts';
 
 export interface SolvedSpan {
   span: SpanModel;
@@ -49,6 +50,8 @@ export interface CheckInput {
   safetyFactor: number;
   minClearance: number;
   breakingLoadN: number;
+  axialStiffnessN: number;
+  strainLimit: StrainLimit;
   theory: Theory;
   /** Efficiency of the weaker end fitting, 0–1 (1: as strong as the wire). */
   endFittingEfficiency: number;
@@ -58,6 +61,8 @@ export interface CheckInput {
 }
 
 const PROFILE_POINTS_PER_SPAN = 200;
+/** Profile points of one state over all spans: the plot and the CSV never get more rows. */
+export const PROFILE_POINTS_PER_STATE = 2000;
 
 interface GroundPiece {
   a: number;
@@ -203,12 +208,19 @@ function reactions(input: CheckInput): SupportReaction[] {
   }));
 }
 
-/** Wire profile at the vertex nodes, thinned to about PROFILE_POINTS_PER_SPAN per span. */
+/**
+ * Wire profile at the vertex nodes, thinned to about PROFILE_POINTS_PER_SPAN per span and
+ * PROFILE_POINTS_PER_STATE over all spans.
+ */
 export function sampleProfile(spans: readonly SolvedSpan[]): CaseProfile {
   const profile: CaseProfile = { x: [], z: [], y: [], tension: [] };
+  const perSpan = Math.max(
+    10,
+    Math.min(PROFILE_POINTS_PER_SPAN, Math.floor(PROFILE_POINTS_PER_STATE / spans.length)),
+  );
   spans.forEach(({ span, tensionN: H }, j) => {
     const ne = span.elementLength.length;
-    const stride = Math.max(1, Math.ceil(ne / PROFILE_POINTS_PER_SPAN));
+    const stride = Math.max(1, Math.ceil(ne / perSpan));
     const vertices: number[] = [];
     for (let k = j === 0 ? 0 : stride; k < ne; k += stride) vertices.push(k);
     vertices.push(ne);
@@ -282,6 +294,12 @@ export function checkCase(input: CheckInput): CaseResult {
       `Clearance ${fmt(clearance)} m is below the required ${fmt(input.minClearance)} m.`,
     );
   }
+  const strain = maxTension / input.axialStiffnessN;
+  const beyondElastic = strain > input.strainLimit.strain;
+  if (beyondElastic)
+    messages.push(
+      `Not valid: the wire stretches ${fmt(100 * strain)} % under its largest tension, beyond its linear-elastic range (${fmt(100 * input.strainLimit.strain)} % for ${input.strainLimit.basis}). This model assumes a straight-line stretch, so the tension, sag and clearance shown here cannot be relied on.`,
+    );
   const zoneClearances = input.zones.map((zone, i) => {
     const c = clearanceOver(spans, input.ground, zone.from, zone.to, input.drops).value;
     const label = zone.label ?? `Zone ${i + 1}`;
@@ -292,6 +310,7 @@ export function checkCase(input: CheckInput): CaseResult {
   });
   const ok =
     input.solved &&
+    !beyondElastic &&
     utilisation <= 1 &&
     clearance >= input.minClearance &&
     zoneClearances.every((z) => z.ok);
@@ -307,6 +326,7 @@ export function checkCase(input: CheckInput): CaseResult {
     clearance,
     zoneClearances,
     swing,
+    strain,
     spans: spanResults,
     supports: reactions(input),
     ok,

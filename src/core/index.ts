@@ -18,6 +18,7 @@ export {
   type EndFittingType,
   resolveEndFittings,
 } from './endFittings.ts';
+export { RANGES } from './fieldRanges.ts';
 export {
   type Migration,
   migrateProjectDocument,
@@ -26,6 +27,7 @@ export {
   type ProjectDocument,
 } from './migrateProject.ts';
 export * from './project.ts';
+export { INTERNAL_ERROR_MESSAGE } from './resultGuard.ts';
 export { type SolveOptions, solveProject } from './solveProject.ts';
 export { type ValidationIssue, type ValidationResult, validateProject } from './validateProject.ts';
 export { findCatalogWire, resolveWire, WIRE_CATALOG, type WireProperties } from './wireCatalog.ts';

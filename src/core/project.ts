@@ -164,6 +164,32 @@ export interface Environment {
   dragCoefficient: number;
 }
 
+/** Who prepared, checked or approved the design, and when (ISO date, YYYY-MM-DD). */
+export interface ReportSignatory {
+  name: string;
+  date?: string;
+}
+
+/** One line of the report's revision table. */
+export interface ReportRevision {
+  revision: string;
+  /** YYYY-MM-DD. */
+  date: string;
+  description: string;
+}
+
+/** The design record the PDF report prints: reference, people, revisions. Optional. */
+export interface ReportRecord {
+  reference?: string;
+  client?: string;
+  site?: string;
+  preparedBy?: ReportSignatory;
+  checkedBy?: ReportSignatory;
+  approvedBy?: ReportSignatory;
+  /** Oldest first; the last one is the report's current revision. */
+  revisions?: ReportRevision[];
+}
+
 export interface Project {
   format: typeof PROJECT_FORMAT;
   version: number;
@@ -177,6 +203,7 @@ export interface Project {
   limits: Limits;
   model?: Partial<ModelSettings>;
   environment?: Partial<Environment>;
+  report?: ReportRecord;
 }
 
 export const DEFAULT_MODEL: ModelSettings = {
@@ -258,6 +285,8 @@ export interface CaseResult {
   clearance: number;
   zoneClearances: ZoneClearance[];
   swing: number;
+  /** Largest strain of the wire, T_max / EA (fraction); above its elastic range ok is false. */
+  strain: number;
   spans: SpanResult[];
   supports: SupportReaction[];
   ok: boolean;
@@ -334,4 +363,8 @@ export interface ProjectResults {
   /** The end fittings and the efficiency the utilisation uses. */
   endFittings: EndFittingsResult;
   mesh: MeshResult;
+  /** Notes on the whole solve, in words (e.g. a mesh coarsened to the work budget). */
+  notices: string[];
+  /** Present and true only when the solver failed inside; every case then says so. */
+  internalError?: boolean;
 }

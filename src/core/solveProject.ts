@@ -4,7 +4,8 @@
  * change of state at those lengths. Each case's discretisation error is estimated against a mesh
  * with every element split in two (discretisation.ts); while the largest estimate is above
  * 1e-4 the whole project is solved again on that finer mesh (at most six times, and never past
- * 20 000 elements in a span).
+ * 20 000 elements in a span, nor past the work budget, workBudget.ts). It never throws: an
+ * internal failure comes back as results whose every case says so (resultGuard.ts).
  */
 
 import { checkCase } from './caseChecks.ts';
@@ -18,10 +19,20 @@ import {
 } from './installation.ts';
 import { hungDrops, loadStateOfCase } from './loads.ts';
 import { migrateProjectDocument } from './migrateProject.ts';
-import type { CaseResult, EndFittingsResult, Project, ProjectResults } from './project.ts';
+import type {
+  CaseResult,
+  EndFittingsResult,
+  Project,
+  ProjectResults,
+  WeatherCase,
+} from './project.ts';
 import { buildProjectModel, type ProjectModel } from './projectModel.ts';
+import { guardFinite, unsolvedResults } from './resultGuard.ts';
 import { setUpChart } from './setUpChart.ts';
 import { type StateSolution, solveChangeOfState, solveInstallation } from './states.ts';
+import { elasticStrainLimit } from './strainLimit.ts';
+import { resolveWire } from './wireCatalog.ts';
+import { planMesh, withinBudget } from './workBudget.ts';
 
 /** Largest refinement of the project's mesh (each element split into this many at most). */
 const MAX_REFINEMENT = 64;
@@ -66,12 +77,26 @@ function checkState(
     safetyFactor: p.limits.safetyFactor,
     minClearance: p.limits.minClearance,
     breakingLoadN: model.wire.breakingLoad,
+    axialStiffnessN: model.wire.axialStiffness,
+    strainLimit: elasticStrainLimit(model.wire),
     theory: model.settings.theory,
     endFittingEfficiency: fittings.efficiency,
     iterations: state.iterations,
     messages: state.messages,
     solved: state.solved,
   });
+}
+
+/** In a windy case with the hung loads: point loads that state no wind area catch no wind. */
+function windlessItemNotes(project: Project, weather: WeatherCase): string[] {
+  if (!(weather.windSpeed > 0) || !weather.withLoads) return [];
+  const names = project.loads.flatMap((load, i) =>
+    load.type === 'point' && load.windArea === undefined ? [load.label || `load ${i + 1}`] : [],
+  );
+  if (names.length === 0) return [];
+  return [
+    `Wind on hung items: ${names.join(', ')} ${names.length === 1 ? 'states' : 'state'} no wind area, so no wind on ${names.length === 1 ? 'it is' : 'them is'} included (enter the projected area, or 0 where there is none).`,
+  ];
 }
 
 /** Installation target, installation and every case on one mesh, checked; in case order. */
@@ -96,9 +121,15 @@ function solveOnMesh(project: Project, refinement: number, fittings: EndFittings
       installed.unstressed,
       installed.spans.map((s) => s.tensionN),
     );
-    results.push(
-      finish(caseResultId(i), weather.name, weather.temperature, weather.withLoads, state),
+    const result = finish(
+      caseResultId(i),
+      weather.name,
+      weather.temperature,
+      weather.withLoads,
+      state,
     );
+    result.messages.push(...windlessItemNotes(project, weather));
+    results.push(result);
     summaries.push(summarise(state));
   }
   results[0].iterations += target.evaluations;
@@ -137,21 +168,47 @@ function governing(project: Project, results: CaseResult[]) {
 
 /**
  * Solve a project that has passed validateProject (an older version is read through the same
- * migration as validateProject). Never throws for physical failures.
+ * migration as validateProject). Never throws: an internal failure comes back as results whose
+ * every case says so in words, and no case marked solved holds NaN or infinity.
  */
 export function solveProject(document: Project, options: SolveOptions = {}): ProjectResults {
-  const older = migrateProjectDocument(document as unknown as Record<string, unknown>);
-  const project = older ? (older.document as unknown as Project) : document;
+  let project = document;
+  try {
+    const older = migrateProjectDocument(document as unknown as Record<string, unknown>);
+    if (older) project = older.document as unknown as Project;
+  } catch {
+    return unsolvedResults(document);
+  }
+  if (!resolveWire(project.wire))
+    return unsolvedResults(project, 'wire.catalogId: this wire is not in the catalogue.');
+  try {
+    return guardFinite(solveWithinBudget(project, options));
+  } catch {
+    return unsolvedResults(project);
+  }
+}
+
+function solveWithinBudget(whole: Project, options: SolveOptions): ProjectResults {
+  const plan = planMesh(whole);
+  const project: Project = plan.notice
+    ? { ...whole, model: { ...whole.model, elementsPerSpan: plan.elementsPerSpan } }
+    : whole;
   const fittings = resolveEndFittings(project.limits.endFittings);
   let run = solveOnMesh(project, 1, fittings);
   let errors = estimateErrors(run.model, 1, run.target.tensionN, run.summaries);
   const worst = () => Math.max(0, ...errors.filter((_, i) => run.results[i].solved).map((e) => e));
+  // A refinement that does not at least halve the estimate (order 2 gives a quarter) is not
+  // converging: the mesh is not what is wrong, so refining further only costs time.
+  let previous = Number.POSITIVE_INFINITY;
   while (
     options.refine !== false &&
     worst() >= ERROR_TARGET &&
+    worst() <= previous / 2 &&
     run.refinement < MAX_REFINEMENT &&
-    2 * largestElementCount(run.model) <= MAX_REFINED_ELEMENTS
+    2 * largestElementCount(run.model) <= MAX_REFINED_ELEMENTS &&
+    withinBudget(run.model, 2)
   ) {
+    previous = worst();
     run = solveOnMesh(project, 2 * run.refinement, fittings);
     errors = estimateErrors(run.model, run.refinement, run.target.tensionN, run.summaries);
   }
@@ -164,6 +221,7 @@ export function solveProject(document: Project, options: SolveOptions = {}): Pro
       );
   });
   const { model, results, unstressed } = run;
+  if (plan.notice) results[0].messages.push(plan.notice);
   const setUpSpan = targetSpanIndex(model, project.installation.target);
   const largestError = worst();
   return {
@@ -173,6 +231,7 @@ export function solveProject(document: Project, options: SolveOptions = {}): Pro
     setUpChart: setUpChart(model, unstressed, setUpSpan, run.target.tensionN),
     setUpSpan,
     endFittings: fittings,
+    notices: plan.notice ? [plan.notice] : [],
     mesh: {
       refinement: run.refinement,
       elementsPerSpan: elements,

@@ -3,6 +3,39 @@
  * it breaks, and never repairs a value.
  */
 
+import { describeRange, type FieldRange, formatBound } from './fieldRanges.ts';
+
+/** C0 and C1 controls, line and paragraph separators, and text-direction overrides. */
+export function hasControlCharacter(text: string): boolean {
+  for (let i = 0; i < text.length; i++) {
+    const code = text.charCodeAt(i);
+    if (code < 0x20 || (code >= 0x7f && code <= 0x9f)) return true;
+    if (code === 0x2028 || code === 0x2029) return true;
+    if ((code >= 0x202a && code <= 0x202e) || (code >= 0x2066 && code <= 0x2069)) return true;
+  }
+  return false;
+}
+
+/**
+ * Text from the file quoted for a message: at most 60 characters, in JSON quotes, with every
+ * control character and text-direction override as a \u escape (a message never carries raw
+ * escape sequences to a terminal or a screen).
+ */
+export function quoted(text: string): string {
+  let out = '';
+  for (const ch of text.slice(0, 60)) {
+    if (ch === '"' || ch === '\\') out += `\\${ch}`;
+    else if (hasControlCharacter(ch)) out += `\\u${ch.charCodeAt(0).toString(16).padStart(4, '0')}`;
+    else out += ch;
+  }
+  return `"${out}"${text.length > 60 ? '…' : ''}`;
+}
+
+/** A key as it appears in a field path: bare when it is a plain name, else quoted. */
+function keyInPath(key: string): string {
+  return /^[A-Za-z_$][\w$]{0,59}$/.test(key) ? key : `[${quoted(key)}]`;
+}
+
 export interface ValidationIssue {
   path: string;
   message: string;
@@ -24,7 +57,12 @@ export class FieldChecker {
       return undefined;
     }
     for (const key of Object.keys(value)) {
-      if (!allowed.includes(key)) this.fail(path ? `${path}.${key}` : key, 'is not a known field');
+      if (allowed.includes(key)) continue;
+      const shown = keyInPath(key);
+      this.fail(
+        path ? `${path}${shown.startsWith('[') ? '' : '.'}${shown}` : shown,
+        'is not a known field',
+      );
     }
     return value as Json;
   }
@@ -60,6 +98,41 @@ export class FieldChecker {
     else if (high) this.fail(path, `must be ${maxExclusive ? 'less than' : 'at most'} ${max}`);
     else return value;
     return undefined;
+  }
+
+  /** A finite number inside a physical range; the message states the whole range. */
+  inRange(value: unknown, path: string, r: FieldRange): number | undefined {
+    const allowed = `the range is ${describeRange(r)}`;
+    if (typeof value !== 'number' || !Number.isFinite(value)) {
+      this.fail(
+        path,
+        value === undefined
+          ? `is required (a number; ${allowed})`
+          : `must be a finite number; ${allowed}`,
+      );
+      return undefined;
+    }
+    if (r.minExclusive ? value <= r.min : value < r.min)
+      this.fail(
+        path,
+        `must be ${r.minExclusive ? 'greater than' : 'at least'} ${formatBound(r.min)}; ${allowed}`,
+      );
+    else if (value > r.max) this.fail(path, `must be at most ${formatBound(r.max)}; ${allowed}`);
+    else return value;
+    return undefined;
+  }
+
+  /** Text of at most maxLength characters with no control characters. */
+  label(value: unknown, path: string, maxLength: number, required = true): string | undefined {
+    const text = this.string(value, path, maxLength, required);
+    if (text !== undefined && hasControlCharacter(text)) {
+      this.fail(
+        path,
+        'must not contain control characters, line breaks or text-direction overrides',
+      );
+      return undefined;
+    }
+    return text;
   }
 
   positive(value: unknown, path: string, max = Infinity): number | undefined {

@@ -6,9 +6,12 @@
  */
 
 import { END_FITTING_KINDS } from './endFittings.ts';
+import { describeRange, RANGES } from './fieldRanges.ts';
 import { migrateProjectDocument } from './migrateProject.ts';
 import { ATTACHMENTS, PROJECT_FORMAT, PROJECT_VERSION, type Project } from './project.ts';
-import { FieldChecker, type Json, type ValidationIssue } from './validateFields.ts';
+import { FieldChecker, type Json, quoted, type ValidationIssue } from './validateFields.ts';
+import { checkInstallation, type SupportXZ } from './validateInstallation.ts';
+import { checkReportRecord } from './validateReport.ts';
 import { findCatalogWire } from './wireCatalog.ts';
 
 export type { ValidationIssue } from './validateFields.ts';
@@ -29,6 +32,7 @@ const TOP_FIELDS = [
   'limits',
   'model',
   'environment',
+  'report',
 ];
 const CUSTOM_WIRE = [
   'label',
@@ -38,12 +42,10 @@ const CUSTOM_WIRE = [
   'thermalExpansion',
   'breakingLoad',
 ];
-const TARGET_KINDS = ['horizontalTension', 'maxTension', 'sag', 'unstressedLength'] as const;
-const TEMPERATURE_RANGE = [-80, 80] as const;
 
-function checkSupports(c: FieldChecker, raw: unknown): { x: number }[] {
+function checkSupports(c: FieldChecker, raw: unknown): SupportXZ[] {
   const list = c.array(raw, 'supports', 2, 50) ?? [];
-  const xs: { x: number }[] = [];
+  const xs: SupportXZ[] = [];
   list.forEach((item, i) => {
     const path = `supports[${i}]`;
     if ((item as Json | null)?.free !== undefined)
@@ -53,9 +55,9 @@ function checkSupports(c: FieldChecker, raw: unknown): { x: number }[] {
       );
     const s = c.object(item, path, ['x', 'z', 'label', 'attachment', 'free']);
     if (!s) return;
-    const x = c.number(s.x, `${path}.x`);
-    c.number(s.z, `${path}.z`, -1000, 10000);
-    c.string(s.label, `${path}.label`, 100, false);
+    const x = c.inRange(s.x, `${path}.x`, RANGES.position);
+    const z = c.inRange(s.z, `${path}.z`, RANGES.height);
+    c.label(s.label, `${path}.label`, 100, false);
     if (s.attachment !== undefined) {
       const end = i === 0 || i === list.length - 1;
       if (
@@ -65,32 +67,61 @@ function checkSupports(c: FieldChecker, raw: unknown): { x: number }[] {
       )
         c.fail(`${path}.attachment`, 'an end support holds the wire fast; only "clamped" applies');
     }
-    if (x !== undefined) {
-      if (xs.length > 0 && x <= xs[xs.length - 1].x)
-        c.fail(
-          `${path}.x`,
-          'must be further along the span than the previous support (x increasing)',
-        );
-      xs.push({ x });
-    }
+    if (x === undefined) return;
+    const previous = xs[xs.length - 1];
+    if (previous && x <= previous.x)
+      c.fail(
+        `${path}.x`,
+        'must be further along the span than the previous support (x increasing)',
+      );
+    else if (previous) checkSpan(c, path, previous, { x, z });
+    xs.push({ x, z });
   });
   return xs;
+}
+
+/** A span's length and steepness, from the previous support to this one. */
+function checkSpan(
+  c: FieldChecker,
+  path: string,
+  previous: { x: number; z?: number },
+  here: { x: number; z?: number },
+): void {
+  const lengthM = here.x - previous.x;
+  const { span, chordSlope } = RANGES;
+  if (lengthM < span.min || lengthM > span.max) {
+    c.fail(
+      `${path}.x`,
+      `makes a span of ${lengthM.toPrecision(4)} m; a span must be ${describeRange(span)}`,
+    );
+    return;
+  }
+  if (here.z === undefined || previous.z === undefined) return;
+  const slope = (here.z - previous.z) / lengthM;
+  if (Math.abs(slope) > chordSlope.max)
+    c.fail(
+      `${path}.z`,
+      `rises ${Math.abs(here.z - previous.z).toPrecision(4)} m over a ${lengthM.toPrecision(4)} m span; the height difference must be at most ${chordSlope.max} times the span (a steeper wire is a hanger, not a span)`,
+    );
 }
 
 function checkGround(c: FieldChecker, raw: unknown): void {
   if (raw === undefined) return;
   const list = c.array(raw, 'ground', 1, 1000) ?? [];
   let previous = -Infinity;
+  const spacing = RANGES.groundSpacing.min;
   list.forEach((item, i) => {
     const g = c.object(item, `ground[${i}]`, ['x', 'z']);
     if (!g) return;
-    const x = c.number(g.x, `ground[${i}].x`);
-    c.number(g.z, `ground[${i}].z`, -1000, 10000);
+    const x = c.inRange(g.x, `ground[${i}].x`, RANGES.position);
+    c.inRange(g.z, `ground[${i}].z`, RANGES.height);
     if (x !== undefined && x <= previous)
       c.fail(
         `ground[${i}].x`,
         'must be further along the span than the previous ground point (x increasing)',
       );
+    else if (x !== undefined && x - previous < spacing)
+      c.fail(`ground[${i}].x`, `must be at least ${spacing} m after the previous ground point`);
     if (x !== undefined) previous = x;
   });
 }
@@ -99,18 +130,24 @@ function checkWire(c: FieldChecker, raw: unknown): void {
   if (typeof raw === 'object' && raw !== null && 'catalogId' in raw) {
     const w = c.object(raw, 'wire', ['catalogId']);
     if (w && typeof w.catalogId === 'string' && !findCatalogWire(w.catalogId))
-      c.fail('wire.catalogId', `"${w.catalogId.slice(0, 60)}" is not in the wire catalogue`);
+      c.fail('wire.catalogId', `${quoted(w.catalogId)} is not in the wire catalogue`);
     else if (w && typeof w.catalogId !== 'string') c.fail('wire.catalogId', 'must be text');
     return;
   }
   const w = c.object(raw, 'wire', CUSTOM_WIRE);
   if (!w) return;
-  c.string(w.label, 'wire.label', 100);
-  c.positive(w.diameter, 'wire.diameter', 0.2);
-  c.positive(w.massPerLength, 'wire.massPerLength', 100);
-  c.positive(w.axialStiffness, 'wire.axialStiffness');
-  c.number(w.thermalExpansion, 'wire.thermalExpansion', 0, 1e-3);
-  c.positive(w.breakingLoad, 'wire.breakingLoad');
+  c.label(w.label, 'wire.label', 100);
+  c.inRange(w.diameter, 'wire.diameter', RANGES.wireDiameter);
+  c.inRange(w.massPerLength, 'wire.massPerLength', RANGES.wireMassPerLength);
+  const stiffness = c.inRange(w.axialStiffness, 'wire.axialStiffness', RANGES.axialStiffness);
+  c.inRange(w.thermalExpansion, 'wire.thermalExpansion', RANGES.thermalExpansion);
+  const breaking = c.inRange(w.breakingLoad, 'wire.breakingLoad', RANGES.breakingLoad);
+  const most = RANGES.strainAtBreak.max;
+  if (stiffness !== undefined && breaking !== undefined && breaking > most * stiffness)
+    c.fail(
+      'wire.axialStiffness',
+      `must be at least ${1 / most} times the breaking load (${(breaking / most).toPrecision(4)} N): with ${stiffness} N the wire would stretch ${((100 * breaking) / stiffness).toPrecision(3)} % before breaking, and no wire stretches more than ${100 * most} %`,
+    );
 }
 
 function checkLoads(c: FieldChecker, raw: unknown, first: number, last: number): void {
@@ -131,15 +168,15 @@ function checkLoads(c: FieldChecker, raw: unknown, first: number, last: number):
       ]);
       if (!p) return;
       c.number(p.x, `${path}.x`, first, last);
-      c.string(p.label, `${path}.label`, 100, false);
+      c.label(p.label, `${path}.label`, 100, false);
       if ((p.mass === undefined) === (p.force === undefined))
         c.fail(path, 'needs exactly one of mass (kg) or force (N)');
-      else if (p.mass !== undefined) c.number(p.mass, `${path}.mass`, 0, 1e5);
-      else c.number(p.force, `${path}.force`, 0, 1e6);
-      if (p.windArea !== undefined) c.number(p.windArea, `${path}.windArea`, 0, 100);
+      else if (p.mass !== undefined) c.inRange(p.mass, `${path}.mass`, RANGES.pointMass);
+      else c.inRange(p.force, `${path}.force`, RANGES.pointForce);
+      if (p.windArea !== undefined) c.inRange(p.windArea, `${path}.windArea`, RANGES.windArea);
       if (p.dragCoefficient !== undefined)
-        c.number(p.dragCoefficient, `${path}.dragCoefficient`, 0, 5);
-      if (p.drop !== undefined) c.number(p.drop, `${path}.drop`, 0, 100);
+        c.inRange(p.dragCoefficient, `${path}.dragCoefficient`, RANGES.dragCoefficient);
+      if (p.drop !== undefined) c.inRange(p.drop, `${path}.drop`, RANGES.drop);
     } else if (kind === 'uniform') {
       const u = c.object(item, path, [
         'type',
@@ -151,14 +188,14 @@ function checkLoads(c: FieldChecker, raw: unknown, first: number, last: number):
         'label',
       ]);
       if (!u) return;
-      if (u.drop !== undefined) c.number(u.drop, `${path}.drop`, 0, 100);
+      if (u.drop !== undefined) c.inRange(u.drop, `${path}.drop`, RANGES.drop);
       const from = c.number(u.from, `${path}.from`, first, last);
       const to = c.number(u.to, `${path}.to`, first, last);
       if (from !== undefined && to !== undefined && to <= from)
         c.fail(`${path}.to`, 'must be greater than from');
-      c.number(u.massPerLength, `${path}.massPerLength`, 0, 1000);
-      if (u.diameter !== undefined) c.number(u.diameter, `${path}.diameter`, 0, 1);
-      c.string(u.label, `${path}.label`, 100, false);
+      c.inRange(u.massPerLength, `${path}.massPerLength`, RANGES.loadMassPerLength);
+      if (u.diameter !== undefined) c.inRange(u.diameter, `${path}.diameter`, RANGES.loadDiameter);
+      c.label(u.label, `${path}.label`, 100, false);
     } else {
       c.fail(`${path}.type`, 'must be "point" or "uniform"');
     }
@@ -178,69 +215,24 @@ function checkCases(c: FieldChecker, raw: unknown): string[] {
       'withLoads',
     ]);
     if (!k) return;
-    const name = c.string(k.name, `${path}.name`, 80);
+    const name = c.label(k.name, `${path}.name`, 80);
     if (name !== undefined && name.trim() === '') c.fail(`${path}.name`, 'must not be empty');
     else if (name !== undefined && names.includes(name))
       c.fail(`${path}.name`, `"${name}" is used by another case`);
     if (name !== undefined) names.push(name);
-    c.number(k.temperature, `${path}.temperature`, ...TEMPERATURE_RANGE);
-    c.number(k.iceThickness, `${path}.iceThickness`, 0, 0.2);
-    c.number(k.windSpeed, `${path}.windSpeed`, 0, 100);
+    c.inRange(k.temperature, `${path}.temperature`, RANGES.temperature);
+    c.inRange(k.iceThickness, `${path}.iceThickness`, RANGES.iceThickness);
+    c.inRange(k.windSpeed, `${path}.windSpeed`, RANGES.windSpeed);
     c.boolean(k.withLoads, `${path}.withLoads`);
   });
   return names;
-}
-
-function checkInstallation(
-  c: FieldChecker,
-  raw: unknown,
-  spanLengths: number[],
-  caseNames: string[],
-): void {
-  const inst = c.object(raw, 'installation', ['temperature', 'withLoads', 'target']);
-  if (!inst) return;
-  c.number(inst.temperature, 'installation.temperature', ...TEMPERATURE_RANGE);
-  c.boolean(inst.withLoads, 'installation.withLoads');
-  const t = c.object(inst.target, 'installation.target', [...TARGET_KINDS, 'span', 'case']);
-  if (!t) return;
-  const kinds = TARGET_KINDS.filter((k) => t[k] !== undefined);
-  if (kinds.length !== 1) {
-    c.fail('installation.target', `must hold exactly one of ${TARGET_KINDS.join(', ')}`);
-    return;
-  }
-  const kind = kinds[0];
-  const value = c.positive(t[kind], `installation.target.${kind}`);
-  if (t.span !== undefined) {
-    if (kind !== 'sag') c.fail('installation.target.span', 'applies to a sag target only');
-    else c.integer(t.span, 'installation.target.span', 0, Math.max(0, spanLengths.length - 1));
-  }
-  if (t.case !== undefined) {
-    if (kind === 'unstressedLength')
-      c.fail(
-        'installation.target.case',
-        'does not apply to a cut length (it is the same in every case)',
-      );
-    else if (typeof t.case !== 'string' || !caseNames.includes(t.case))
-      c.fail('installation.target.case', 'must name one of the cases');
-  }
-  if (kind === 'sag' && value !== undefined && spanLengths.length > 0) {
-    const j =
-      typeof t.span === 'number' && spanLengths[t.span] !== undefined
-        ? t.span
-        : spanLengths.indexOf(Math.max(...spanLengths));
-    if (value >= spanLengths[j] / 2)
-      c.fail(
-        'installation.target.sag',
-        `is longer than possible: must be less than half the span (${(spanLengths[j] / 2).toFixed(3)} m)`,
-      );
-  }
 }
 
 function checkEndFitting(c: FieldChecker, raw: unknown, path: string): void {
   const f = c.object(raw, path, ['kind', 'efficiency']);
   if (!f) return;
   const kind = c.oneOf(f.kind, `${path}.kind`, END_FITTING_KINDS);
-  if (kind === 'custom') c.positive(f.efficiency, `${path}.efficiency`, 1);
+  if (kind === 'custom') c.inRange(f.efficiency, `${path}.efficiency`, RANGES.endFittingEfficiency);
   else if (kind !== undefined && f.efficiency !== undefined)
     c.fail(
       `${path}.efficiency`,
@@ -248,11 +240,11 @@ function checkEndFitting(c: FieldChecker, raw: unknown, path: string): void {
     );
 }
 
-function checkLimits(c: FieldChecker, raw: unknown): void {
+function checkLimits(c: FieldChecker, raw: unknown, first: number, last: number): void {
   const l = c.object(raw, 'limits', ['safetyFactor', 'minClearance', 'zones', 'endFittings']);
   if (!l) return;
-  c.number(l.safetyFactor, 'limits.safetyFactor', 1, 100);
-  c.number(l.minClearance, 'limits.minClearance', 0, 1000);
+  c.inRange(l.safetyFactor, 'limits.safetyFactor', RANGES.safetyFactor);
+  c.inRange(l.minClearance, 'limits.minClearance', RANGES.clearance);
   if (l.endFittings !== undefined) {
     const ends = c.object(l.endFittings, 'limits.endFittings', ['start', 'end']);
     if (ends) {
@@ -265,12 +257,13 @@ function checkLimits(c: FieldChecker, raw: unknown): void {
     const path = `limits.zones[${i}]`;
     const z = c.object(item, path, ['from', 'to', 'height', 'label']);
     if (!z) return;
-    const from = c.number(z.from, `${path}.from`);
-    const to = c.number(z.to, `${path}.to`);
+    // A zone is checked against the wire, so it must lie under the wire.
+    const from = c.number(z.from, `${path}.from`, first, last);
+    const to = c.number(z.to, `${path}.to`, first, last);
     if (from !== undefined && to !== undefined && to <= from)
       c.fail(`${path}.to`, 'must be greater than from');
-    c.number(z.height, `${path}.height`, 0, 1000);
-    c.string(z.label, `${path}.label`, 100, false);
+    c.inRange(z.height, `${path}.height`, RANGES.clearance);
+    c.label(z.label, `${path}.label`, 100, false);
   });
 }
 
@@ -280,7 +273,12 @@ function checkSettings(c: FieldChecker, model: unknown, env: unknown): void {
     if (m?.theory !== undefined) c.oneOf(m.theory, 'model.theory', ['exact', 'parabolic']);
     if (m?.elementOrder !== undefined) c.oneOf(m.elementOrder, 'model.elementOrder', [1, 2]);
     if (m?.elementsPerSpan !== undefined)
-      c.integer(m.elementsPerSpan, 'model.elementsPerSpan', 2, 20000);
+      c.integer(
+        m.elementsPerSpan,
+        'model.elementsPerSpan',
+        RANGES.elementsPerSpan.min,
+        RANGES.elementsPerSpan.max,
+      );
   }
   if (env !== undefined) {
     const e = c.object(env, 'environment', [
@@ -289,19 +287,26 @@ function checkSettings(c: FieldChecker, model: unknown, env: unknown): void {
       'iceDensity',
       'dragCoefficient',
     ]);
-    if (e?.gravity !== undefined) c.positive(e.gravity, 'environment.gravity', 50);
-    if (e?.airDensity !== undefined) c.number(e.airDensity, 'environment.airDensity', 0, 10);
-    if (e?.iceDensity !== undefined) c.positive(e.iceDensity, 'environment.iceDensity', 2000);
+    if (e?.gravity !== undefined) c.inRange(e.gravity, 'environment.gravity', RANGES.gravity);
+    if (e?.airDensity !== undefined)
+      c.inRange(e.airDensity, 'environment.airDensity', RANGES.airDensity);
+    if (e?.iceDensity !== undefined)
+      c.inRange(e.iceDensity, 'environment.iceDensity', RANGES.iceDensity);
     if (e?.dragCoefficient !== undefined)
-      c.number(e.dragCoefficient, 'environment.dragCoefficient', 0, 5);
+      c.inRange(e.dragCoefficient, 'environment.dragCoefficient', RANGES.dragCoefficient);
   }
 }
 
 export function validateProject(raw: unknown): ValidationResult {
-  const older =
-    typeof raw === 'object' && raw !== null && !Array.isArray(raw)
-      ? migrateProjectDocument(raw as Json)
-      : undefined;
+  let older: ReturnType<typeof migrateProjectDocument>;
+  try {
+    older =
+      typeof raw === 'object' && raw !== null && !Array.isArray(raw)
+        ? migrateProjectDocument(raw as Json)
+        : undefined;
+  } catch {
+    older = undefined; // not a plain JSON document: the checks below say what is wrong
+  }
   if (!older) return validateCurrent(raw);
   const checked = validateCurrent(older.document);
   return checked.ok ? { ...checked, migratedFrom: older.from, notes: older.notes } : checked;
@@ -318,18 +323,18 @@ function validateCurrent(raw: unknown): ValidationResult {
       'version',
       `${version} is newer than this Sagwright reads (${PROJECT_VERSION}); update Sagwright`,
     );
-  c.string(doc.title, 'title', 200);
+  c.label(doc.title, 'title', 200);
   const supports = checkSupports(c, doc.supports);
   const first = supports[0]?.x ?? -Infinity;
   const last = supports[supports.length - 1]?.x ?? Infinity;
-  const spanLengths = supports.slice(1).map((s, j) => s.x - supports[j].x);
   checkGround(c, doc.ground);
   checkWire(c, doc.wire);
   checkLoads(c, doc.loads, first, last);
   const caseNames = checkCases(c, doc.cases);
-  checkInstallation(c, doc.installation, spanLengths, caseNames);
-  checkLimits(c, doc.limits);
+  checkInstallation(c, doc.installation, supports, caseNames);
+  checkLimits(c, doc.limits, first, last);
   checkSettings(c, doc.model, doc.environment);
+  checkReportRecord(c, doc.report);
   return c.issues.length === 0
     ? { ok: true, project: raw as Project }
     : { ok: false, issues: c.issues };

@@ -8,12 +8,13 @@ import { CAUTIONS, type Project, type ProjectResults } from '../core/index.ts';
 import { toDisplay, type UnitSystem, unitSymbol } from './displayUnits.ts';
 import { groundHeightAt } from './groundLine.ts';
 
-/** Quotes a text cell; a leading = + - @ is defused so a spreadsheet never runs it as a formula. */
+/**
+ * Quotes a text cell (always: every cell of the person's text is quoted); a leading = + - @ tab or carriage return (or their full-width forms) is
+ * defused with an apostrophe so a spreadsheet never runs the cell as a formula.
+ */
 export function csvText(value: string): string {
-  const defused = /^[=+\-@\t\r]/.test(value) ? `'${value}` : value;
-  return /[",\r\n]/.test(defused) || defused !== value
-    ? `"${defused.replace(/"/g, '""')}"`
-    : defused;
+  const defused = /^[=+\-@\t\r\uff1d\uff0b\uff0d\uff20]/.test(value) ? `'${value}` : value;
+  return `"${defused.replace(/"/g, '""')}"`;
 }
 
 function csvNumber(value: number, digits: number): string {
@@ -35,7 +36,8 @@ export function csvHeader(system: UnitSystem): string[] {
 
 function commentLines(project: Project, generatedAt: Date): string[] {
   return [
-    `# Sagwright wire profiles: ${project.title.replace(/[\r\n]+/g, ' ')}`,
+    // The title is the person's text: a quoted, defused cell of its own beside the comment.
+    `# Sagwright wire profiles,${csvText(project.title.replace(/[\r\n]+/g, ' '))}`,
     `# Generated ${generatedAt.toISOString()}; heights above the ground datum, clearance above the ground line.`,
     ...CAUTIONS.map((caution) => `# Caution - ${caution.title}: ${caution.text}`),
   ];

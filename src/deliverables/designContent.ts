@@ -6,6 +6,7 @@
 import {
   type DaySetting,
   type Project,
+  type ProjectResults,
   settingAt,
   type TensionWindow,
   tensionWindow,
@@ -27,13 +28,14 @@ export interface DesignReport {
 /** Work out the report's design aids for a project (pure core; fast enough at export time). */
 export function designReport(
   project: Project,
-  currentTension: number,
+  results: ProjectResults,
   temperatureNow: number | null,
 ): DesignReport {
+  const refinement = results.mesh.refinement;
   return {
-    window: tensionWindow(project),
-    currentTension,
-    setting: temperatureNow === null ? null : settingAt(project, temperatureNow),
+    window: tensionWindow(project, refinement),
+    currentTension: results.cases[0].horizontalTension,
+    setting: temperatureNow === null ? null : settingAt(project, temperatureNow, refinement),
   };
 }
 

@@ -59,3 +59,27 @@ export function formatForceShort(system: UnitSystem, newtons: number, space = ' 
       : `${wholeOrHundredths[0].format(newtons)}${space}N`;
   return `${wholeOrHundredths[0].format(fromSi(newtons, 'force', system))}${space}${symbolOf('force', system)}`;
 }
+
+const EIGHTHS = ['', '⅛', '¼', '⅜', '½', '⅝', '¾', '⅞'];
+
+/**
+ * A length as installers read it: metres with millimetres in SI; in imperial units feet and
+ * inches to the nearest eighth of an inch, "12 ft 3 1/4 in" in prose or, compact for table
+ * cells, "12′ 3¼″". Parts are joined by no-break spaces so a length never parts at a line end.
+ */
+export function formatLength(system: UnitSystem, metres: number, compact = false): string {
+  if (system === 'si') return formatQuantity('si', 'length', metres);
+  const eighths = Math.round(Math.abs(metres / 0.0254) * 8);
+  const sign = metres < 0 && eighths > 0 ? '−' : '';
+  const feet = Math.floor(eighths / 96);
+  const inches = Math.floor((eighths % 96) / 8);
+  const rest = eighths % 8;
+  if (compact) {
+    const inchText = `${inches}${EIGHTHS[rest]}″`;
+    return feet === 0 ? `${sign}${inchText}` : `${sign}${feet}′\u00a0${inchText}`;
+  }
+  const divisor = rest === 0 ? 1 : rest % 4 === 0 ? 4 : rest % 2 === 0 ? 2 : 1;
+  const fraction = rest ? `\u00a0${rest / divisor}/${8 / divisor}` : '';
+  const inchText = `${inches}${fraction}\u00a0in`;
+  return feet === 0 ? `${sign}${inchText}` : `${sign}${feet}\u00a0ft\u00a0${inchText}`;
+}

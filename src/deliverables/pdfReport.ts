@@ -1,129 +1,150 @@
 /**
- * The client report as a PDF: page 1 carries the title, date, client and site block, the
- * summary line, key numbers, the sag plot (vector, selectable text) and the case table; then
- * what to set on the day at other temperatures, the inputs, fixing loads, method and cautions. jsPDF and svg2pdf.js load only when a report
- * is asked for.
+ * The report as a PDF. Page 1 is the decision: verdict in words, what to set on the day, key
+ * numbers, the sag plot (vector, selectable text) and the case table with each case's findings.
+ * Then the fixing schedule, the design basis and the record block (people, dates, signatures,
+ * revisions, version, fingerprint), then the appendices the person ticked. jsPDF, svg2pdf.js
+ * and the fonts load only when a report is asked for.
  */
 import type { jsPDF } from 'jspdf';
-import { CAUTION_SUMMARY, CAUTIONS, type Project, type ProjectResults } from '../core/index.ts';
+import { CAUTION_SUMMARY, type Project, type ProjectResults } from '../core/index.ts';
 import {
   DESIGN_HEADING,
   type DesignReport,
   settingParagraphs,
   windowParagraphs,
 } from './designContent.ts';
-import { formatQuantity as fq, type UnitSystem } from './displayUnits.ts';
-import { ACCENT, MUTED, PdfWriter, pdfText, RULE } from './pdfWriter.ts';
+import type { UnitSystem } from './displayUnits.ts';
+import { type AppendixChoice, appendixSections, type WireChoice } from './pdfAppendix.ts';
+import { type FontSource, ReportFonts } from './pdfFonts.ts';
+import { basisSection, fixingSection, recordSection } from './pdfSections.ts';
 import {
-  caseMessages,
-  caseTable,
-  installationLines,
-  keyNumbers,
-  loadTable,
-  methodParagraphs,
-  summaryLine,
-  supportTable,
-  wireLines,
-} from './reportContent.ts';
-import {
-  isInstallationRow,
-  pulseCheck,
-  SET_UP_HEADING,
-  sagSpanNote,
-  setUpExplanation,
-  setUpTable,
-  spanName,
-  temperatureText,
-} from './setUpContent.ts';
+  ACCENT,
+  type Colour,
+  type ColumnSpec,
+  INK,
+  lineHeight,
+  MUTED,
+  PdfWriter,
+  RULE,
+} from './pdfWriter.ts';
+import { caseLegend, caseTable, keyNumbers, verdict } from './reportContent.ts';
+import { revisionLabel } from './reportRecord.ts';
+import { settingText } from './reportSetting.ts';
 
 export type PaperSize = 'a4' | 'letter';
-
-export interface ReportDetails {
-  client: string;
-  site: string;
-  preparedBy: string;
-  reference: string;
-}
 
 export interface ReportOptions {
   paper: PaperSize;
   unitSystem: UnitSystem;
-  details: ReportDetails;
   generatedAt: Date;
   /** The sag plot as an SVG element (vector); null leaves a note instead. */
   plot: SVGSVGElement | null;
   /** Plot width : height. */
   plotAspect: number;
   parabola?: { caseName: string; differenceM: number } | null;
+  /** The Noto font files (fetched in the browser, read from disk in tests). */
+  fonts: FontSource;
+  /** Sagwright's version, printed in the record. */
+  appVersion: string;
+  appendix: AppendixChoice;
+  /** Paragraphs placed under the setting for the day, if any. */
+  decisionNotes?: string[];
   /** The tension window and today's setting; left out when not given. */
   design?: DesignReport | null;
+  /** Wires considered by the chooser, for the appendix, if known. */
+  wireChoices?: WireChoice[];
 }
 
-const PASS = [26, 122, 62] as const;
-const FAIL = [178, 34, 34] as const;
-const INSTALLATION_FILL = [227, 238, 248] as const;
+export const PASS: Colour = [26, 122, 62];
+export const FAIL: Colour = [178, 34, 34];
 
-function header(w: PdfWriter, project: Project, options: ReportOptions): void {
-  const { doc } = w;
-  w.font(7.5, 'bold', ACCENT);
-  doc.text('SAGWRIGHT  |  WIRE SPAN REPORT', w.left, w.y);
-  w.font(7.5, 'normal', MUTED);
-  const date = options.generatedAt.toISOString().slice(0, 10);
-  doc.text(`Date ${date}`, w.left + w.width, w.y, { align: 'right' });
-  w.y += 8;
-  w.font(18, 'bold');
-  for (const line of w.lines(project.title, w.width)) {
-    doc.text(line, w.left, w.y);
-    w.y += 7.2;
+/** Every piece of user text the report may print, to decide which fonts it needs. */
+function userTexts(project: Project): string[] {
+  return [JSON.stringify(project)];
+}
+
+function titleBlock(w: PdfWriter, project: Project, options: ReportOptions): void {
+  for (const line of w.lines(project.title, w.width, 16, 'bold')) {
+    w.text(line, w.left, w.y + 5.2, 16, 'bold');
+    w.y += 6.6;
   }
-  w.y += 1;
+  const r = project.report ?? {};
+  const facts = [
+    r.client?.trim() && `Client: ${r.client.trim()}`,
+    r.site?.trim() && `Site: ${r.site.trim()}`,
+    r.reference?.trim() && `Reference: ${r.reference.trim()}`,
+    revisionLabel(r),
+    `Date ${options.generatedAt.toISOString().slice(0, 10)}`,
+  ].filter(Boolean) as string[];
+  w.y += 0.6;
+  w.paragraph(facts.join('   ·   '), 8, 'normal', MUTED);
 }
 
-function detailsBlock(w: PdfWriter, details: ReportDetails): void {
-  const { doc } = w;
-  const cells: [string, string][] = [
-    ['Client', details.client],
-    ['Site', details.site],
-    ['Prepared by', details.preparedBy],
-    ['Reference', details.reference],
-  ];
-  const cellWidth = w.width / 2;
-  cells.forEach(([label, value], i) => {
-    const x = w.left + (i % 2) * cellWidth;
-    const y = w.y + Math.floor(i / 2) * 10;
-    w.font(6.5, 'bold', MUTED);
-    doc.text(label.toUpperCase(), x + 1.5, y + 3.2);
-    w.font(9.5, 'normal');
-    doc.text(w.lines(value || ' ', cellWidth - 4)[0] ?? '', x + 1.5, y + 7.6);
-    doc.setDrawColor(RULE[0], RULE[1], RULE[2]);
-    doc.setLineWidth(0.2);
-    doc.rect(x, y, cellWidth, 10);
-  });
-  w.y += 24;
+function box(
+  w: PdfWriter,
+  paragraphs: { text: string; size: number; bold?: boolean }[],
+  bar: Colour,
+  tint: Colour,
+) {
+  const inner = w.width - 7;
+  const laid = paragraphs.map((p) => ({
+    ...p,
+    lines: w.lines(p.text, inner, p.size, p.bold ? 'bold' : 'normal'),
+  }));
+  const height = laid.reduce((sum, p) => sum + p.lines.length * lineHeight(p.size) + 1, 3);
+  w.ensure(height + 3);
+  w.doc.setFillColor(...tint);
+  w.doc.rect(w.left, w.y, w.width, height, 'F');
+  w.doc.setFillColor(...bar);
+  w.doc.rect(w.left, w.y, 1.4, height, 'F');
+  let y = w.y + 2;
+  for (const p of laid) {
+    for (const line of p.lines) {
+      w.text(line, w.left + 4.5, y + p.size * 0.33, p.size, p.bold ? 'bold' : 'normal', INK);
+      y += lineHeight(p.size);
+    }
+    y += 1;
+  }
+  w.y += height + 2.5;
 }
 
-function summaryBox(
+function decisionBlocks(
   w: PdfWriter,
   project: Project,
   results: ProjectResults,
   options: ReportOptions,
-): void {
-  const { doc } = w;
-  const allPass = results.cases.every((c) => c.ok);
-  w.font(9.5, 'bold');
-  const lines = w.lines(summaryLine(project, results, options.unitSystem), w.width - 8);
-  const height = lines.length * 4.4 + 5;
-  const tint = allPass ? [234, 245, 237] : [251, 234, 234];
-  const bar = allPass ? PASS : FAIL;
-  doc.setFillColor(tint[0], tint[1], tint[2]);
-  doc.rect(w.left, w.y, w.width, height, 'F');
-  doc.setFillColor(bar[0], bar[1], bar[2]);
-  doc.rect(w.left, w.y, 1.4, height, 'F');
-  w.font(9.5, 'bold');
-  lines.forEach((line, i) => {
-    doc.text(line, w.left + 4.5, w.y + 5.6 + i * 4.4);
-  });
-  w.y += height + 5;
+) {
+  const v = verdict(project, results, options.unitSystem);
+  box(
+    w,
+    [{ text: v.text, size: 9.5, bold: true }],
+    v.pass ? PASS : FAIL,
+    v.pass ? [234, 245, 237] : [251, 234, 234],
+  );
+  const setting = settingText(project, results, options.unitSystem, options.appendix.setUpChart);
+  box(
+    w,
+    [
+      { text: setting.head, size: 8.8, bold: true },
+      ...setting.lines.map((text) => ({ text, size: 7.8 })),
+      ...(options.decisionNotes ?? []).map((text) => ({ text, size: 7.8 })),
+      ...designLines(project, options),
+    ],
+    ACCENT,
+    [236, 242, 248],
+  );
+}
+
+/** The tension window and, when a temperature of the day was given, the setting for it. */
+function designLines(project: Project, options: ReportOptions) {
+  const d = options.design;
+  if (!d) return [];
+  const units = options.unitSystem;
+  return [
+    { text: `${DESIGN_HEADING}.`, size: 8.4, bold: true },
+    ...windowParagraphs(project, d, units).map((text) => ({ text, size: 7.8 })),
+    ...settingParagraphs(project, d, units).map((text) => ({ text, size: 7.8 })),
+  ];
 }
 
 function keyNumberRow(
@@ -132,156 +153,94 @@ function keyNumberRow(
   results: ProjectResults,
   units: UnitSystem,
 ): void {
-  const { doc } = w;
   const numbers = keyNumbers(project, results, units);
   const boxWidth = w.width / numbers.length;
-  numbers.forEach((n, i) => {
+  const notes = numbers.map((n) => w.lines(n.note, boxWidth - 4, 6.6));
+  const labels = numbers.map((n) => w.lines(n.label.toUpperCase(), boxWidth - 4, 6.3, 'bold'));
+  const values = numbers.map((n) => w.lines(n.value, boxWidth - 4, 11.5, 'bold'));
+  const labelH = Math.max(...labels.map((l) => l.length)) * lineHeight(6.3);
+  const valueH = Math.max(...values.map((l) => l.length)) * lineHeight(11.5);
+  const height = labelH + valueH + Math.max(...notes.map((l) => l.length)) * lineHeight(6.6) + 2;
+  w.ensure(height + 3);
+  numbers.forEach((_, i) => {
     const x = w.left + i * boxWidth;
     if (i > 0) {
-      doc.setDrawColor(RULE[0], RULE[1], RULE[2]);
-      doc.line(x, w.y, x, w.y + 15);
+      w.doc.setDrawColor(...RULE);
+      w.doc.setLineWidth(0.2);
+      w.doc.line(x, w.y, x, w.y + height);
     }
-    w.font(6.5, 'bold', MUTED);
-    doc.text(pdfText(n.label.toUpperCase()), x + 2, w.y + 3);
-    w.font(12.5, 'bold');
-    doc.text(pdfText(n.value), x + 2, w.y + 9);
-    w.font(6.5, 'normal', MUTED);
-    doc.text(w.lines(n.note, boxWidth - 4)[0] ?? '', x + 2, w.y + 13.5);
+    const y0 = w.y;
+    labels[i].forEach((line, k) => {
+      w.text(line, x + 2, y0 + 2.2 + k * lineHeight(6.3), 6.3, 'bold', MUTED);
+    });
+    values[i].forEach((line, k) => {
+      w.text(line, x + 2, y0 + labelH + 4 + k * lineHeight(11.5), 11.5, 'bold');
+    });
+    notes[i].forEach((line, k) => {
+      w.text(line, x + 2, y0 + labelH + valueH + 2.4 + k * lineHeight(6.6), 6.6, 'normal', MUTED);
+    });
   });
-  w.y += 20;
+  w.y += height + 3;
 }
 
-async function plotBlock(w: PdfWriter, options: ReportOptions): Promise<void> {
-  const height = w.width / options.plotAspect;
-  w.ensure(height + 8);
-  if (options.plot) {
-    const { svg2pdf } = await import('svg2pdf.js');
-    await svg2pdf(options.plot, w.doc, { x: w.left, y: w.y, width: w.width, height });
-  } else {
-    w.paragraph('The sag plot could not be drawn for this report; the numbers below stand.');
+export const CASE_COLUMNS: ColumnSpec[] = [1.6, 1.9, 0.9, 1, 0.7, 0.9, 1.15, 0.9, 0.8, 3.2].map(
+  (weight, i) => ({ weight, align: i >= 2 && i <= 7 ? 'right' : 'left' }),
+);
+
+function caseTableStyle(project: Project, results: ProjectResults, units: UnitSystem) {
+  return {
+    cellColour: (row: number, col: number) =>
+      col === 8 || (col === 9 && !results.cases[row].ok)
+        ? results.cases[row].ok
+          ? PASS
+          : FAIL
+        : undefined,
+    legend: [caseLegend(project, results, units)],
+  };
+}
+
+/** Points the plot's text at an embedded font (svg2pdf looks fonts up by family name). */
+function applyFontFamily(svg: SVGSVGElement, fonts: ReportFonts): void {
+  for (const element of Array.from(
+    svg.querySelectorAll<SVGElement>('[style*="font-family"], text, tspan'),
+  )) {
+    const family = fonts.familyFor(element.textContent ?? '');
+    if (element.style) element.style.fontFamily = `${family}, sans-serif`;
+    if (element.hasAttribute('font-family')) element.setAttribute('font-family', family);
   }
-  w.y += height + 2;
-  w.font(7.5, 'normal', MUTED);
-  w.doc.text(
-    pdfText(
-      'Wire height for each case (solid) with the closed-form parabola (dashed); ground and clearance zones shaded.',
-    ),
-    w.left,
-    w.y,
-  );
-  w.y += 6;
 }
 
-function resultsSection(
-  w: PdfWriter,
-  project: Project,
-  results: ProjectResults,
-  units: UnitSystem,
-): void {
-  w.heading('Results by case');
-  const table = caseTable(project, results, units);
-  const verdictColumn = table.head.length - 1;
-  w.table(
-    table,
-    [2.6, 1, 1, 1, 1.1, 1.3, 0.8, 1.1, 1.3, 1.1, 1.2].map((weight, i) => ({
-      weight,
-      align: i === 0 ? 'left' : 'right',
-    })),
-    {
-      cellColour: (row, col) =>
-        col === verdictColumn ? (results.cases[row].ok ? PASS : FAIL) : undefined,
-    },
-  );
-  for (const message of caseMessages(results)) w.paragraph(message, 8);
-  w.paragraph(
-    'H: horizontal tension. Largest T: largest wire tension. Use: largest tension as a share of the working limit (minimum breaking load divided by the safety factor). Clearance: least height of the wire above the ground line. Swing: sideways movement in wind.',
-    7.5,
-  );
-}
-
-function setUpSection(
-  w: PdfWriter,
-  project: Project,
-  results: ProjectResults,
-  units: UnitSystem,
-): void {
-  w.heading(SET_UP_HEADING);
-  const span = spanName(project, results.setUpSpan);
-  const explanation = setUpExplanation(
-    fq(units, 'length', results.unstressedLength),
-    temperatureText(units, project.installation.temperature),
-  );
-  w.paragraph(`${explanation} ${sagSpanNote(span)}`, 8.5);
-  w.table(
-    setUpTable(project, results, units),
-    [1.5, 1.2, 1.2, 1.2, 1].map((weight, i) => ({ weight, align: i === 0 ? 'left' : 'right' })),
-    {
-      rowFill: (row) =>
-        isInstallationRow(project, results.setUpChart[row]) ? INSTALLATION_FILL : undefined,
-    },
-  );
-  w.paragraph(
-    pulseCheck(
-      span,
-      results.setUpChart.some((row) => row.returnTime !== null),
-    ),
-    7.5,
-  );
-}
-
-function designSection(w: PdfWriter, project: Project, options: ReportOptions): void {
-  if (!options.design) return;
-  w.heading(DESIGN_HEADING);
-  for (const text of windowParagraphs(project, options.design, options.unitSystem))
-    w.paragraph(text, 8.5);
-  for (const text of settingParagraphs(project, options.design, options.unitSystem))
-    w.paragraph(text, 8.5);
-}
-
-function inputsSection(
-  w: PdfWriter,
-  project: Project,
-  results: ProjectResults,
-  units: UnitSystem,
-): void {
-  w.heading('Span and fixing loads');
-  w.table(
-    supportTable(project, results, units),
-    [2.6, 1, 1, 1.3, 1.4, 0.8, 1.8].map((weight, i) => ({
-      weight,
-      align: i === 0 || i === 3 || i === 6 ? 'left' : 'right',
-    })),
-  );
-  w.heading('Wire and its data source');
-  w.table({ head: ['Property', 'Value', 'Source'], rows: wireLines(project, units) }, [
-    { weight: 1.3 },
-    { weight: 1.5 },
-    { weight: 3.4 },
-  ]);
-  if (project.loads.length > 0) {
-    w.heading('Hung loads');
-    w.table(loadTable(project, units), [
-      { weight: 2.4 },
-      { weight: 0.9 },
-      { weight: 2 },
-      { weight: 1.2, align: 'right' },
-    ]);
-  }
-  w.heading('Installation and limits');
-  for (const line of installationLines(project, units)) w.paragraph(line);
-}
-
-function closingSections(
+async function plotAndCases(
   w: PdfWriter,
   project: Project,
   results: ProjectResults,
   options: ReportOptions,
-): void {
-  w.heading('Method');
-  for (const text of methodParagraphs(project, results, options.parabola, options.unitSystem))
-    w.paragraph(text);
-  w.heading('Cautions');
-  for (const caution of CAUTIONS) w.paragraph(`${caution.title}. ${caution.text}`);
+) {
+  const units = options.unitSystem;
+  const table = caseTable(project, results, units);
+  const style = caseTableStyle(project, results, units);
+  const tableHeight = w.tableHeight(table, CASE_COLUMNS, style) + 12;
+  const height = Math.max(
+    55,
+    Math.min(w.width / options.plotAspect, w.remaining - tableHeight - 6),
+  );
+  w.ensure(height + 6);
+  if (options.plot) {
+    applyFontFamily(options.plot, w.fonts);
+    const { svg2pdf } = await import('svg2pdf.js');
+    await svg2pdf(options.plot, w.doc, { x: w.left, y: w.y, width: w.width, height });
+  } else {
+    w.paragraph('The sag plot could not be drawn for this report; the numbers stand.');
+  }
+  w.y += height + 1;
+  w.paragraph(
+    'Wire height for each case (solid) with the closed-form parabola (dashed); ground and clearance zones shaded.',
+    7,
+    'normal',
+    MUTED,
+  );
+  w.heading('Results by case', tableHeight - 10);
+  w.table(table, CASE_COLUMNS, style);
 }
 
 export async function buildPdfReport(
@@ -297,23 +256,28 @@ export async function buildPdfReport(
     compress: true,
   });
   doc.setProperties({
-    title: pdfText(project.title),
+    title: project.title,
     subject: 'Wire span report',
-    creator: 'Sagwright',
+    creator: `Sagwright ${options.appVersion}`,
   });
-  const w = new PdfWriter(doc);
-  header(w, project, options);
-  detailsBlock(w, options.details);
-  summaryBox(w, project, results, options);
+  const fonts = await ReportFonts.load(doc, options.fonts, userTexts(project));
+  const w = new PdfWriter(doc, fonts);
+  titleBlock(w, project, options);
+  decisionBlocks(w, project, results, options);
   keyNumberRow(w, project, results, options.unitSystem);
-  await plotBlock(w, options);
-  resultsSection(w, project, results, options.unitSystem);
-  doc.addPage();
-  w.y = w.margin;
-  setUpSection(w, project, results, options.unitSystem);
-  designSection(w, project, options);
-  inputsSection(w, project, results, options.unitSystem);
-  closingSections(w, project, results, options);
-  w.footers(`Sagwright report - ${project.title}`, `Caution: ${CAUTION_SUMMARY}`);
+  await plotAndCases(w, project, results, options);
+  w.newPage();
+  fixingSection(w, project, results, options.unitSystem);
+  basisSection(w, project, results, options);
+  recordSection(w, project, options);
+  appendixSections(w, project, results, options);
+  w.frame(
+    {
+      title: project.title,
+      revision: revisionLabel(project.report),
+      date: options.generatedAt.toISOString().slice(0, 10),
+    },
+    `Caution: ${CAUTION_SUMMARY}`,
+  );
   return doc;
 }

@@ -46,8 +46,14 @@ function parseJson(text: string): { ok: true; value: unknown } | { ok: false; me
   try {
     return { ok: true, value: JSON.parse(text) };
   } catch (error) {
-    const reason = error instanceof Error ? error.message : String(error);
-    return { ok: false, message: `is not valid JSON (${reason})` };
+    // The parser's own message quotes the text (a file's first line could be anything): only
+    // the place is reported.
+    const at = /position (\d+)/.exec(error instanceof Error ? error.message : '');
+    if (!at) return { ok: false, message: 'is not valid JSON' };
+    const before = text.slice(0, Number(at[1]));
+    const line = before.split('\n').length;
+    const column = before.length - before.lastIndexOf('\n');
+    return { ok: false, message: `is not valid JSON (line ${line}, column ${column})` };
   }
 }
 

@@ -5,6 +5,8 @@
  */
 import * as lzModule from 'lz-string';
 import type { Project } from '../core/index.ts';
+import { decompressBounded } from './boundedLz.ts';
+import { MAX_FILE_BYTES } from './jsonGuards.ts';
 import { type OpenResult, openProjectText } from './projectFile.ts';
 
 type LzString = typeof import('lz-string');
@@ -14,6 +16,8 @@ const lz: LzString = (lzModule as unknown as { default?: LzString }).default ?? 
 export const SHARE_KEY = 'project';
 /** Longer fragments than this are refused before decompressing (browsers cap URLs near 2 MB). */
 export const MAX_FRAGMENT_CHARS = 400_000;
+/** Decompression stops before the text passes this many characters (a project file's limit). */
+export const MAX_SHARED_TEXT_CHARS = MAX_FILE_BYTES;
 
 /** The fragment, with its leading '#'. */
 export function shareFragment(project: Project): string {
@@ -42,16 +46,21 @@ export function openShareFragment(hash: string): OpenResult {
       ok: false,
       issues: [{ path: '(link)', message: `is longer than ${MAX_FRAGMENT_CHARS} characters` }],
     };
-  let text: string | null = null;
-  try {
-    text = lz.decompressFromEncodedURIComponent(packed);
-  } catch {
-    text = null;
-  }
-  if (!text)
+  const unpacked = decompressBounded(packed, MAX_SHARED_TEXT_CHARS);
+  if (!unpacked.ok && unpacked.reason === 'too-large')
+    return {
+      ok: false,
+      issues: [
+        {
+          path: '(link)',
+          message: `unpacks to more than ${MAX_SHARED_TEXT_CHARS / 1e6} million characters, more than any project; it was not opened`,
+        },
+      ],
+    };
+  if (!unpacked.ok || unpacked.text === '')
     return {
       ok: false,
       issues: [{ path: '(link)', message: 'is damaged or cut short; ask for the link again' }],
     };
-  return openProjectText(text);
+  return openProjectText(unpacked.text);
 }

@@ -17,6 +17,9 @@ export interface DesignState {
   /** Temperature of the day, °C, or null when none is entered. */
   temperatureNow: number | null;
   setTemperatureNow(temperature: number | null): void;
+  /** The chooser tries every catalogue wire, so it runs only once the person asks for it. */
+  chooserOn: boolean;
+  setChooserOn(on: boolean): void;
 }
 
 export const useDesignStore = create<DesignState>()((set) => ({
@@ -27,4 +30,6 @@ export const useDesignStore = create<DesignState>()((set) => ({
   error: null,
   temperatureNow: null,
   setTemperatureNow: (temperatureNow) => set({ temperatureNow }),
+  chooserOn: false,
+  setChooserOn: (chooserOn) => set({ chooserOn }),
 }));

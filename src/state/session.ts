@@ -8,7 +8,7 @@
  * once, the document stays in memory, and leaving the page asks first. Solving goes through the
  * solver link.
  */
-import type { Project } from '../core/index.ts';
+import { type Project, validateProject } from '../core/index.ts';
 import {
   claim,
   type KeyValueStorage,
@@ -22,7 +22,13 @@ import type { ResultsStore } from './resultsStore.ts';
 import type { SessionStore } from './sessionStore.ts';
 import { linkSolver, type SolverPort } from './solverLink.ts';
 
-export type TabMessage = { type: 'claimed'; tab: string } | { type: 'saved'; tab: string };
+/**
+ * Between tabs. A saved document travels with its message: another tab's copy of the storage
+ * may not have caught up yet when the message arrives.
+ */
+export type TabMessage =
+  | { type: 'claimed'; tab: string }
+  | { type: 'saved'; tab: string; project: Project };
 
 export interface ChannelLike {
   postMessage(message: TabMessage): void;
@@ -72,6 +78,8 @@ export function createSession(options: SessionOptions) {
   let quiet = false; // replacing the document from storage: not an edit to save
   let stops: (() => void)[] = [];
   let guarded = false;
+  /** The last document another tab said it saved. */
+  let latestElsewhere: Project | undefined;
 
   function setGuard(on: boolean) {
     if (on === guarded || !options.unloadTarget) return;
@@ -84,7 +92,7 @@ export function createSession(options: SessionOptions) {
     if (outcome.ok) {
       session.setState({ save: { kind: 'saved' }, unsavedEdits: false });
       setGuard(false);
-      channel?.postMessage({ type: 'saved', tab });
+      channel?.postMessage({ type: 'saved', tab, project: store.getState().project });
     } else if (outcome.reason === 'otherTab') {
       session.setState({ otherTabEditing: true, unsavedEdits: true });
       setGuard(true);
@@ -112,8 +120,26 @@ export function createSession(options: SessionOptions) {
     record(writeAutosave(storage, project, tab));
   }
 
-  /** Show the stored document without treating it as an edit; false if none is usable. */
+  /** Show a document without treating it as an edit. */
+  function show(project: Project) {
+    quiet = true;
+    try {
+      store.getState().resetProject(project);
+    } finally {
+      quiet = false;
+    }
+  }
+
+  /**
+   * Show the other tab's latest document (from its last message, else from storage) without
+   * treating it as an edit; false if none is usable.
+   */
   function showStored(): boolean {
+    if (latestElsewhere) {
+      show(latestElsewhere);
+      latestElsewhere = undefined;
+      return true;
+    }
     const opened = openAutosave(storage, store.getState().project);
     if (opened.recovery || opened.project === store.getState().project) return false;
     quiet = true;
@@ -132,6 +158,7 @@ export function createSession(options: SessionOptions) {
       record(claimed);
       return;
     }
+    latestElsewhere = undefined;
     session.setState({ otherTabEditing: false });
     channel?.postMessage({ type: 'claimed', tab });
     record(writeAutosave(storage, store.getState().project, tab));
@@ -141,9 +168,12 @@ export function createSession(options: SessionOptions) {
     if (message.tab === tab || paused) return;
     if (message.type === 'claimed') {
       session.setState({ otherTabEditing: true });
-    } else if (session.getState().otherTabEditing && !session.getState().unsavedEdits) {
-      showStored();
+      return;
     }
+    const checked = validateProject(message.project);
+    if (!checked.ok) return;
+    latestElsewhere = checked.project;
+    if (session.getState().otherTabEditing && !session.getState().unsavedEdits) showStored();
   }
 
   return {

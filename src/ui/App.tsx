@@ -13,12 +13,7 @@ import { connectDesign } from '../worker/connectDesign.ts';
 import { CautionsStrip } from './CautionsStrip.tsx';
 import { ExportMenu } from './export/ExportMenu.tsx';
 import { TextField } from './fields/TextField.tsx';
-import { CasesPanel } from './panels/CasesPanel.tsx';
-import { InstallationPanel } from './panels/InstallationPanel.tsx';
-import { LimitsPanel } from './panels/LimitsPanel.tsx';
-import { LoadsPanel } from './panels/LoadsPanel.tsx';
-import { SpanPanel } from './panels/SpanPanel.tsx';
-import { WirePanel } from './panels/WirePanel.tsx';
+import { InputSections } from './InputSections.tsx';
 import { ResultsPane } from './ResultsPane.tsx';
 import { SessionNotices } from './SessionNotices.tsx';
 import { Toolbar } from './Toolbar.tsx';
@@ -27,12 +22,7 @@ import { UpdateNotice } from './UpdateNotice.tsx';
 function Inputs({ locked }: { locked: boolean }) {
   return (
     <section className="inputs" aria-label="Design inputs" inert={locked}>
-      <SpanPanel />
-      <WirePanel />
-      <LoadsPanel />
-      <InstallationPanel />
-      <CasesPanel />
-      <LimitsPanel />
+      <InputSections />
     </section>
   );
 }

@@ -1,10 +1,13 @@
 /**
  * Wires the document and the temperature of the day to a second solver worker that works out
- * the design aids, so the window and chooser never hold up the results of an edit.
+ * the design aids, so the window and chooser never hold up the results of an edit: a document
+ * is sent only once the main solver's results for it are on screen (fast typing sends nothing
+ * until it pauses), and a new temperature is sent at once for the document last solved.
  */
 import { useDesignStore } from '../state/designStore.ts';
 import { useProjectStore } from '../state/projectStore.ts';
-import { createSolverWorker } from './createSolverWorker.ts';
+import { useResultsStore } from '../state/resultsStore.ts';
+import { createDesignWorker } from './createSolverWorker.ts';
 import type { WorkerLike } from './protocol.ts';
 import { type SolveOutcome, SolverClient } from './solverClient.ts';
 
@@ -24,22 +27,30 @@ function applyOutcome(outcome: SolveOutcome): void {
 }
 
 /** Starts answering for the current document and every later one; returns a stop function. */
-export function connectDesign(createWorker: () => WorkerLike = createSolverWorker): () => void {
+export function connectDesign(createWorker: () => WorkerLike = createDesignWorker): () => void {
   const client = new SolverClient({ createWorker, onOutcome: applyOutcome, watchdogMs: 60_000 });
-  const ask = () => {
+  let asked: unknown = null;
+  const ask = (force: boolean) => {
+    const { results, resultsProject, stale } = useResultsStore.getState();
+    const project = useProjectStore.getState().project;
+    if (!results || stale || resultsProject !== project) return;
+    if (!force && asked === project) return;
+    asked = project;
     useDesignStore.setState({ stale: true });
-    client.solve(useProjectStore.getState().project, {
-      temperatureNow: useDesignStore.getState().temperatureNow,
-    });
+    const { temperatureNow, chooserOn } = useDesignStore.getState();
+    client.solve(project, { temperatureNow, choose: chooserOn });
   };
-  ask();
+  ask(false);
+  const stopResults = useResultsStore.subscribe(() => ask(false));
   const stopProject = useProjectStore.subscribe((state, previous) => {
-    if (state.project !== previous.project) ask();
+    if (state.project !== previous.project) useDesignStore.setState({ stale: true });
   });
   const stopTemperature = useDesignStore.subscribe((state, previous) => {
-    if (state.temperatureNow !== previous.temperatureNow) ask();
+    if (state.temperatureNow !== previous.temperatureNow || state.chooserOn !== previous.chooserOn)
+      ask(true);
   });
   return () => {
+    stopResults();
     stopProject();
     stopTemperature();
     client.dispose();

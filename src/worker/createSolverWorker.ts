@@ -6,3 +6,10 @@ export function createSolverWorker(): WorkerLike {
     type: 'module',
   }) as unknown as WorkerLike;
 }
+
+/** Starts the design-aids worker (the same code under its own script name). */
+export function createDesignWorker(): WorkerLike {
+  return new Worker(new URL('./design.worker.ts', import.meta.url), {
+    type: 'module',
+  }) as unknown as WorkerLike;
+}

@@ -21,6 +21,8 @@ import {
 export interface DesignQuestion {
   /** Temperature of the day, °C, or null when none is entered. */
   temperatureNow: number | null;
+  /** Try every catalogue wire (the costly part; only when asked). */
+  choose?: boolean;
 }
 
 export interface DesignAnswers {
@@ -29,33 +31,46 @@ export interface DesignAnswers {
   /** The installation horizontal tension of the current design (N) and where it sits. */
   currentTension: number;
   position: string;
-  choices: WireChoice[];
+  /** Null until the chooser is asked for. */
+  choices: WireChoice[] | null;
   setting: DaySetting | null;
   /** Time the window and the chooser took, ms (for the record). */
   windowMs: number;
   chooserMs: number;
 }
 
-let cache: { key: string; answers: Omit<DesignAnswers, 'setting'> } | undefined;
+type Kept = Omit<DesignAnswers, 'setting'>;
+let cache: { key: string; answers: Kept } | undefined;
 
-function windowAndChoices(project: Project, results: ProjectResults) {
+function withChoices(project: Project, results: ProjectResults, answers: Kept): Kept {
+  if (answers.choices) return answers;
+  const start = performance.now();
+  const choices = chooseWires(project, undefined, results.mesh.refinement);
+  return { ...answers, choices, chooserMs: performance.now() - start };
+}
+
+function windowAndChoices(project: Project, results: ProjectResults, choose: boolean): Kept {
   const key = JSON.stringify(project);
-  if (cache?.key === key) return cache.answers;
+  if (cache?.key === key) {
+    if (choose) cache.answers = withChoices(project, results, cache.answers);
+    return cache.answers;
+  }
   const currentTension = results.cases[0]?.horizontalTension ?? Number.NaN;
   const start = performance.now();
-  const window = tensionWindow(project);
-  const curve = windowCurve(project, window, currentTension);
+  const refinement = results.mesh.refinement;
+  const window = tensionWindow(project, refinement);
+  const curve = windowCurve(project, window, currentTension, 40, refinement);
   const windowMs = performance.now() - start;
-  const choices = chooseWires(project);
-  const answers = {
+  let answers: Kept = {
     window,
     curve,
     currentTension,
     position: windowPosition(project, window, currentTension),
-    choices,
+    choices: null,
     windowMs,
-    chooserMs: performance.now() - start - windowMs,
+    chooserMs: 0,
   };
+  if (choose) answers = withChoices(project, results, answers);
   cache = { key, answers };
   return answers;
 }
@@ -66,6 +81,7 @@ export function answerDesign(
   question: DesignQuestion,
 ): DesignAnswers {
   const t = question.temperatureNow;
-  const setting = t !== null && Number.isFinite(t) ? settingAt(project, t) : null;
-  return { ...windowAndChoices(project, results), setting };
+  const setting =
+    t !== null && Number.isFinite(t) ? settingAt(project, t, results.mesh.refinement) : null;
+  return { ...windowAndChoices(project, results, question.choose === true), setting };
 }

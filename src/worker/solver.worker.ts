@@ -2,7 +2,7 @@
  * The solver worker: validates and solves each document it is sent and replies with the
  * request's id, so the main thread can drop replies to requests it no longer wants.
  */
-import { solveProject, validateProject } from '../core/index.ts';
+import { INTERNAL_ERROR_MESSAGE, solveProject, validateProject } from '../core/index.ts';
 import { answerDesign } from './designAnswers.ts';
 import type { SolveReply, SolveRequest, WorkerMessage } from './protocol.ts';
 
@@ -17,9 +17,9 @@ function solve(request: SolveRequest): SolveReply {
     if (!request.design) return { id: request.id, ok: true, results };
     const design = answerDesign(checked.project, results, request.design);
     return { id: request.id, ok: true, results, design };
-  } catch (error) {
-    const message = error instanceof Error ? error.message : String(error);
-    return { id: request.id, ok: false, message };
+  } catch {
+    // The core does not throw; should it ever, the person gets a sentence, not the raw error.
+    return { id: request.id, ok: false, message: INTERNAL_ERROR_MESSAGE };
   }
 }
 

@@ -34,7 +34,8 @@ export function singleSpan(spec: SpanSpec): Project {
       massPerLength: spec.massPerLength,
       axialStiffness: spec.axialStiffness,
       thermalExpansion: spec.thermalExpansion ?? 0,
-      breakingLoad: spec.breakingLoad ?? 1e9,
+      // No wire stretches more than 40 % before it breaks (the validator's rule).
+      breakingLoad: spec.breakingLoad ?? Math.min(1e9, 0.4 * spec.axialStiffness),
     },
     loads: spec.loads ?? [],
     installation: {

@@ -85,9 +85,12 @@ function fieldCheckNote(project: Project, s: DaySetting): string {
   );
 }
 
-/** The setting at exactly `temperature` °C for a validated project. */
-export function settingAt(project: Project, temperature: number): DaySetting {
-  const model = buildProjectModel(project);
+/**
+ * The setting at exactly `temperature` °C for a validated project, on the mesh of `refinement`
+ * (pass results.mesh.refinement to match the set-up chart exactly).
+ */
+export function settingAt(project: Project, temperature: number, refinement = 1): DaySetting {
+  const model = buildProjectModel(project, refinement);
   const target = findInstallationTension(model, project.installation.target);
   const installed = solveInstallation(model, target.tensionN);
   const state = solveSetUpState(model, installed.unstressed, temperature, target.tensionN);

@@ -5,6 +5,7 @@
  */
 import type { Project } from '../project.ts';
 import { buildProjectModel } from '../projectModel.ts';
+import { solveProject } from '../solveProject.ts';
 import { windowAdvice } from './windowAdvice.ts';
 import { findWindowEnds, type WindowEnd } from './windowEnds.ts';
 
@@ -17,8 +18,25 @@ export interface TensionWindow {
   advice: string[];
 }
 
-export function tensionWindow(project: Project): TensionWindow {
-  const model = buildProjectModel(project);
+/**
+ * The mesh refinement solveProject settles on for this project (it refines until the estimated
+ * discretisation error is below its target), so the design aids solve on the same mesh.
+ */
+export function meshRefinement(project: Project): number {
+  return solveProject(project).mesh.refinement;
+}
+
+/** The tension window on the mesh of `refinement` (default: the one solveProject uses). */
+export function tensionWindow(
+  project: Project,
+  refinement = meshRefinement(project),
+): TensionWindow {
+  const model = buildProjectModel(project, refinement);
   const ends = findWindowEnds(model);
-  return { low: ends.low, high: ends.high, empty: ends.empty, advice: windowAdvice(model, ends) };
+  return {
+    low: ends.low,
+    high: ends.high,
+    empty: ends.empty,
+    advice: windowAdvice(model, ends, refinement),
+  };
 }

@@ -46,8 +46,8 @@ export function hungMass(project: Project, gravity: number): number {
 }
 
 /** Worst clearance margin at the highest allowed tension for hung loads scaled by k (m). */
-function marginWithLoadsScaled(project: Project, k: number): number {
-  const ends = findWindowEnds(buildProjectModel(scaleHungLoads(project, k)), {
+function marginWithLoadsScaled(project: Project, k: number, refinement: number): number {
+  const ends = findWindowEnds(buildProjectModel(scaleHungLoads(project, k), refinement), {
     tolerance: 1e-9,
     stopWhenEmpty: true,
   });
@@ -55,16 +55,16 @@ function marginWithLoadsScaled(project: Project, k: number): number {
   return ends.atHigh.clearanceMargin;
 }
 
-function lighterLoadsAdvice(model: ProjectModel): string | null {
+function lighterLoadsAdvice(model: ProjectModel, refinement: number): string | null {
   const project = model.project;
   const mass = hungMass(project, model.env.gravity);
   if (!(mass > 0)) return null;
-  const bare = marginWithLoadsScaled(project, 0);
+  const bare = marginWithLoadsScaled(project, 0, refinement);
   if (bare < 0)
     return 'Lighter hung loads alone do not open it: even with nothing hung on the wire some case fails.';
-  const root = brent((k) => marginWithLoadsScaled(project, k), 0, 1, 1e-4, 40, {
+  const root = brent((k) => marginWithLoadsScaled(project, k, refinement), 0, 1, 1e-4, 40, {
     fa: bare,
-    fb: marginWithLoadsScaled(project, 1),
+    fb: marginWithLoadsScaled(project, 1, refinement),
   });
   if (!root.converged) return null;
   const k = Math.floor(root.x * 1000) / 1000;
@@ -91,7 +91,7 @@ function strongerWireAdvice(model: ProjectModel, atLow: WindowResponse): string 
   );
 }
 
-function shutAdvice(model: ProjectModel, ends: WindowEnds): string[] {
+function shutAdvice(model: ProjectModel, ends: WindowEnds, refinement: number): string[] {
   const p = model.project;
   const advice: string[] = [];
   if (ends.reason === 'tension' && ends.atFloor) {
@@ -115,14 +115,14 @@ function shutAdvice(model: ProjectModel, ends: WindowEnds): string[] {
   if (ends.high && ends.atHigh)
     advice.push(raiseFixingsAdvice(p, ends.atHigh, ends.high.horizontalTension));
   if (ends.reason === 'overlap' && ends.atLow) advice.push(strongerWireAdvice(model, ends.atLow));
-  const lighter = lighterLoadsAdvice(model);
+  const lighter = lighterLoadsAdvice(model, refinement);
   if (lighter) advice.push(lighter);
   return advice;
 }
 
 /** Advice for a window: where its ends come from, or what would open it. */
-export function windowAdvice(model: ProjectModel, ends: WindowEnds): string[] {
-  if (ends.empty) return shutAdvice(model, ends);
+export function windowAdvice(model: ProjectModel, ends: WindowEnds, refinement = 1): string[] {
+  if (ends.empty) return shutAdvice(model, ends, refinement);
   const p = model.project;
   const advice: string[] = [];
   const loads =

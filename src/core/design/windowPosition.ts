@@ -45,8 +45,9 @@ export function windowCurve(
   window: TensionWindow,
   currentN: number,
   count = 40,
+  refinement = 1,
 ): WindowCurve {
-  const model = buildProjectModel(project);
+  const model = buildProjectModel(project, refinement);
   const response = createWindowResponse(model);
   const ends = [window.low?.horizontalTension, window.high?.horizontalTension, currentN].filter(
     (x): x is number => x !== undefined && Number.isFinite(x) && x > 0,

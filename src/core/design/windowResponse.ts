@@ -1,11 +1,13 @@
 /**
  * The checks of every case as functions of the installation horizontal tension H₀ (N): the
  * installation at H₀ fixes the cut lengths, each case is a change of state at those lengths.
- * Tension check: utilisation u = T_max · SF / breaking load (passes at u ≤ 1). Clearance checks:
+ * Tension check: utilisation u = T_max · SF / (breaking load · end-fitting efficiency) (passes at
+ * u ≤ 1). Clearance checks:
  * margin = clearance − required (m) over the whole span and each zone (passes at ≥ 0).
  */
 import { clearanceOver, largestSag, largestStateTension, type SolvedSpan } from '../caseChecks.ts';
-import { loadStateOfCase } from '../loads.ts';
+import { resolveEndFittings } from '../endFittings.ts';
+import { hungDrops, loadStateOfCase } from '../loads.ts';
 import type { ProjectModel } from '../projectModel.ts';
 import { solveChangeOfState, solveInstallation } from '../states.ts';
 
@@ -37,18 +39,28 @@ export interface WindowResponse {
   clearanceIndex: number;
 }
 
-/** Every check of one solved state, in the contract's words. */
-function stateChecks(model: ProjectModel, name: string, spans: SolvedSpan[]): CheckValue[] {
+/**
+ * Every check of one solved state, in the contract's words, as checkCase computes them:
+ * utilisation on the breaking load times the end fittings' efficiency, clearance to the lowest
+ * of the wire and the items hung on it (their drops) when the state carries the hung loads.
+ */
+function stateChecks(
+  model: ProjectModel,
+  name: string,
+  spans: SolvedSpan[],
+  withLoads: boolean,
+): CheckValue[] {
   const p = model.project;
   const ground = p.ground ?? [];
-  const utilisation =
-    (largestStateTension(spans) * p.limits.safetyFactor) / model.wire.breakingLoad;
+  const drops = hungDrops(p.loads, withLoads);
+  const capacityN = model.wire.breakingLoad * resolveEndFittings(p.limits.endFittings).efficiency;
+  const utilisation = (largestStateTension(spans) * p.limits.safetyFactor) / capacityN;
   const checks: CheckValue[] = [
     { case: name, check: TENSION_CHECK, value: utilisation, limit: 1 },
     {
       case: name,
       check: CLEARANCE_CHECK,
-      value: clearanceOver(spans, ground, -Infinity, Infinity).value,
+      value: clearanceOver(spans, ground, -Infinity, Infinity, drops).value,
       limit: p.limits.minClearance,
     },
   ];
@@ -56,7 +68,7 @@ function stateChecks(model: ProjectModel, name: string, spans: SolvedSpan[]): Ch
     checks.push({
       case: name,
       check: zone.label ?? `Zone ${i + 1}`,
-      value: clearanceOver(spans, ground, zone.from, zone.to).value,
+      value: clearanceOver(spans, ground, zone.from, zone.to, drops).value,
       limit: zone.height,
     });
   });
@@ -85,7 +97,7 @@ export function createCheckEvaluator(model: ProjectModel) {
       -1,
       model.installation.name,
       installed.spans,
-      stateChecks(model, model.installation.name, installed.spans),
+      stateChecks(model, model.installation.name, installed.spans, model.installation.withLoads),
     );
     for (const [i, weather] of model.project.cases.entries()) {
       if (only && !only.has(i)) continue;
@@ -98,7 +110,12 @@ export function createCheckEvaluator(model: ProjectModel) {
       );
       if (!state.solved) return false;
       guesses[i] = state.spans.map((s) => s.tensionN);
-      visit(i, weather.name, state.spans, stateChecks(model, weather.name, state.spans));
+      visit(
+        i,
+        weather.name,
+        state.spans,
+        stateChecks(model, weather.name, state.spans, weather.withLoads),
+      );
     }
     return true;
   };

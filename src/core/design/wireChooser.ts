@@ -53,8 +53,9 @@ export function chooseWire(
   spec: WireSpec,
   wire: WireProperties,
   lowGuessN?: number,
+  refinement = 1,
 ): WireChoice | null {
-  const model = buildProjectModel({ ...project, wire: spec });
+  const model = buildProjectModel({ ...project, wire: spec }, refinement);
   const ends = findWindowEnds(model, { stopWhenEmpty: true, tolerance: 1e-9, lowGuessN });
   if (ends.empty || !ends.high) return null;
   const high = ends.high.horizontalTension;
@@ -70,13 +71,20 @@ export function chooseWire(
   };
 }
 
-/** Every wire that works, lightest first; optionally only some families. */
-export function chooseWires(project: Project, families?: readonly WireFamily[]): WireChoice[] {
+/**
+ * Every wire that works, lightest first; optionally only some families. Every wire is solved on
+ * the mesh refinement given (default: the file's mesh; pass the project's results.mesh.refinement).
+ */
+export function chooseWires(
+  project: Project,
+  families?: readonly WireFamily[],
+  refinement = 1,
+): WireChoice[] {
   const choices: WireChoice[] = [];
   let lowGuessN: number | undefined;
   for (const { spec, wire } of candidates(project)) {
     if (families && !families.includes(wireFamily(wire.kind))) continue;
-    const choice = chooseWire(project, spec, wire, lowGuessN);
+    const choice = chooseWire(project, spec, wire, lowGuessN, refinement);
     if (choice) choices.push(choice);
     if (choice?.low) lowGuessN = choice.low;
   }

@@ -19,7 +19,7 @@ export function DesignPanel() {
   return (
     <section className="design-panel" aria-labelledby="design-heading" data-out-of-date={stale}>
       <h2 id="design-heading">Find the design</h2>
-      <p className="status" role="status" aria-label="Design aids status">
+      <p className="status" aria-live="polite" data-testid="design-status">
         {error
           ? `The design aids could not be worked out: ${error}`
           : stale

@@ -9,6 +9,7 @@ import { toSi, type UnitSystem, unitSymbol } from '../../core/units.ts';
 import { fixingName, spanName } from '../../deliverables/setUpContent.ts';
 import { useDesignStore } from '../../state/designStore.ts';
 import { fieldText, parseNumber, show } from '../format.ts';
+import { TODAYS_SETTING_ID } from '../sectionIds.ts';
 
 const RANGE_C = [-80, 80] as const;
 
@@ -126,7 +127,7 @@ export function TodaySetting({
   units: UnitSystem;
 }) {
   return (
-    <section className="design-block" aria-labelledby="today-heading">
+    <section className="design-block" id={TODAYS_SETTING_ID} aria-labelledby="today-heading">
       <h3 id="today-heading">Today's setting</h3>
       <p className="setup-note">
         What to set at exactly the temperature of the day (the design's cut length, installation

@@ -12,8 +12,10 @@ import {
   type WireFamily,
 } from '../../core/index.ts';
 import { type UnitSystem, unitSymbol } from '../../core/units.ts';
+import { useDesignStore } from '../../state/designStore.ts';
 import { useProjectStore } from '../../state/projectStore.ts';
 import { num, show } from '../format.ts';
+import { TableScroll } from '../results/TableScroll.tsx';
 
 const FAMILIES: { value: WireFamily | 'all'; label: string }[] = [
   { value: 'all', label: 'All types' },
@@ -75,7 +77,42 @@ function Row({
   );
 }
 
+/** Asks the worker to try every wire (it costs tens of solves, so it waits to be asked). */
+function TryEveryWire() {
+  const on = useDesignStore((s) => s.chooserOn);
+  const setOn = useDesignStore((s) => s.setChooserOn);
+  if (on) return <p className="muted">Trying every wire in the catalogue…</p>;
+  return (
+    <button type="button" onClick={() => setOn(true)}>
+      Try every wire in the catalogue
+    </button>
+  );
+}
+
 export function WireChooser({
+  choices,
+  project,
+  units,
+}: {
+  choices: WireChoice[] | null;
+  project: Project;
+  units: UnitSystem;
+}) {
+  if (!choices)
+    return (
+      <section className="design-block" aria-labelledby="chooser-heading">
+        <h3 id="chooser-heading">Wires that work</h3>
+        <p className="setup-note">
+          Tries every catalogue wire (and your own) on this project and lists the ones with an open
+          window, lightest first, each with a suggested tension.
+        </p>
+        <TryEveryWire />
+      </section>
+    );
+  return <ChooserList choices={choices} project={project} units={units} />;
+}
+
+function ChooserList({
   choices,
   project,
   units,
@@ -115,7 +152,7 @@ export function WireChooser({
       {shown.length === 0 ? (
         <p>No wire of this type works for this project.</p>
       ) : (
-        <div className="table-scroll">
+        <TableScroll>
           <table className="results" aria-labelledby="chooser-heading">
             <thead>
               <tr>
@@ -140,7 +177,7 @@ export function WireChooser({
               ))}
             </tbody>
           </table>
-        </div>
+        </TableScroll>
       )}
       {shown.length > SHORT_LIST && (
         <button type="button" onClick={() => setAll(!all)}>

@@ -38,7 +38,11 @@ export function ClientView({
     let drawn = false;
     loadPlotly()
       .then((Plotly) =>
-        Plotly.newPlot(host, data, layout, { displayModeBar: false, responsive: true }),
+        Plotly.newPlot(host, data, layout, {
+          displayModeBar: false,
+          responsive: true,
+          typesetMath: false,
+        }),
       )
       .then(
         async () => {

@@ -3,20 +3,43 @@
  * browser, PDF report, plot images, CSV and the client view; plus the shared-project banner.
  * Refused files list the field paths and leave the open project as it was.
  */
-import { useEffect, useMemo, useRef, useState } from 'react';
+import { lazy, Suspense, useEffect, useMemo, useRef, useState } from 'react';
 import './export.css';
+import type { Project, ProjectResults } from '../../core/index.ts';
 import { type OpenResult, PROJECT_FILE_EXTENSION } from '../../deliverables/projectFile.ts';
-import { commitOpened } from '../../state/commit.ts';
+import { commit, commitOpened } from '../../state/commit.ts';
 import { useProjectStore } from '../../state/projectStore.ts';
 import { useUiStore } from '../../state/uiStore.ts';
-import { ClientView } from './ClientView.tsx';
 import { ExportNotice, type Notice, SharedBanner } from './ExportNotices.tsx';
-import * as actions from './exportActions.ts';
-import { LibraryDialog } from './LibraryDialog.tsx';
-import { ReportDialog } from './ReportDialog.tsx';
 import { useSharedProject } from './useSharedProject.ts';
 
+// The dialogs load when first opened, so the first screen does not wait for their code.
+const ClientView = lazy(() => import('./ClientView.tsx').then((m) => ({ default: m.ClientView })));
+/** What the menu items do: loaded on first use (and when the menu opens). */
+const loadActions = () => import('./exportActions.ts');
+const LibraryDialog = lazy(() =>
+  import('./LibraryDialog.tsx').then((m) => ({ default: m.LibraryDialog })),
+);
+const ReportDialog = lazy(() =>
+  import('./ReportDialog.tsx').then((m) => ({ default: m.ReportDialog })),
+);
+
 type Dialog = 'none' | 'report' | 'library' | 'client';
+
+/** The report dialog's record goes into the document (one undo step) before the report is made. */
+function saveRecord(withRecord: Project) {
+  const current = useProjectStore.getState().project;
+  if (JSON.stringify(current.report) === JSON.stringify(withRecord.report))
+    return { ok: true as const, project: current };
+  return commit(
+    (current) => {
+      const next: Project = { ...current, report: withRecord.report };
+      if (!withRecord.report) delete next.report;
+      return next;
+    },
+    { what: 'Report record' },
+  );
+}
 
 /** Escape or a click elsewhere closes the open menu; Escape also puts focus back on its button. */
 function useMenuDismiss(
@@ -44,6 +67,22 @@ function useMenuDismiss(
   }, [open, close, root, button]);
 }
 
+/** The client view's results, solved on the spot for the open document while it is shown. */
+function useClientResults(shown: boolean, project: Project): ProjectResults | null {
+  const [solved, setSolved] = useState<{ project: Project; results: ProjectResults } | null>(null);
+  useEffect(() => {
+    if (!shown) return;
+    let current = true;
+    loadActions().then((actions) => {
+      if (current) setSolved({ project, results: actions.solved(project) });
+    });
+    return () => {
+      current = false;
+    };
+  }, [shown, project]);
+  return shown && solved?.project === project ? solved.results : null;
+}
+
 export function ExportMenu() {
   const project = useProjectStore((s) => s.project);
   const units = useUiStore((s) => s.unitSystem);
@@ -58,10 +97,10 @@ export function ExportMenu() {
   const closeMenu = useMemo(() => () => setOpen(false), []);
   const closeDialog = useMemo(() => () => setDialog('none'), []);
   useMenuDismiss(open, closeMenu, root, menuButton);
-  const clientResults = useMemo(
-    () => (dialog === 'client' ? actions.solved(project) : null),
-    [dialog, project],
-  );
+  const clientResults = useClientResults(dialog === 'client', project);
+  useEffect(() => {
+    if (open) void loadActions();
+  }, [open]);
 
   /** `what` names the file made, e.g. "The plot SVG". */
   const run = (what: string, work: () => unknown) => async () => {
@@ -88,6 +127,7 @@ export function ExportMenu() {
   const copyLink = async () => {
     setOpen(false);
     menuButton.current?.focus();
+    const actions = await loadActions();
     const url = actions.shareLinkFor(project);
     const copied = await actions.copyText(url);
     setNotice(
@@ -120,11 +160,14 @@ export function ExportMenu() {
   const onFile = async (event: React.ChangeEvent<HTMLInputElement>) => {
     const file = event.target.files?.[0];
     event.target.value = '';
-    if (file) applyOpened(await actions.openProjectFile(file), `“${file.name}”`);
+    if (file) applyOpened(await (await loadActions()).openProjectFile(file), `“${file.name}”`);
   };
 
   const items: [string, () => void][] = [
-    ['Save file', run('The project file', () => actions.saveProjectFile(project))],
+    [
+      'Save file',
+      run('The project file', async () => (await loadActions()).saveProjectFile(project)),
+    ],
     [
       'Open file…',
       () => {
@@ -135,13 +178,28 @@ export function ExportMenu() {
     ['Copy share link', copyLink],
     ['Projects in this browser…', show('library')],
     ['PDF report…', show('report')],
-    ['Plot as PNG', run('The plot PNG', () => actions.savePlotImage(project, units, 'png', 1))],
+    [
+      'Plot as PNG',
+      run('The plot PNG', async () =>
+        (await loadActions()).savePlotImage(project, units, 'png', 1),
+      ),
+    ],
     [
       'Plot as PNG, 2× for slides',
-      run('The 2× plot PNG', () => actions.savePlotImage(project, units, 'png', 2)),
+      run('The 2× plot PNG', async () =>
+        (await loadActions()).savePlotImage(project, units, 'png', 2),
+      ),
     ],
-    ['Plot as SVG', run('The plot SVG', () => actions.savePlotImage(project, units, 'svg', 1))],
-    ['Wire profiles as CSV', run('The wire profiles CSV', () => actions.saveCsv(project, units))],
+    [
+      'Plot as SVG',
+      run('The plot SVG', async () =>
+        (await loadActions()).savePlotImage(project, units, 'svg', 1),
+      ),
+    ],
+    [
+      'Wire profiles as CSV',
+      run('The wire profiles CSV', async () => (await loadActions()).saveCsv(project, units)),
+    ],
     ['Client view', show('client')],
   ];
 
@@ -184,35 +242,47 @@ export function ExportMenu() {
         onGoBack={shared.goBack}
         onDismiss={shared.dismiss}
       />
-      {dialog === 'report' && (
-        <ReportDialog
-          busy={busy}
-          returnFocus={menuButton}
-          onClose={closeDialog}
-          onCreate={(paper, details) => {
-            run('The PDF report', () => actions.saveReport(project, units, paper, details))().then(
-              closeDialog,
-            );
-          }}
-        />
-      )}
-      {dialog === 'library' && (
-        <LibraryDialog
-          project={project}
-          returnFocus={menuButton}
-          onOpened={(r) => applyOpened(r, 'The saved project')}
-          onClose={closeDialog}
-        />
-      )}
-      {dialog === 'client' && clientResults && (
-        <ClientView
-          project={project}
-          results={clientResults}
-          units={units}
-          returnFocus={menuButton}
-          onClose={closeDialog}
-        />
-      )}
+      <Suspense fallback={null}>
+        {dialog === 'report' && (
+          <ReportDialog
+            project={project}
+            busy={busy}
+            returnFocus={menuButton}
+            onClose={closeDialog}
+            onCreate={(request) => {
+              const saved = saveRecord(request.project);
+              if (!saved.ok) {
+                setNotice({
+                  kind: 'refused',
+                  title: 'The report record was not saved',
+                  issues: saved.issues,
+                });
+                return;
+              }
+              run('The PDF report', async () =>
+                (await loadActions()).saveReport({ ...request, project: saved.project }, units),
+              )().then(closeDialog);
+            }}
+          />
+        )}
+        {dialog === 'library' && (
+          <LibraryDialog
+            project={project}
+            returnFocus={menuButton}
+            onOpened={(r) => applyOpened(r, 'The saved project')}
+            onClose={closeDialog}
+          />
+        )}
+        {dialog === 'client' && clientResults && (
+          <ClientView
+            project={project}
+            results={clientResults}
+            units={units}
+            returnFocus={menuButton}
+            onClose={closeDialog}
+          />
+        )}
+      </Suspense>
     </div>
   );
 }

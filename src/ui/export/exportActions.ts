@@ -3,11 +3,12 @@
  * spot (so an export always matches the document, never a stale result) and hands a file to the
  * browser. Opening a file goes through the deliverables' guards and changes nothing on refusal.
  */
+
+import { version as appVersion } from '../../../package.json';
 import { type Project, type ProjectResults, solveProject } from '../../core/index.ts';
 import type { UnitSystem } from '../../core/units.ts';
 import { profilesCsv } from '../../deliverables/csv.ts';
-import { designReport } from '../../deliverables/designContent.ts';
-import type { PaperSize, ReportDetails } from '../../deliverables/pdfReport.ts';
+import { type DesignReport, designReport } from '../../deliverables/designContent.ts';
 import {
   openProjectFile,
   projectFileName,
@@ -17,9 +18,10 @@ import { shareUrl } from '../../deliverables/shareLink.ts';
 import { useDesignStore } from '../../state/designStore.ts';
 import { downloadBlob, downloadUrl, fileStem } from './download.ts';
 import { parseSvg, renderPlotImage, svgMarkupFromDataUrl } from './plotImage.ts';
+import type { ReportRequest } from './ReportDialog.tsx';
 
 export const PLOT_IMAGE_SIZE = { width: 1200, height: 700 } as const;
-const PDF_PLOT = { width: 900, height: 500 } as const;
+const PDF_PLOT = { width: 1000, height: 470 } as const;
 
 export function solved(project: Project): ProjectResults {
   return solveProject(project);
@@ -73,16 +75,17 @@ export async function savePlotImage(
 }
 
 export async function buildReportBlob(
-  project: Project,
+  request: ReportRequest,
   units: UnitSystem,
-  paper: PaperSize,
-  details: ReportDetails,
   temperatureNow: number | null = null,
+  design?: DesignReport,
 ): Promise<Blob> {
+  const { project } = request;
   const results = solved(project);
-  const [{ buildPdfReport }, { exportFigure }] = await Promise.all([
+  const [{ buildPdfReport }, { exportFigure }, { browserFontSource }] = await Promise.all([
     import('../../deliverables/pdfReport.ts'),
     import('./plotImage.ts'),
+    import('./reportFonts.ts'),
   ]);
   const url = await renderPlotImage(project, results, units, {
     format: 'svg',
@@ -98,14 +101,16 @@ export async function buildReportBlob(
   document.body.append(host);
   try {
     const doc = await buildPdfReport(project, results, {
-      paper,
+      paper: request.paper,
       unitSystem: units,
-      details,
       generatedAt: new Date(),
       plot: svg,
       plotAspect: PDF_PLOT.width / PDF_PLOT.height,
       parabola: exportFigure(project, results, units, false).parabola,
-      design: designReport(project, results.cases[0].horizontalTension, temperatureNow),
+      fonts: browserFontSource,
+      appVersion,
+      appendix: request.appendix,
+      design: design ?? designReport(project, results, temperatureNow),
     });
     return doc.output('blob');
   } finally {
@@ -113,18 +118,18 @@ export async function buildReportBlob(
   }
 }
 
-export async function saveReport(
-  project: Project,
-  units: UnitSystem,
-  paper: PaperSize,
-  details: ReportDetails,
-): Promise<void> {
-  const blob = await buildReportBlob(
-    project,
-    units,
-    paper,
-    details,
-    useDesignStore.getState().temperatureNow,
-  );
+export async function saveReport(request: ReportRequest, units: UnitSystem): Promise<void> {
+  const { project } = request;
+  const aids = useDesignStore.getState();
+  // The worker's answers for this very document, when up to date, spare the main thread.
+  const ready =
+    aids.answers && aids.answersProject === project && !aids.stale
+      ? {
+          window: aids.answers.window,
+          currentTension: aids.answers.currentTension,
+          setting: aids.answers.setting,
+        }
+      : undefined;
+  const blob = await buildReportBlob(request, units, aids.temperatureNow, ready);
   downloadBlob(blob, `${fileStem(projectFileName(project.title))}-report.pdf`);
 }

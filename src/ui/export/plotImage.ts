@@ -1,12 +1,13 @@
 /**
- * The sag plot drawn off-screen for exports: the workbench's own figure (buildSagFigure), with
- * every name and label escaped so Plotly shows markup as text, the project title on top and the
+ * The sag plot drawn off-screen for exports: the workbench's own figure (buildSagFigure), whose
+ * names and labels are already text-only (plotlyText), the project title on top and the
  * caution line at the foot. Returns an SVG or PNG data URL, or a parsed SVG element for the PDF.
  */
 import type { Data, Layout } from 'plotly.js';
 import { CAUTION_SUMMARY, type Project, type ProjectResults } from '../../core/index.ts';
 import type { UnitSystem } from '../../core/units.ts';
 import { loadPlotly } from '../plot/loadPlotly.ts';
+import { plotlyText } from '../plot/plotlyText.ts';
 import { buildSagFigure, type ParabolaComparison } from '../plot/sagFigure.ts';
 
 export interface PlotImageRequest {
@@ -18,17 +19,7 @@ export interface PlotImageRequest {
   captioned: boolean;
 }
 
-/** Plotly reads a small HTML subset in text; entities make it show the characters instead. */
-export function plotlyText(text: string): string {
-  return text.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;');
-}
-
-function escapeFigure(data: Data[], layout: Partial<Layout>): void {
-  for (const trace of data as { name?: string }[])
-    if (typeof trace.name === 'string') trace.name = plotlyText(trace.name);
-  for (const note of layout.annotations ?? [])
-    if (typeof note.text === 'string') note.text = plotlyText(note.text);
-}
+export { plotlyText };
 
 export function exportFigure(
   project: Project,
@@ -41,7 +32,6 @@ export function exportFigure(
     ...figure.layout,
     annotations: [...(figure.layout.annotations ?? [])],
   };
-  escapeFigure(figure.data, layout);
   layout.font = { family: 'Helvetica, Arial, sans-serif', size: 12, color: '#1c2128' };
   if (captioned) {
     layout.title = {
@@ -90,6 +80,7 @@ export async function renderPlotImage(
       { ...layout, width: request.width, height: request.height },
       {
         staticPlot: true,
+        typesetMath: false,
       },
     );
     return await Plotly.toImage(host, {

@@ -4,7 +4,7 @@
  * paused, so the person's own work stays stored until they choose "Keep it". "Go back to mine"
  * restores their stored work. A link that does not validate changes nothing and says why.
  */
-import { useEffect, useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import type { Project, ValidationIssue } from '../../core/index.ts';
 import { hasSharedProject, openShareFragment } from '../../deliverables/shareLink.ts';
 import { appSession } from '../../state/appSession.ts';
@@ -23,6 +23,8 @@ function clearFragment(): void {
 export function useSharedProject() {
   const [state, setState] = useState<SharedState>({ kind: 'none' });
   const [own, setOwn] = useState<Project | null>(null);
+  /** True while a shared project is on screen (writing paused until the person chooses). */
+  const viewing = useRef(false);
 
   // On load, and when a link is pasted into a tab that already shows the app (only the
   // fragment changes, so the page does not reload).
@@ -34,8 +36,9 @@ export function useSharedProject() {
       const opened = openShareFragment(hash);
       if (!opened.ok) {
         setState({ kind: 'refused', issues: opened.issues });
-        // Writing was paused at start for the link; nothing of it is shown, so carry on.
-        appSession()?.resume();
+        // Writing was paused at start for the link; nothing of it is shown, so carry on
+        // (unless an earlier shared project is still on screen).
+        if (!viewing.current) appSession()?.resume();
         return;
       }
       // Taken before the shared project replaces it. A second link while viewing the first
@@ -45,9 +48,10 @@ export function useSharedProject() {
       const committed = commitOpened(opened.project, undefined, opened.notes);
       if (!committed.ok) {
         setState({ kind: 'refused', issues: committed.issues });
-        appSession()?.resume();
+        if (!viewing.current) appSession()?.resume();
         return;
       }
+      viewing.current = true;
       setOwn((previous) => previous ?? mine);
       setState({ kind: 'viewing', title: opened.project.title });
     };
@@ -57,11 +61,13 @@ export function useSharedProject() {
   }, []);
 
   const keep = () => {
+    viewing.current = false;
     appSession()?.resume();
     setOwn(null);
     setState({ kind: 'none' });
   };
   const goBack = () => {
+    viewing.current = false;
     setState({ kind: 'none' });
     if (own) appSession()?.restoreStored(own);
     setOwn(null);

@@ -9,15 +9,25 @@ import { commit, type Edit } from '../../state/commit.ts';
 
 export type { Edit };
 
-const BOUND = /(at least|at most|greater than|less than) (-?\d+(?:\.\d+)?(?:e[-+]?\d+)?)/;
+const NUMBER = '(-?\\d+(?:\\.\\d+)?(?:e[-+]?\\d+)?)';
+const BOUND = new RegExp(`(at least|at most|greater than|less than) ${NUMBER}`);
+/** "the range is 0 to 70 m/s": the core's SI range with its SI unit (or none). */
+const RANGE = new RegExp(`the range is ${NUMBER} to ${NUMBER}(?: [^\\s;,)]+)?`);
 
-/** Rewrite an SI bound in a rule ("must be at most 0.2") into display units. */
+/**
+ * Rewrite an SI bound in a rule ("must be at most 0.2") and the range it states
+ * ("the range is 0.0005 to 0.1 m") into display units.
+ */
 export function localiseRule(message: string, quantity: Quantity, units: UnitSystem): string {
   const symbol = unitSymbol(quantity, units);
-  return message.replace(BOUND, (_all, words: string, bound: string) => {
-    const shown = Number(fromSi(Number(bound), quantity, units).toPrecision(6));
-    return `${words} ${shown}${symbol ? ` ${symbol}` : ''}`;
-  });
+  const show = (si: string) => Number(fromSi(Number(si), quantity, units).toPrecision(6));
+  const unit = symbol ? ` ${symbol}` : '';
+  return message
+    .replace(BOUND, (_all, words: string, bound: string) => `${words} ${show(bound)}${unit}`)
+    .replace(
+      RANGE,
+      (_all, low: string, high: string) => `the range is ${show(low)} to ${show(high)}${unit}`,
+    );
 }
 
 function describeElsewhere(issue: ValidationIssue): string {

@@ -6,6 +6,7 @@ import type { Data } from 'plotly.js';
 import type { GroundPoint, Project } from '../../core/index.ts';
 import { fromSi, type UnitSystem, unitSymbol } from '../../core/units.ts';
 import { GROUND_FILL, GROUND_LINE, ZONE_FILL, ZONE_LINE } from './colours.ts';
+import { plotlyText } from './plotlyText.ts';
 
 /**
  * The ground as drawn: the project's points, extended level (as the solver reads it beyond the
@@ -69,7 +70,7 @@ export function zoneTraces(project: Project, units: UnitSystem): Data[] {
       .filter((x) => x > zone.from && x < zone.to);
     const xs = [zone.from, ...inside, zone.to];
     const base = xs.map((x) => groundHeightAt(project, x));
-    const label = zone.label || `Zone ${i + 1}`;
+    const label = plotlyText(zone.label || `Zone ${i + 1}`);
     return {
       type: 'scatter',
       mode: 'lines',
@@ -101,7 +102,7 @@ export function supportTrace(
     name: 'Supports',
     x: project.supports.map((s) => len(s.x)),
     y: project.supports.map((s) => (plan ? 0 : len(s.z))),
-    text: project.supports.map((s, i) => s.label || `Support ${i + 1}`),
+    text: project.supports.map((s, i) => plotlyText(s.label || `Support ${i + 1}`)),
     textposition: project.supports.map((_, i) =>
       i === 0 ? 'top right' : i === project.supports.length - 1 ? 'top left' : 'top center',
     ),

@@ -8,6 +8,7 @@ import type { CaseResult, Project, ProjectResults } from '../../core/index.ts';
 import { fromSi, type UnitSystem, unitSymbol } from '../../core/units.ts';
 import { caseColour } from './colours.ts';
 import { supportTrace } from './figureParts.ts';
+import { plotlyText } from './plotlyText.ts';
 
 function swingTrace(result: CaseResult, index: number, units: UnitSystem): Data | null {
   const profile = result.profile;
@@ -18,7 +19,7 @@ function swingTrace(result: CaseResult, index: number, units: UnitSystem): Data 
   return {
     type: 'scatter',
     mode: 'lines',
-    name: result.name,
+    name: plotlyText(result.name),
     legendgroup: result.id,
     x: profile.x.map(len),
     y: profile.y.map(len),
@@ -60,7 +61,7 @@ function swingNote(results: ProjectResults, units: UnitSystem): Partial<Annotati
     ...box,
     x: len(profile.x[best.i]),
     y: len(y),
-    text: `Largest swing ${Math.abs(len(y)).toFixed(3)} ${lu} (${best.result.name})`,
+    text: `Largest swing ${Math.abs(len(y)).toFixed(3)} ${lu} (${plotlyText(best.result.name)})`,
     showarrow: true,
     arrowhead: 2,
     // Tail toward the line of the fixings, where the plot is empty.

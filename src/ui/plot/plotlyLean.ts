@@ -6,6 +6,7 @@
  * makes the first load lighter. Components not registered are skipped by Plotly's registry.
  */
 
+import 'plotly.js/dist/plotly.css'; // its rules as a file: no injected <style> (index.html)
 import annotations from 'plotly.js/src/components/annotations';
 import colorscale from 'plotly.js/src/components/colorscale';
 import fx from 'plotly.js/src/components/fx';

@@ -12,6 +12,7 @@ import { caseColour } from './colours.ts';
 import { groundHeightAt, groundTraces, supportTrace, zoneTraces } from './figureParts.ts';
 import { largestDifference, parabolaHeights } from './parabola.ts';
 import { planLayout, planTraces } from './planFigure.ts';
+import { plotlyText } from './plotlyText.ts';
 
 /** Side view: height against distance. Plan view: sideways swing against distance. */
 export type PlotView = 'side' | 'plan';
@@ -54,10 +55,11 @@ function caseTraces(
     len(profile.z[i] - groundHeightAt(project, x)),
     fromSi(profile.tension[i], 'force', units),
   ]);
+  const name = plotlyText(result.name);
   const wire: Data = {
     type: 'scatter',
     mode: 'lines',
-    name: result.name,
+    name,
     legendgroup: result.id,
     x: profile.x.map(len),
     y: profile.z.map(len),
@@ -72,13 +74,13 @@ function caseTraces(
   const closedForm: Data = {
     type: 'scatter',
     mode: 'lines',
-    name: `${result.name} — parabola`,
+    name: `${name} — parabola`,
     legendgroup: result.id,
     showlegend: false,
     x: profile.x.map(len),
     y: parabola.map(len),
     line: { color: colour, width: 1.2, dash: 'dash' },
-    hovertemplate: `parabola %{y:.3f} ${lu}<extra>${result.name}</extra>`,
+    hovertemplate: `parabola %{y:.3f} ${lu}<extra>%{fullData.name}</extra>`,
   };
   return { traces: [wire, closedForm], differenceM: largestDifference(profile.z, parabola) };
 }
@@ -94,7 +96,7 @@ function annotations(results: ProjectResults, units: UnitSystem): Partial<Annota
     {
       x: len(lowest.lowestPoint.x),
       y: len(lowest.lowestPoint.z),
-      text: `Lowest point ${len(lowest.lowestPoint.z).toFixed(2)} ${lu} (${lowest.name})`,
+      text: `Lowest point ${len(lowest.lowestPoint.z).toFixed(2)} ${lu} (${plotlyText(lowest.name)})`,
       showarrow: true,
       arrowhead: 2,
       // Label and arrow wholly below-right of the point (anchored at the label's top-left corner).
@@ -113,7 +115,7 @@ function annotations(results: ProjectResults, units: UnitSystem): Partial<Annota
     notes.push({
       x: len(sagX),
       y: len(z),
-      text: `Largest sag ${len(sagging.sag).toFixed(3)} ${lu} (${sagging.name})`,
+      text: `Largest sag ${len(sagging.sag).toFixed(3)} ${lu} (${plotlyText(sagging.name)})`,
       showarrow: true,
       arrowhead: 2,
       // Label straight above the point, arrow pointing down: it stays above every wire point

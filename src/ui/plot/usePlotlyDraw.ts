@@ -1,15 +1,20 @@
 /**
- * Draws a Plotly figure into a container without holding up typing. A figure after a pause is
- * drawn at the next animation frame; figures arriving in a burst (typing) wait until the burst
- * pauses (drawPolicy.ts); a figure that a newer result is about to replace is not drawn at all.
- * The last drawing stays meanwhile. Each draw is recorded as the performance measure
- * "sagwright:plot-draw" (its main-thread time) with the document version drawn, for
+ * Draws a Plotly figure into a container without holding up typing or dragging.
+ * - When only the wire lines moved (figureUpdate.ts), they are sketched at the next animation
+ *   frame, every time (well under a millisecond), with the notes and hover labels hidden; the
+ *   full redraw follows once results pause for BURST_GAP_MS.
+ * - Any other change needs a full Plotly.react (tens of ms): a figure after a pause is drawn at
+ *   the next frame; figures arriving in a burst wait until the burst pauses (drawPolicy.ts); a
+ *   figure that a newer result is about to replace is not fully redrawn at all.
+ * The last drawing stays meanwhile. Each draw, sketch or full, is recorded as the performance
+ * measure "sagwright:plot-draw" (its main-thread time) with the document version drawn, for
  * measurement, never for assertions.
  */
 
 import type { Config, Data, Layout } from 'plotly.js';
 import { type RefObject, useEffect, useRef, useState } from 'react';
-import { drawDelayMs } from './drawPolicy.ts';
+import { BURST_GAP_MS, drawDelayMs } from './drawPolicy.ts';
+import { type FigureSignature, figureSignature, linePath, sketchTraces } from './figureUpdate.ts';
 import { loadPlotly, type Plotly } from './loadPlotly.ts';
 
 export type PlotState = 'loading' | 'drawn' | 'failed';
@@ -22,21 +27,63 @@ export interface DrawableFigure {
 }
 
 export const PLOT_DRAW_MEASURE = 'sagwright:plot-draw';
+/** On the plot container while the wires are sketched ahead of the full redraw. */
+export const SKETCH_CLASS = 'plot-sketch';
 
 const CONFIG: Partial<Config> = {
   displaylogo: false,
   responsive: true,
+  // Text is the person's own: never typeset as TeX (a label between $ signs stays text).
+  typesetMath: false,
   modeBarButtonsToRemove: ['select2d', 'lasso2d'],
 };
 
-interface Arrival {
+interface Sketch {
   figure: DrawableFigure;
-  /** performance.now() before which it is not drawn. */
+  signature: FigureSignature;
+}
+
+interface Arrival extends Sketch {
+  /** performance.now() before which it is not fully drawn. */
   holdUntil: number;
+  /** The line traces to sketch at once, or null when it must wait for a full redraw. */
+  lines: number[] | null;
+}
+
+interface PlotAxis {
+  range?: unknown[];
+  l2p?: (value: number) => number;
+}
+type PlotDiv = HTMLDivElement & { _fullLayout?: { xaxis?: PlotAxis; yaxis?: PlotAxis } };
+
+function axes(container: PlotDiv) {
+  return { x: container._fullLayout?.xaxis, y: container._fullLayout?.yaxis };
+}
+
+/** Rewrites the paths of the line traces; false when the drawing is not as expected. */
+function sketch(container: PlotDiv, figure: DrawableFigure, lines: number[]): boolean {
+  const { x, y } = axes(container);
+  const groups = container.querySelectorAll('.scatterlayer .trace');
+  if (!x?.l2p || !y?.l2p || groups.length !== figure.data.length) return false;
+  const paths = lines.map((i) => groups[i].querySelector('path.js-line'));
+  if (paths.some((path) => path === null)) return false;
+  const [toX, toY] = [x.l2p.bind(x), y.l2p.bind(y)];
+  lines.forEach((i, k) => {
+    const trace = figure.data[i] as { x?: unknown[]; y?: unknown[] };
+    paths[k]?.setAttribute('d', linePath(trace.x ?? [], trace.y ?? [], toX, toY));
+  });
+  container.classList.add(SKETCH_CLASS);
+  return true;
+}
+
+function measure(start: number, figure: DrawableFigure) {
+  const detail = { revision: figure.revision };
+  performance.measure(PLOT_DRAW_MEASURE, { start, end: performance.now(), detail });
 }
 
 /**
- * @param deferred true while a newer result is pending: keep the last drawing, draw later.
+ * @param deferred true while a newer result is pending: keep the last full drawing (a sketch
+ *   is still drawn).
  */
 export function usePlotlyDraw(
   containerRef: RefObject<HTMLDivElement | null>,
@@ -44,25 +91,41 @@ export function usePlotlyDraw(
   deferred: boolean,
 ): PlotState {
   const [state, setState] = useState<PlotState>('loading');
-  const drawn = useRef<DrawableFigure | null>(null);
+  const full = useRef<Sketch | null>(null);
+  const sketched = useRef<DrawableFigure | null>(null);
   const arrival = useRef<Arrival | null>(null);
   const previousArrivalAt = useRef<number | null>(null);
   const firstUndrawnAt = useRef<number | null>(null);
 
   useEffect(() => {
-    const container = containerRef.current;
-    if (!container || figure === drawn.current) return;
+    const container = containerRef.current as PlotDiv | null;
+    if (!container || figure === full.current?.figure) return;
     const now = performance.now();
     if (arrival.current?.figure !== figure) {
+      const next = { figure, signature: figureSignature(figure) };
+      const { x, y } = axes(container);
+      const lines = full.current && sketchTraces(full.current, next, { x: x?.range, y: y?.range });
       firstUndrawnAt.current ??= now;
-      const delay = drawDelayMs(now, previousArrivalAt.current, firstUndrawnAt.current);
-      arrival.current = { figure, holdUntil: now + delay };
+      const delay = lines
+        ? BURST_GAP_MS
+        : drawDelayMs(now, previousArrivalAt.current, firstUndrawnAt.current);
+      arrival.current = { ...next, holdUntil: now + delay, lines };
       previousArrivalAt.current = now;
     }
-    if (deferred && drawn.current) return;
+    const next = arrival.current;
     let cancelled = false;
     let frame = 0;
-    const draw = (plotly: Plotly) => {
+    if (next.lines && sketched.current !== figure) {
+      const lines = next.lines;
+      frame = requestAnimationFrame(() => {
+        const start = performance.now();
+        if (sketch(container, figure, lines)) {
+          sketched.current = figure;
+          measure(start, figure);
+        }
+      });
+    }
+    const drawFully = (plotly: Plotly) => {
       if (cancelled) return;
       const start = performance.now();
       let done: Promise<unknown>;
@@ -72,26 +135,26 @@ export function usePlotlyDraw(
         setState('failed');
         return;
       }
-      performance.measure(PLOT_DRAW_MEASURE, {
-        start,
-        end: performance.now(),
-        detail: { revision: figure.revision },
-      });
-      drawn.current = figure;
+      container.classList.remove(SKETCH_CLASS);
+      measure(start, figure);
+      full.current = next;
       firstUndrawnAt.current = null;
       done.then(
         () => setState('drawn'),
         () => setState('failed'),
       );
     };
-    const wait = Math.max(0, (arrival.current?.holdUntil ?? now) - now);
-    const timer = setTimeout(() => {
-      loadPlotly()
-        .then((plotly) => {
-          if (!cancelled) frame = requestAnimationFrame(() => draw(plotly));
-        })
-        .catch(() => !cancelled && setState('failed'));
-    }, wait);
+    if (deferred && full.current) return () => cancelAnimationFrame(frame);
+    const timer = setTimeout(
+      () => {
+        loadPlotly()
+          .then((plotly) => {
+            if (!cancelled) frame = requestAnimationFrame(() => drawFully(plotly));
+          })
+          .catch(() => !cancelled && setState('failed'));
+      },
+      Math.max(0, next.holdUntil - now),
+    );
     return () => {
       cancelled = true;
       clearTimeout(timer);

@@ -10,6 +10,7 @@ import { ATTACHMENT_NAME } from '../../deliverables/attachmentWords.ts';
 import { useProjectStore } from '../../state/projectStore.ts';
 import { useUiStore } from '../../state/uiStore.ts';
 import { num } from '../format.ts';
+import { TableScroll } from './TableScroll.tsx';
 
 /** "408 N at 42.3°" for one side of a fixing, or a dash where the line ends. */
 function wireSide(
@@ -62,7 +63,7 @@ export function ReactionsTable({ results }: { results: ProjectResults }) {
   return (
     <details className="reactions" open>
       <summary>Pull on the fixings</summary>
-      <div className="table-scroll">
+      <TableScroll>
         <table className="results" aria-label="Pull on the fixings">
           <thead>
             <tr>
@@ -97,7 +98,7 @@ export function ReactionsTable({ results }: { results: ProjectResults }) {
             )}
           </tbody>
         </table>
-      </div>
+      </TableScroll>
       <p className="muted">
         The wire's pull on each fixing. Along the line: positive toward the last fixing; at an
         intermediate fixing it is the net of both sides, what its post and stay must hold. Downward:

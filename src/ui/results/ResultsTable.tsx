@@ -3,6 +3,7 @@ import type { CaseResult, ProjectResults } from '../../core/index.ts';
 import { unitSymbol } from '../../core/units.ts';
 import { useUiStore } from '../../state/uiStore.ts';
 import { num, percent, show } from '../format.ts';
+import { TableScroll } from './TableScroll.tsx';
 
 function Verdict({ result }: { result: CaseResult }) {
   if (!result.solved) return <span className="verdict fail">Not solved</span>;
@@ -34,7 +35,7 @@ export function ResultsTable({ results }: { results: ProjectResults }) {
   const lu = unitSymbol('length', units);
   const fu = unitSymbol('force', units);
   return (
-    <div className="table-scroll">
+    <TableScroll>
       <p className="case-meta utilisation-basis">{utilisationBasis(results)}</p>
       <table className="results" aria-label="Results by case">
         <thead>
@@ -94,6 +95,6 @@ export function ResultsTable({ results }: { results: ProjectResults }) {
           })}
         </tbody>
       </table>
-    </div>
+    </TableScroll>
   );
 }

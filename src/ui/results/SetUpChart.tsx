@@ -17,6 +17,7 @@ import {
 import { useUiStore } from '../../state/uiStore.ts';
 import { num, show } from '../format.ts';
 import './setUpChart.css';
+import { TableScroll } from './TableScroll.tsx';
 
 /** Whole degrees unless the temperature has a fraction in the units shown (59.9 °F). */
 function temperatureText(celsius: number, units: UnitSystem): string {
@@ -71,7 +72,7 @@ export function SetUpChart({ project, results }: { project: Project; results: Pr
           temperatureText(project.installation.temperature, units),
         )}
       </p>
-      <div className="table-scroll">
+      <TableScroll>
         <table className="results setup-table" aria-labelledby={headingId}>
           <thead>
             <tr>
@@ -95,7 +96,7 @@ export function SetUpChart({ project, results }: { project: Project; results: Pr
             ))}
           </tbody>
         </table>
-      </div>
+      </TableScroll>
       <p className="setup-note muted">
         {pulseCheck(
           span,

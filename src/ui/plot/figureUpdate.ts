@@ -1,0 +1,136 @@
+/**
+ * A quick redraw of the wire lines alone. A typical edit moves only the wires (each case's FE
+ * line and its parabola); axes, ground, zones, fixings and legend stay. A full Plotly redraw
+ * re-derives and redraws all of it (tens of ms); here the line traces' paths are rewritten from
+ * the new numbers with the axes on screen (well under a millisecond). Until the full redraw that
+ * follows once edits pause, the notes (annotations) and hover labels, which would still show the
+ * old numbers, are hidden (class `plot-sketch`). Anything else that changed (a trace added or
+ * restyled, the layout, data leaving the axis ranges) needs the full redraw.
+ */
+import type { Data, Layout } from 'plotly.js';
+
+export interface FigureLike {
+  data: Data[];
+  layout: Partial<Layout>;
+}
+
+/** The numbers of a trace that an edit changes; everything else must stay equal. */
+const DATA_KEYS = ['x', 'y', 'customdata'] as const;
+
+/** Taken when a figure arrives, before Plotly draws it (Plotly writes into what it draws). */
+export interface FigureSignature {
+  /** The layout without its notes. */
+  layout: string;
+  /** Each trace without its numbers. */
+  traces: string[];
+  /** Which traces are plain lines that a sketch can redraw. */
+  lines: boolean[];
+}
+
+function withoutData(trace: Data): string {
+  const rest: Record<string, unknown> = { ...trace };
+  for (const key of DATA_KEYS) delete rest[key];
+  return JSON.stringify(rest);
+}
+
+function isPlainLine(trace: Data): boolean {
+  const t = trace as { type?: string; mode?: string; fill?: string };
+  return (t.type ?? 'scatter') === 'scatter' && t.mode === 'lines' && !t.fill;
+}
+
+export function figureSignature(figure: FigureLike): FigureSignature {
+  const { annotations: _notes, ...rest } = figure.layout;
+  return {
+    layout: JSON.stringify(rest),
+    traces: figure.data.map(withoutData),
+    lines: figure.data.map(isPlainLine),
+  };
+}
+
+function sameNumbers(a: unknown, b: unknown): boolean {
+  if (a === b) return true;
+  if (!Array.isArray(a) || !Array.isArray(b) || a.length !== b.length) return false;
+  for (let i = 0; i < a.length; i++) {
+    if (a[i] === b[i]) continue;
+    if (!Array.isArray(a[i]) || !sameNumbers(a[i], b[i])) return false;
+  }
+  return true;
+}
+
+/** Smallest and largest finite value of the x or y numbers of all traces. */
+function extent(data: Data[], axis: 'x' | 'y'): [number, number] {
+  let low = Number.POSITIVE_INFINITY;
+  let high = Number.NEGATIVE_INFINITY;
+  for (const trace of data) {
+    const values = (trace as Record<string, unknown>)[axis];
+    if (!Array.isArray(values)) continue;
+    for (const v of values) {
+      if (typeof v !== 'number' || !Number.isFinite(v)) continue;
+      if (v < low) low = v;
+      if (v > high) high = v;
+    }
+  }
+  return [low, high];
+}
+
+export interface Sketched {
+  figure: FigureLike;
+  signature: FigureSignature;
+}
+
+/**
+ * The traces to redraw for a sketch of `next` over the full drawing of `drawn`, or null when
+ * only a full redraw will do.
+ * @param ranges the axis ranges on screen; the new data must stay inside them and fill at least
+ *   `fill` of each, so the picture never clips or shrinks away.
+ */
+export function sketchTraces(
+  drawn: Sketched,
+  next: Sketched,
+  ranges: { x?: readonly unknown[]; y?: readonly unknown[] },
+  fill = 0.6,
+): number[] | null {
+  const [was, now] = [drawn.signature, next.signature];
+  if (was.traces.length !== now.traces.length || was.layout !== now.layout) return null;
+  const lines: number[] = [];
+  for (let i = 0; i < now.traces.length; i++) {
+    if (was.traces[i] !== now.traces[i]) return null;
+    if (now.lines[i]) lines.push(i);
+    else {
+      const a = drawn.figure.data[i] as Record<string, unknown>;
+      const b = next.figure.data[i] as Record<string, unknown>;
+      if (!DATA_KEYS.every((key) => sameNumbers(a[key], b[key]))) return null;
+    }
+  }
+  for (const axis of ['x', 'y'] as const) {
+    const range = ranges[axis];
+    if (range?.length !== 2 || typeof range[0] !== 'number') return null;
+    const [r0, r1] = range as [number, number];
+    const [low, high] = extent(next.figure.data, axis);
+    const [from, to] = [Math.min(r0, r1), Math.max(r0, r1)];
+    if (!(low >= from && high <= to) || high - low < fill * (to - from)) return null;
+  }
+  return lines;
+}
+
+/** An SVG path through the points, with gaps where a value is missing. */
+export function linePath(
+  xs: readonly unknown[],
+  ys: readonly unknown[],
+  toPixelX: (x: number) => number,
+  toPixelY: (y: number) => number,
+): string {
+  let path = '';
+  let pen = 'M';
+  for (let i = 0; i < xs.length; i++) {
+    const x = xs[i];
+    const y = ys[i];
+    if (typeof x !== 'number' || typeof y !== 'number' || !Number.isFinite(x + y)) {
+      pen = 'M';
+      continue;
+    }
+    path += `${pen}${toPixelX(x).toFixed(2)},${toPixelY(y).toFixed(2)}`;
+    pen = 'L';
+  }
+  return path;
+}
