@@ -123,7 +123,7 @@ function demoBreakdown(file: string): [string, number][] {
         model,
         { ...loadStateOfCase(c), name: c.name },
         installed.unstressed,
-        target.tensionN,
+        installed.spans.map((s) => s.tensionN),
       );
     }
   };
@@ -176,7 +176,11 @@ for (const elements of [200, 2000]) {
 say('');
 say('| project (solveProject, all cases + error estimate) | time (µs) | iterations per case |');
 say('|---|---:|---|');
-for (const file of ['examples/courtyard-lights.json', 'examples/workshop-yard-inclined.json']) {
+for (const file of [
+  'examples/courtyard-lights.json',
+  'examples/workshop-yard-inclined.json',
+  'examples/terrace-corner-pulley.json',
+]) {
   const r = projectSolve(file);
   say(`| ${file} | ${f1(r.micros)} | ${r.iterations.join(', ')} |`);
 }

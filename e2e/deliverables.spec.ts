@@ -180,14 +180,14 @@ test('a newer-version file is refused with its field path and changes nothing', 
   await page.goto('/');
   const title = page.getByLabel('Project title');
   await expect(title).toHaveValue(demo.title);
-  const hostile = JSON.stringify({ ...demo, version: 2, title: 'Should not open' });
+  const hostile = JSON.stringify({ ...demo, version: 3, title: 'Should not open' });
   await page.getByLabel('Project file to open').setInputFiles({
     name: 'newer.sagwright.json',
     mimeType: 'application/json',
     buffer: Buffer.from(hostile),
   });
   const alert = page.getByRole('alert').filter({ hasText: 'was not opened' });
-  await expect(alert).toContainText('version: 2 is newer than this Sagwright reads (1)');
+  await expect(alert).toContainText('version: 3 is newer than this Sagwright reads (2)');
   await expect(title).toHaveValue(demo.title);
 });
 

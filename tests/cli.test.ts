@@ -9,7 +9,11 @@ import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { CAUTIONS, type Project, solveProject, WIRE_CATALOG } from '../src/core/index.ts';
 
-const EXAMPLES = ['examples/courtyard-lights.json', 'examples/workshop-yard-inclined.json'];
+const EXAMPLES = [
+  'examples/courtyard-lights.json',
+  'examples/workshop-yard-inclined.json',
+  'examples/terrace-corner-pulley.json',
+];
 const TIMEOUT_MS = 60_000;
 
 function solveCli(...args: string[]) {

@@ -7,7 +7,7 @@ import { type Project, solveProject } from '../src/core/index.ts';
 
 const deepCatenary: Project = {
   format: 'sagwright-project',
-  version: 1,
+  version: 2,
   title: 'Short, very stretchy wire hung deep',
   supports: [
     { x: 0, z: 0 },

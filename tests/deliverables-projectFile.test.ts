@@ -18,7 +18,11 @@ import {
 } from '../src/deliverables/projectFile.ts';
 import { openShareFragment, shareUrl } from '../src/deliverables/shareLink.ts';
 
-const EXAMPLES = ['courtyard-lights.json', 'workshop-yard-inclined.json'];
+const EXAMPLES = [
+  'courtyard-lights.json',
+  'workshop-yard-inclined.json',
+  'terrace-corner-pulley.json',
+];
 const exampleText = (name: string) =>
   readFileSync(new URL(`../examples/${name}`, import.meta.url), 'utf8');
 const courtyard = (): Record<string, unknown> => JSON.parse(exampleText('courtyard-lights.json'));
@@ -148,9 +152,9 @@ describe('refusals: each names the field path and the rule', () => {
     },
     {
       what: 'a newer version',
-      edit: (d) => JSON.stringify({ ...d, version: 2 }),
+      edit: (d) => JSON.stringify({ ...d, version: 3 }),
       path: 'version',
-      rule: /2 is newer than this Sagwright reads \(1\)/,
+      rule: /3 is newer than this Sagwright reads \(2\)/,
     },
     {
       what: 'a wrong format',

@@ -155,6 +155,51 @@ describe('random valid projects (seeded mulberry32, 100 projects)', () => {
     }
   });
 
+  // Statics of each support: the wire pulls with its tension along each side's direction, so the
+  // downward pull is Σ T sin(angle) plus any load placed at the support, the pull along the line
+  // is H after − H before; a pulley has equal tension on both sides, a swing link no pull along
+  // the line.
+  it('keep every support in equilibrium with the wire on each side (1e-9)', () => {
+    const failures: string[] = [];
+    for (const { project, results } of solved) {
+      for (const c of results.cases) {
+        const state = stateOf(project, c);
+        const scale = 1e-9 * c.maxTension;
+        c.supports.forEach((s, i) => {
+          const where = `${project.title} / ${c.name} / support ${i + 1} (${s.attachment})`;
+          const side = (t?: number, a?: number) =>
+            t === undefined || a === undefined ? 0 : t * Math.sin((a * Math.PI) / 180);
+          const placed = state.withLoads
+            ? project.loads.reduce(
+                (sum, l) =>
+                  l.type === 'point' && l.x === project.supports[i].x
+                    ? sum + (l.force ?? (l.mass ?? 0) * 9.80665)
+                    : sum,
+                0,
+              )
+            : 0;
+          const down = side(s.tensionBefore, s.angleBefore) + side(s.tensionAfter, s.angleAfter);
+          if (!(Math.abs(s.vertical - down - placed) <= scale))
+            failures.push(`${where}: vertical ${s.vertical} vs ${down} + ${placed}`);
+          const hBefore = i > 0 ? c.spans[i - 1].horizontalTension : 0;
+          const hAfter = i < c.spans.length ? c.spans[i].horizontalTension : 0;
+          if (!(Math.abs(s.horizontal - (hAfter - hBefore)) <= scale))
+            failures.push(`${where}: along the line ${s.horizontal} vs ${hAfter - hBefore}`);
+          const pulleyOff = Math.abs((s.tensionBefore ?? 0) - (s.tensionAfter ?? 0));
+          if (s.attachment === 'pulley' && !(pulleyOff <= scale))
+            failures.push(`${where}: tensions ${s.tensionBefore} and ${s.tensionAfter}`);
+          if (s.attachment === 'swingLink' && !(Math.abs(s.horizontal) <= scale))
+            failures.push(`${where}: swing link pulled ${s.horizontal} N along the line`);
+        });
+      }
+    }
+    expect(failures).toEqual([]);
+    const kinds = new Set(
+      solved.flatMap((r) => r.results.cases[0].supports.map((s) => s.attachment)),
+    );
+    expect([...kinds].sort()).toEqual(['clamped', 'end', 'pulley', 'swingLink']);
+  });
+
   it('give back the installation tension and sag in a case equal to the installation state', () => {
     for (const { project, results } of solved) {
       const installed = results.cases[0];
@@ -205,24 +250,28 @@ function expectMore(more: CaseResult, less: CaseResult, label: string, tensionUp
 describe('monotone response at a fixed cut length (change of state)', () => {
   const seeds = Array.from({ length: 40 }, (_, i) => 8000 + i);
 
-  // One section (intermediate supports free): with clamped supports the installation shares the
-  // cut length out among the spans by their stretch, so one span may get less wire when heavier.
-  it('heavier load (all loads × 1.5) gives more sag and more tension in every span', () => {
-    for (const seed of seeds) {
-      const cases = [stillCase('Cold', -5), stillCase('Hot', 35)];
-      const clamped = fixedLengthProject(seed, cases);
-      const last = clamped.supports.length - 1;
-      const supports = clamped.supports.map((s, i) =>
-        i > 0 && i < last ? { ...s, free: true } : s,
-      );
-      const light = { ...clamped, supports };
-      const a = solveProject(light).cases;
-      const b = solveProject(heavier(light, 1.5)).cases;
-      a.forEach((c, i) => {
-        expectMore(b[i], c, `${light.title} / ${c.name}`, true);
-      });
-    }
-  });
+  // One section (intermediate supports pulleys or swing links): with clamped supports the
+  // installation shares the cut length out among the spans by their stretch, so one span may
+  // get less wire when heavier.
+  it.each(['pulley', 'swingLink'] as const)(
+    'heavier load (all loads × 1.5) gives more sag and more tension in every span (%s)',
+    (attachment) => {
+      for (const seed of seeds) {
+        const cases = [stillCase('Cold', -5), stillCase('Hot', 35)];
+        const clamped = fixedLengthProject(seed, cases);
+        const last = clamped.supports.length - 1;
+        const supports = clamped.supports.map((s, i) =>
+          i > 0 && i < last ? { ...s, attachment } : s,
+        );
+        const light = { ...clamped, supports };
+        const a = solveProject(light).cases;
+        const b = solveProject(heavier(light, 1.5)).cases;
+        a.forEach((c, i) => {
+          expectMore(b[i], c, `${light.title} / ${c.name}`, true);
+        });
+      }
+    },
+  );
 
   it('hotter gives more sag and less tension in every span (with ice and wind)', () => {
     for (const seed of seeds) {
@@ -257,7 +306,7 @@ describe('minimal inputs for past and present defects', () => {
   it('parabolic wire weight does not change with temperature', () => {
     const project: Project = {
       format: 'sagwright-project',
-      version: 1,
+      version: 2,
       title: 'Bare level span, parabolic, hot',
       supports: [
         { x: 0, z: 5 },

@@ -4,10 +4,12 @@
  * stays in memory; a stored document that does not validate opens as far as it can, with the
  * original kept. Browser parts are stand-ins (tests/helpers/browserStandIns.ts).
  */
+import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import type { Project } from '../src/core/index.ts';
+import { openProjectText } from '../src/deliverables/projectFile.ts';
 import { AUTOSAVE_KEY, REJECTED_KEY } from '../src/state/autosave.ts';
-import { commit, type Workbench } from '../src/state/commit.ts';
+import { commit, commitOpened, type Workbench } from '../src/state/commit.ts';
 import { demoProject } from '../src/state/demoProject.ts';
 import * as edits from '../src/state/projectEdits.ts';
 import { createProjectStore } from '../src/state/projectStore.ts';
@@ -176,5 +178,35 @@ describe('a stored document that does not validate', () => {
     expect(project.limits.safetyFactor).toBe(demoProject.limits.safetyFactor);
     expect('colour' in project).toBe(false);
     expect(tab.session.getState().recovery?.changes).toHaveLength(3);
+  });
+});
+
+describe('a stored document in format version 1', () => {
+  const v1 = JSON.parse(readFileSync('tests/fixtures/version1-free-support.json', 'utf8'));
+
+  it('opens migrated, says what changed, and is stored as version 2 from the next save', () => {
+    const storage = new MemoryStorage();
+    storage.setItem(AUTOSAVE_KEY, JSON.stringify(v1));
+    const tab = openTab(storage);
+    const project = tab.store.getState().project;
+    expect(project.version).toBe(2);
+    expect(project.supports[1].attachment).toBe('pulley');
+    expect(tab.session.getState().recovery).toBeNull();
+    expect(tab.session.getState().formatNotes[0]).toMatch(/Corner post.*equal tension/);
+    expect(tab.edit(edits.setTitle('Terrace line')).ok).toBe(true);
+    expect(stored(storage).version).toBe(2);
+    expect(JSON.stringify(stored(storage))).not.toContain('"free"');
+  });
+
+  it('opening another project replaces the notes; a current one clears them', () => {
+    const storage = new MemoryStorage();
+    const tab = openTab(storage);
+    const bench: Workbench = { store: tab.store, session: tab.session, unitSystem: () => 'si' };
+    const opened = openProjectText(JSON.stringify(v1));
+    if (!opened.ok) throw new Error('fixture must open');
+    expect(commitOpened(opened.project, bench, opened.notes).ok).toBe(true);
+    expect(tab.session.getState().formatNotes).toHaveLength(1);
+    expect(commitOpened(demoProject, bench).ok).toBe(true);
+    expect(tab.session.getState().formatNotes).toEqual([]);
   });
 });

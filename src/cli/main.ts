@@ -72,6 +72,10 @@ function solveFile(
       errors: describeIssues(opened.issues, 50).map((line) => `${shown}: ${printable(line)}`),
     };
   const outcome = outcomeOf(file, solveProject(opened.project), opened.project.title);
+  // An older file is read through the format migration; say on stderr what that changes.
+  outcome.errors.unshift(
+    ...(opened.notes ?? []).map((note) => `${shown}: note: ${printable(note)}`),
+  );
   if (outcome.results && asBuiltSpec !== undefined) {
     const status = addAsBuilt(shown, opened.project, outcome.results, asBuiltSpec);
     // An invalid measurement prints no results, as an invalid file does (addAsBuilt said why).

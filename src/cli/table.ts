@@ -4,6 +4,7 @@ import {
   MOVING_LOAD_CAUTION,
   type MovingLoadResult,
   type ProjectResults,
+  type SupportReaction,
   type WireProperties,
 } from '../core/index.ts';
 
@@ -70,14 +71,15 @@ export function resultsTable(title: string, results: ProjectResults): string {
   for (const c of results.cases) {
     lines.push(`${c.name} — support reactions (wire's pull on the support):`);
     const support = c.supports.map((s, i) => [
-      `  support ${i + 1}`,
+      `  support ${i + 1} (${s.attachment === 'swingLink' ? 'swing link' : s.attachment})`,
       `horizontal ${n(s.horizontal, 0)} N`,
       `vertical ${n(s.vertical, 0)} N`,
       `lateral ${n(s.lateral, 0)} N`,
       `resultant ${n(s.resultant, 0)} N`,
       `at ${n(s.angle, 1)}° below horizontal`,
+      wireSides(s),
     ]);
-    lines.push(pad(support));
+    lines.push(pad(support, 1, true));
     for (const z of c.zoneClearances) {
       lines.push(
         `  ${z.label}: clearance ${n(z.clearance, 3)} m, required ${n(z.required, 3)} m — ${z.ok ? 'pass' : 'FAIL'}`,
@@ -109,6 +111,18 @@ export function resultsTable(title: string, results: ProjectResults): string {
     ...tableCautions(results).map((c) => `  - ${c.title}: ${c.text}`),
   );
   return lines.join('\n');
+}
+
+/** The wire on each side of a support: tension and angle below the horizontal. */
+function wireSides(s: SupportReaction): string {
+  const side = (where: string, tension?: number, angle?: number) =>
+    tension === undefined || angle === undefined
+      ? []
+      : [`${where} ${n(tension, 0)} N at ${n(angle, 1)}°`];
+  return [
+    ...side('wire before', s.tensionBefore, s.angleBefore),
+    ...side('wire after', s.tensionAfter, s.angleAfter),
+  ].join(', ');
 }
 
 export function catalogTable(wires: readonly WireProperties[]): string {

@@ -6,6 +6,7 @@
 
 import type { HungDrops } from './loads.ts';
 import type {
+  Attachment,
   CaseProfile,
   CaseResult,
   ClearanceZone,
@@ -37,6 +38,11 @@ export interface CheckInput {
   name: string;
   temperature: number;
   spans: SolvedSpan[];
+  /** Each support's attachment ("end" for the first and last). */
+  attachments: readonly (Attachment | 'end')[];
+  /** Point loads placed exactly at each support, N: downward and sideways. */
+  supportForcesN: readonly number[];
+  supportLateralN: readonly number[];
   ground: readonly GroundPoint[];
   /** Hung items that hang below the wire in this state (clearance is measured to them). */
   drops: HungDrops;
@@ -148,24 +154,57 @@ export function largestStateTension(spans: readonly SolvedSpan[]): number {
   return Math.max(...spans.map((s) => largestTension(s.span, s.tensionN)));
 }
 
-function reactions(spans: readonly SolvedSpan[]): SupportReaction[] {
-  const forces = Array.from({ length: spans.length + 1 }, () => ({ h: 0, v: 0, l: 0 }));
-  spans.forEach(({ span, tensionN: H }, j) => {
+/** Angle (degrees) of a wire direction below the horizontal: atan2(down, along the ground). */
+function angleBelow(down: number, dy: number): number {
+  return (Math.atan2(down, Math.hypot(1, dy)) * 180) / Math.PI;
+}
+
+interface SupportSums {
+  h: number;
+  v: number;
+  l: number;
+  before?: { angle: number; tension: number };
+  after?: { angle: number; tension: number };
+}
+
+/**
+ * The wire's pull on each support: at the start of span j it pulls with H (1, y', z') toward
+ * the span, at its end with H (−1, −y', −z'); a point load placed at a support adds to its
+ * downward pull (and its wind to the sideways pull). Each side's wire tension and angle below the horizontal are reported as well.
+ */
+function reactions(input: CheckInput): SupportReaction[] {
+  const sums: SupportSums[] = input.attachments.map((_, i) => ({
+    h: 0,
+    v: input.supportForcesN[i] ?? 0,
+    l: input.supportLateralN[i] ?? 0,
+  }));
+  input.spans.forEach(({ span, tensionN: H }, j) => {
     const start = slopesAt(span, H, 0, -1);
     const end = slopesAt(span, H, span.elementLength.length - 1, 1);
-    forces[j].h += H;
-    forces[j].v -= H * start.dz;
-    forces[j].l += H * start.dy;
-    forces[j + 1].h -= H;
-    forces[j + 1].v += H * end.dz;
-    forces[j + 1].l -= H * end.dy;
+    sums[j].h += H;
+    sums[j].v -= H * start.dz;
+    sums[j].l += H * start.dy;
+    sums[j].after = {
+      angle: angleBelow(-start.dz, start.dy),
+      tension: H * Math.hypot(1, start.dz, start.dy),
+    };
+    sums[j + 1].h -= H;
+    sums[j + 1].v += H * end.dz;
+    sums[j + 1].l -= H * end.dy;
+    sums[j + 1].before = {
+      angle: angleBelow(end.dz, end.dy),
+      tension: H * Math.hypot(1, end.dz, end.dy),
+    };
   });
-  return forces.map(({ h, v, l }) => ({
+  return sums.map(({ h, v, l, before, after }, i) => ({
     horizontal: h,
     vertical: v,
     lateral: l,
     resultant: Math.hypot(h, v, l),
     angle: (Math.atan2(v, Math.hypot(h, l)) * 180) / Math.PI,
+    attachment: input.attachments[i],
+    ...(before ? { angleBefore: before.angle, tensionBefore: before.tension } : {}),
+    ...(after ? { angleAfter: after.angle, tensionAfter: after.tension } : {}),
   }));
 }
 
@@ -289,7 +328,7 @@ export function checkCase(input: CheckInput): CaseResult {
     swing,
     strain,
     spans: spanResults,
-    supports: reactions(spans),
+    supports: reactions(input),
     ok,
     messages,
     discretisationError: 0,

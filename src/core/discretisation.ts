@@ -17,6 +17,8 @@ const RICHARDSON = 2 ** ORDER / (2 ** ORDER - 1);
 
 export interface StateSummary {
   horizontalTension: number;
+  /** Each span's horizontal tension, N: the refined mesh's starting values. */
+  spanTensions: number[];
   maxTension: number;
   sag: number;
 }
@@ -24,6 +26,7 @@ export interface StateSummary {
 export function summarise(state: StateSolution): StateSummary {
   return {
     horizontalTension: Math.max(...state.spans.map((s) => s.tensionN)),
+    spanTensions: state.spans.map((s) => s.tensionN),
     maxTension: largestStateTension(state.spans),
     sag: largestSag(state.spans),
   };
@@ -33,16 +36,17 @@ export function summarise(state: StateSolution): StateSummary {
 export function summariseStates(
   model: ProjectModel,
   tensionN: number,
-  caseTensionGuesses: readonly number[],
+  caseTensionGuesses: readonly (readonly number[])[],
 ): StateSummary[] {
   const installed = solveInstallation(model, tensionN);
+  const installedTensions = installed.spans.map((s) => s.tensionN);
   const out = [summarise(installed)];
   for (const [i, weather] of model.project.cases.entries()) {
     const state = solveChangeOfState(
       model,
       { ...loadStateOfCase(weather), name: weather.name },
       installed.unstressed,
-      caseTensionGuesses[i] ?? tensionN,
+      caseTensionGuesses[i] ?? installedTensions,
     );
     out.push(summarise(state));
   }
@@ -76,7 +80,7 @@ export function estimateErrors(
   results: readonly StateSummary[],
 ): number[] {
   const fine = buildProjectModel(model.project, 2 * refinement);
-  const guesses = results.slice(1).map((r) => r.horizontalTension);
+  const guesses = results.slice(1).map((r) => r.spanTensions);
   const refined = summariseStates(fine, tensionN, guesses);
   return results.map((r, i) => estimatedError(r, refined[i]));
 }

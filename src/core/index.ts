@@ -33,6 +33,13 @@ export {
   resolveEndFittings,
 } from './endFittings.ts';
 export { RANGES } from './fieldRanges.ts';
+export {
+  type Migration,
+  migrateProjectDocument,
+  migrationNotes,
+  PROJECT_MIGRATIONS,
+  type ProjectDocument,
+} from './migrateProject.ts';
 export * from './project.ts';
 export { INTERNAL_ERROR_MESSAGE } from './resultGuard.ts';
 export { type SolveOptions, solveProject } from './solveProject.ts';

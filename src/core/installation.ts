@@ -1,8 +1,9 @@
 /**
- * Installation target → the horizontal tension H the wire is pulled to at installation.
- * horizontalTension: H itself. maxTension, sag: root of the target quantity in ln H (Brent,
- * bracket grown by factors of 2). unstressedLength: length compatibility of all spans as one.
- * With target.case the quantity is measured in that case after the change of state.
+ * Installation target → the horizontal tension H₁ of the first span at installation (the other
+ * spans follow through the installation joints). horizontalTension: the largest span H, so H₁
+ * itself when no pulley makes the spans differ. maxTension, sag and the rest: root of the target
+ * quantity in ln H₁ (Brent, bracket grown by factors of 2). unstressedLength: length
+ * compatibility of all spans as one. With target.case the quantity is measured in that case.
  */
 
 import { solveSectionForLength } from './lengthCompatibility.ts';
@@ -62,7 +63,7 @@ function stateFor(
     model,
     { ...loadStateOfCase(weather), name: weather.name },
     installed.unstressed,
-    tensionN,
+    installed.spans.map((s) => s.tensionN),
   );
 }
 
@@ -77,6 +78,10 @@ function initialGuess(model: ProjectModel, target: InstallationTarget, value: nu
   return ((wire.weightNPerM + hung + 2 * points) * l * l) / (8 * value);
 }
 
+/** Why a slack target may be out of reach over a pulley, appended to the refusal. */
+const PULLEY_HINT =
+  ' (over a pulley the wire on each side carries the same tension, so a span must be pulled at least hard enough to hold up the weight of the span beyond the pulley)';
+
 export function findInstallationTension(
   model: ProjectModel,
   target: InstallationTarget,
@@ -84,11 +89,18 @@ export function findInstallationTension(
   if (target.unstressedLength !== undefined) {
     const wire = prepareState(model, model.installation);
     const guess = model.wire.massPerLength * model.env.gravity * 100;
-    const r = solveSectionForLength(model.spans, wire, target.unstressedLength, guess);
+    const r = solveSectionForLength(
+      model.spans,
+      wire,
+      target.unstressedLength,
+      guess,
+      model.installationJoints,
+    );
     return { tensionN: r.tensionN, evaluations: r.iterations, ok: r.converged, message: r.reason };
   }
   const value = target.horizontalTension ?? target.maxTension ?? target.sag ?? Number.NaN;
-  if (target.horizontalTension !== undefined && target.case === undefined) {
+  const equalH = model.installationJoints.every((joint) => joint === 'horizontal');
+  if (target.horizontalTension !== undefined && target.case === undefined && equalH) {
     return { tensionN: value, evaluations: 0, ok: true };
   }
   // In logarithms the quantity is nearly linear with slope ±1 (sag ∝ 1/H, tension ∝ H).
@@ -116,6 +128,6 @@ export function findInstallationTension(
     tensionN: Math.exp(start),
     evaluations: root.evaluations,
     ok: false,
-    message: `the ${what} target ${value} ${unit} cannot be reached with this wire and load${target.case ? ` in "${target.case}"` : ''}`,
+    message: `the ${what} target ${value} ${unit} cannot be reached with this wire and load${target.case ? ` in "${target.case}"` : ''}${equalH ? '' : PULLEY_HINT}`,
   };
 }

@@ -1,12 +1,12 @@
 /**
- * The project document (file format "sagwright-project", version 1) and the results object.
+ * The project document (file format "sagwright-project", version 2) and the results object.
  * SI units everywhere: m, kg, N, °C, m/s. This is a contract shared by the CLI, the core,
  * the UI, saved files and share links: extend it, never rename or re-unit a field.
  */
 import type { AsBuiltResult } from './asBuilt.ts';
 
 export const PROJECT_FORMAT = 'sagwright-project';
-export const PROJECT_VERSION = 1;
+export const PROJECT_VERSION = 2;
 
 export interface SupportPoint {
   /** Position along the span from the first support, m. */
@@ -14,9 +14,19 @@ export interface SupportPoint {
   /** Height above the ground datum, m. */
   z: number;
   label?: string;
-  /** Intermediate support only: the wire runs over a saddle or pulley and can slide. */
-  free?: boolean;
+  /** Intermediate support only: how the wire is held there (default "clamped"). */
+  attachment?: Attachment;
 }
+
+/**
+ * How an intermediate support holds the wire. clamped: each span keeps its own cut length.
+ * pulley: the wire runs over a pulley, sheave or smooth eye; tension equal on both sides and
+ * only the section's total cut length is fixed. swingLink: the wire is clamped to a link free
+ * to swing along the line; horizontal tension equal on both sides.
+ */
+export type Attachment = 'clamped' | 'pulley' | 'swingLink';
+
+export const ATTACHMENTS: readonly Attachment[] = ['clamped', 'pulley', 'swingLink'];
 
 export interface GroundPoint {
   x: number;
@@ -248,12 +258,25 @@ export interface SpanResult {
 }
 
 export interface SupportReaction {
+  /** Net pull along the line, N, signed positive toward increasing x. */
   horizontal: number;
+  /** Downward pull, N (wire and any point load placed at the support). */
   vertical: number;
+  /** Sideways pull in the wind direction, N. */
   lateral: number;
   resultant: number;
-  /** Angle of the wire's pull below the horizontal, degrees. */
+  /** Angle of the net pull below the horizontal, degrees. */
   angle: number;
+  /** "end" for the first and last support, else the support's attachment. */
+  attachment: Attachment | 'end';
+  /** Angle of the wire below the horizontal on the side toward the previous support, degrees. */
+  angleBefore?: number;
+  /** Angle of the wire below the horizontal on the side toward the next support, degrees. */
+  angleAfter?: number;
+  /** Wire tension at the support on the side toward the previous support, N. */
+  tensionBefore?: number;
+  /** Wire tension at the support on the side toward the next support, N. */
+  tensionAfter?: number;
 }
 
 /** Sampled wire profile for plots and exports (not part of the JSON contract's required set). */

@@ -1,8 +1,9 @@
 /**
  * Set-up chart: what to set on the day. The wire is cut to the design length L₀ (at the
  * installation temperature t₀); tensioned at another temperature t with the installation loads
- * (no ice, no wind), every span pulled through with one H, it shows the H, sag and largest
- * tension of L₀(1 + α(t − t₀)). Field check: the pulse return time 2 ∫ ds / c of the reference
+ * (no ice, no wind), pulled through as at installation (pulleys: equal tension; other supports:
+ * equal horizontal tension), it shows the largest span H, the sag and the largest tension of
+ * L₀(1 + α(t − t₀)). Field check: the pulse return time 2 ∫ ds / c of the reference
  * span, c = √(T / μ) (fieldChecks.ts); null when hung loads are on the wire while it is set.
  */
 
@@ -30,13 +31,17 @@ export function setUpTemperatures(model: ProjectModel): number[] {
 
 export interface SetUpState {
   spans: SolvedSpan[];
+  /** Horizontal tension of the first span, N (the next row's starting value). */
   tensionN: number;
+  /** The largest span horizontal tension, N (every span's when no pulley makes them differ). */
+  largestTensionN: number;
   solved: boolean;
 }
 
 /**
- * The wire of cut lengths `unstressedSpans` (m, at t₀) pulled through every span with one H at
- * `temperature` (°C), installation loads, no ice or wind. Leaves the span models in that state.
+ * The wire of cut lengths `unstressedSpans` (m, at t₀) pulled through as at installation at
+ * `temperature` (°C), installation loads, no ice or wind: pulleys keep the tension equal, every
+ * other support the horizontal tension. Leaves the span models in that state.
  */
 export function solveSetUpState(
   model: ProjectModel,
@@ -51,9 +56,15 @@ export function solveSetUpState(
     wire,
     total * thermalFactor(model, temperature),
     tensionGuessN,
+    model.installationJoints,
   );
-  const spans = model.spans.map((span) => ({ span, tensionN: solution.tensionN }));
-  return { spans, tensionN: solution.tensionN, solved: solution.converged };
+  const spans = model.spans.map((span, j) => ({ span, tensionN: solution.spanTensionsN[j] }));
+  return {
+    spans,
+    tensionN: solution.tensionN,
+    largestTensionN: Math.max(...solution.spanTensionsN),
+    solved: solution.converged,
+  };
 }
 
 /** Pulse return time (s) of span `index` in a set-up state, or null when the check fails. */
@@ -85,7 +96,7 @@ export function setUpChart(
     return {
       temperature,
       solved: state.solved,
-      horizontalTension: state.tensionN,
+      horizontalTension: state.largestTensionN,
       maxTension: largestStateTension(state.spans),
       sag: largestSpanSag(state.spans[sagSpanIndex]),
       returnTime: setUpReturnTime(model, state, sagSpanIndex, temperature),

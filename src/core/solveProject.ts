@@ -18,6 +18,7 @@ import {
   targetSpanIndex,
 } from './installation.ts';
 import { hungDrops, loadStateOfCase } from './loads.ts';
+import { migrateProjectDocument } from './migrateProject.ts';
 import { addMovingLoads } from './movingLoads.ts';
 import type {
   CaseResult,
@@ -68,6 +69,9 @@ function checkState(
     name,
     temperature,
     spans: state.spans,
+    attachments: model.attachments,
+    supportForcesN: state.supportForcesN,
+    supportLateralN: state.supportLateralN,
     ground: p.ground ?? [],
     drops: hungDrops(p.loads, withLoads),
     zones: p.limits.zones ?? [],
@@ -116,7 +120,7 @@ function solveOnMesh(project: Project, refinement: number, fittings: EndFittings
       model,
       { ...loadStateOfCase(weather), name: weather.name },
       installed.unstressed,
-      target.tensionN,
+      installed.spans.map((s) => s.tensionN),
     );
     const result = finish(
       caseResultId(i),
@@ -164,10 +168,18 @@ function governing(project: Project, results: CaseResult[]) {
 }
 
 /**
- * Solve a project that has passed validateProject. Never throws: an internal failure comes back
- * as results whose every case says so in words, and no case marked solved holds NaN or infinity.
+ * Solve a project that has passed validateProject (an older version is read through the same
+ * migration as validateProject). Never throws: an internal failure comes back as results whose
+ * every case says so in words, and no case marked solved holds NaN or infinity.
  */
-export function solveProject(project: Project, options: SolveOptions = {}): ProjectResults {
+export function solveProject(document: Project, options: SolveOptions = {}): ProjectResults {
+  let project = document;
+  try {
+    const older = migrateProjectDocument(document as unknown as Record<string, unknown>);
+    if (older) project = older.document as unknown as Project;
+  } catch {
+    return unsolvedResults(document);
+  }
   if (!resolveWire(project.wire))
     return unsolvedResults(project, 'wire.catalogId: this wire is not in the catalogue.');
   try {

@@ -1,12 +1,14 @@
 /**
  * validateProject: checks an untrusted JSON value against the project contract (project.ts).
  * Anything missing, unknown, of the wrong type, non-finite or out of physical range is refused
- * with the field path and the rule; nothing is repaired. A newer version is refused by name.
+ * with the field path and the rule; nothing is repaired. A newer version is refused by name; an
+ * older one is read through the migration chain (migrateProject.ts) and says what changed.
  */
 
 import { END_FITTING_KINDS } from './endFittings.ts';
 import { describeRange, RANGES } from './fieldRanges.ts';
-import { PROJECT_FORMAT, PROJECT_VERSION, type Project } from './project.ts';
+import { migrateProjectDocument } from './migrateProject.ts';
+import { ATTACHMENTS, PROJECT_FORMAT, PROJECT_VERSION, type Project } from './project.ts';
 import { FieldChecker, type Json, quoted, type ValidationIssue } from './validateFields.ts';
 import { checkInstallation, type SupportXZ } from './validateInstallation.ts';
 import { checkReportRecord } from './validateReport.ts';
@@ -14,7 +16,7 @@ import { findCatalogWire } from './wireCatalog.ts';
 
 export type { ValidationIssue } from './validateFields.ts';
 export type ValidationResult =
-  | { ok: true; project: Project }
+  | { ok: true; project: Project; migratedFrom?: number; notes?: string[] }
   | { ok: false; issues: ValidationIssue[] };
 
 const TOP_FIELDS = [
@@ -46,14 +48,25 @@ function checkSupports(c: FieldChecker, raw: unknown): SupportXZ[] {
   const xs: SupportXZ[] = [];
   list.forEach((item, i) => {
     const path = `supports[${i}]`;
-    const s = c.object(item, path, ['x', 'z', 'label', 'free']);
+    if ((item as Json | null)?.free !== undefined)
+      c.fail(
+        `${path}.free`,
+        'is a version 1 field; version 2 says "attachment": "clamped", "pulley" or "swingLink"',
+      );
+    const s = c.object(item, path, ['x', 'z', 'label', 'attachment', 'free']);
     if (!s) return;
     const x = c.inRange(s.x, `${path}.x`, RANGES.position);
     const z = c.inRange(s.z, `${path}.z`, RANGES.height);
     c.label(s.label, `${path}.label`, 100, false);
-    const free = c.boolean(s.free, `${path}.free`, false);
-    if (free && (i === 0 || i === list.length - 1))
-      c.fail(`${path}.free`, 'an end support cannot be free');
+    if (s.attachment !== undefined) {
+      const end = i === 0 || i === list.length - 1;
+      if (
+        c.oneOf(s.attachment, `${path}.attachment`, ATTACHMENTS) &&
+        end &&
+        s.attachment !== 'clamped'
+      )
+        c.fail(`${path}.attachment`, 'an end support holds the wire fast; only "clamped" applies');
+    }
     if (x === undefined) return;
     const previous = xs[xs.length - 1];
     if (previous && x <= previous.x)
@@ -307,6 +320,21 @@ function checkSettings(c: FieldChecker, model: unknown, env: unknown): void {
 }
 
 export function validateProject(raw: unknown): ValidationResult {
+  let older: ReturnType<typeof migrateProjectDocument>;
+  try {
+    older =
+      typeof raw === 'object' && raw !== null && !Array.isArray(raw)
+        ? migrateProjectDocument(raw as Json)
+        : undefined;
+  } catch {
+    older = undefined; // not a plain JSON document: the checks below say what is wrong
+  }
+  if (!older) return validateCurrent(raw);
+  const checked = validateCurrent(older.document);
+  return checked.ok ? { ...checked, migratedFrom: older.from, notes: older.notes } : checked;
+}
+
+function validateCurrent(raw: unknown): ValidationResult {
   const c = new FieldChecker();
   const doc = c.object(raw, '', TOP_FIELDS);
   if (!doc) return { ok: false, issues: c.issues };

@@ -1,15 +1,21 @@
 /**
  * Version migration for project files. Each step turns a document of version n into version
  * n + 1 (extend the contract, never rename or re-unit a field); the chain runs before the
- * validator. Version 1 is the first released format, so the chain is empty today.
+ * validator. The steps themselves live in the core (migrateProject.ts), so the CLI, the worker
+ * and every way of opening a project read older files the same way.
  */
-import { PROJECT_VERSION, type ValidationIssue } from '../core/index.ts';
+import {
+  type Migration,
+  PROJECT_MIGRATIONS,
+  PROJECT_VERSION,
+  type ProjectDocument,
+  type ValidationIssue,
+} from '../core/index.ts';
 
-export type ProjectDocument = Record<string, unknown>;
-export type Migration = (document: ProjectDocument) => ProjectDocument;
+export type { Migration, ProjectDocument };
 
 /** Keyed by the version a step reads; it returns the next version's document. */
-export const MIGRATIONS: Readonly<Record<number, Migration>> = {};
+export const MIGRATIONS: Readonly<Record<number, Migration>> = PROJECT_MIGRATIONS;
 
 export type MigrationResult =
   | { ok: true; document: ProjectDocument; from?: number }

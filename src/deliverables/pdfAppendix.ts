@@ -9,6 +9,7 @@ import {
   type Project,
   type ProjectResults,
 } from '../core/index.ts';
+import { attachmentWords } from './attachmentWords.ts';
 import {
   formatForceShort,
   formatLength,
@@ -161,10 +162,7 @@ function inputTables(
       table: {
         head: ['Fixing', 'Along the span', 'Height', 'Attachment'],
         rows: project.supports.map((s, i) => {
-          const kind =
-            (s as { attachment?: string }).attachment ??
-            (s.free ? 'pulley' : i === 0 || i === project.supports.length - 1 ? 'end' : 'clamped');
-          return [fixingName(project, i), len(s.x), len(s.z), kind];
+          return [fixingName(project, i), len(s.x), len(s.z), attachmentWords(project, i)];
         }),
       },
     },

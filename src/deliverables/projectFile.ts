@@ -4,6 +4,7 @@
  * itself: it returns the project or the list of issues (field path and rule) for the caller.
  */
 import {
+  migrationNotes,
   PROJECT_FORMAT,
   PROJECT_VERSION,
   type Project,
@@ -16,7 +17,7 @@ import { MIGRATIONS, type Migration, migrateDocument } from './migrations.ts';
 export const PROJECT_FILE_EXTENSION = '.sagwright.json';
 
 export type OpenResult =
-  | { ok: true; project: Project; migratedFrom?: number }
+  | { ok: true; project: Project; migratedFrom?: number; notes?: string[] }
   | { ok: false; issues: ValidationIssue[] };
 
 /** The file text: the document exactly as stored, SI units, two-space indented. */
@@ -89,9 +90,9 @@ export function openProjectText(
   if (!migrated.ok) return { ok: false, issues: migrated.issues };
   const checked = validateProject(migrated.document);
   if (!checked.ok) return checked;
-  return migrated.from === undefined
-    ? { ok: true, project: checked.project }
-    : { ok: true, project: checked.project, migratedFrom: migrated.from };
+  if (migrated.from === undefined) return { ok: true, project: checked.project };
+  const notes = migrationNotes(parsed.value as Record<string, unknown>);
+  return { ok: true, project: checked.project, migratedFrom: migrated.from, notes };
 }
 
 /** Opens a file the person picked; an oversized file is refused before it is read. */

@@ -87,6 +87,8 @@ export function writeAutosave(
 
 export interface Opened {
   project: Project;
+  /** What reading an older file format changed, in words (none for a current document). */
+  formatNotes?: string[];
   /** Present when the stored document could not be opened as it was. */
   recovery?: {
     issues: ValidationIssue[];
@@ -112,7 +114,10 @@ export function openAutosave(storage: KeyValueStorage | undefined, fallback: Pro
     raw = undefined;
   }
   const checked = raw === undefined ? null : validateProject(raw);
-  if (checked?.ok) return { project: checked.project };
+  if (checked?.ok)
+    return checked.notes?.length
+      ? { project: checked.project, formatNotes: checked.notes }
+      : { project: checked.project };
   try {
     storage?.setItem(REJECTED_KEY, text);
   } catch {

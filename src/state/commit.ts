@@ -108,8 +108,22 @@ export function commitAction(
 }
 
 /** Replace the whole document with one opened from a file, a stored project or a link. */
-export function commitOpened(project: Project, bench: Workbench = appWorkbench): CommitOutcome {
-  return commit(() => project, {}, bench);
+/**
+ * Open a whole project in one step; `formatNotes` says what reading an older file format
+ * changed (shown until dismissed or another project is opened).
+ */
+export function commitOpened(
+  project: Project,
+  bench: Workbench = appWorkbench,
+  formatNotes: readonly string[] = [],
+): CommitOutcome {
+  const outcome = commit(() => project, {}, bench);
+  if (outcome.ok) bench.session.setState({ formatNotes: [...formatNotes] });
+  return outcome;
+}
+
+export function dismissFormatNotes(bench: Workbench = appWorkbench): void {
+  bench.session.setState({ formatNotes: [] });
 }
 
 export function dismissEditNotice(bench: Workbench = appWorkbench): void {

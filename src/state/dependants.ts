@@ -110,9 +110,12 @@ function carryTarget(
 function carryEnds(p: Project, changes: string[]): SupportPoint[] {
   const last = p.supports.length - 1;
   return p.supports.map((s, i) => {
-    if ((i === 0 || i === last) && s.free) {
-      changes.push(`${s.label || `Fixing ${i + 1}`} is now an end fixing: it is no longer free.`);
-      const { free: _free, ...rest } = s;
+    if ((i === 0 || i === last) && s.attachment !== undefined && s.attachment !== 'clamped') {
+      const kind = s.attachment === 'pulley' ? 'a pulley' : 'a swing link';
+      changes.push(
+        `${s.label || `Fixing ${i + 1}`} is now an end fixing: it holds the wire fast, no longer ${kind}.`,
+      );
+      const { attachment: _attachment, ...rest } = s;
       return rest;
     }
     return s;

@@ -184,6 +184,7 @@ export function createSession(options: SessionOptions) {
       store.getState().resetProject(opened.project);
       quiet = false;
       if (opened.recovery) session.setState({ recovery: opened.recovery });
+      if (opened.formatNotes) session.setState({ formatNotes: opened.formatNotes });
       stops.push(
         store.subscribe((s, previous) => s.project !== previous.project && save(s.project)),
       );

@@ -42,6 +42,8 @@ export interface SessionState {
   unsavedEdits: boolean;
   recovery: Recovery | null;
   editNotice: EditNotice | null;
+  /** The project on screen was read from an older file format: what that changed, in words. */
+  formatNotes: string[];
 }
 
 export const initialSessionState: SessionState = {
@@ -50,6 +52,7 @@ export const initialSessionState: SessionState = {
   unsavedEdits: false,
   recovery: null,
   editNotice: null,
+  formatNotes: [],
 };
 
 export function createSessionStore() {

@@ -7,7 +7,7 @@
 import type { Project } from '../core/index.ts';
 import { projectFileName, serializeProject } from '../deliverables/projectFile.ts';
 import { appSession } from '../state/appSession.ts';
-import { dismissEditNotice, undoEdit } from '../state/commit.ts';
+import { dismissEditNotice, dismissFormatNotes, undoEdit } from '../state/commit.ts';
 import { useProjectStore } from '../state/projectStore.ts';
 import { type Recovery, type SaveState, useSessionStore } from '../state/sessionStore.ts';
 import { downloadBlob, fileStem } from './export/download.ts';
@@ -154,6 +154,24 @@ function EditNoticeView() {
   );
 }
 
+/** An older file was read: what its results now differ in, until dismissed. */
+function FormatNotice() {
+  const notes = useSessionStore((s) => s.formatNotes);
+  if (notes.length === 0) return null;
+  return (
+    <section className="session-notice notice-info" role="status" aria-label="Older file">
+      {notes.map((note) => (
+        <p key={note}>{note}</p>
+      ))}
+      <div className="actions">
+        <button type="button" onClick={() => dismissFormatNotes()}>
+          Dismiss
+        </button>
+      </div>
+    </section>
+  );
+}
+
 export function SessionNotices() {
   const recovery = useSessionStore((s) => s.recovery);
   const save = useSessionStore((s) => s.save);
@@ -164,6 +182,7 @@ export function SessionNotices() {
       {recovery && <RecoveryNotice recovery={recovery} />}
       {save.kind === 'failed' && !otherTab && <SaveFailure save={save} />}
       {otherTab && <OtherTab unsaved={unsaved} />}
+      <FormatNotice />
       <EditNoticeView />
     </div>
   );

@@ -22,7 +22,7 @@ export interface SpanSpec {
 export function singleSpan(spec: SpanSpec): Project {
   return {
     format: 'sagwright-project',
-    version: 1,
+    version: 2,
     title: 'test span',
     supports: [
       { x: 0, z: 0 },

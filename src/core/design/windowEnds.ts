@@ -8,6 +8,7 @@
  * is found again from that point, until the governing case is among those solved.
  */
 import { type ProjectModel, prepareState } from '../projectModel.ts';
+import { largestInstallationTension } from '../states.ts';
 import { type RangeRoot, rootInRange } from './rangeRoot.ts';
 import {
   type CaseSubset,
@@ -141,7 +142,7 @@ export function findWindowEnds(model: ProjectModel, options: WindowOptions = {})
   if (high.status === 'root' && high.full) {
     ends.atHigh = high.full;
     ends.high = {
-      horizontalTension: Math.exp(high.x),
+      horizontalTension: largestInstallationTension(model, Math.exp(high.x)),
       case: high.full.tensionCase,
       check: TENSION_CHECK,
     };
@@ -162,7 +163,7 @@ export function findWindowEnds(model: ProjectModel, options: WindowOptions = {})
     if (low.status === 'root' && low.full) {
       ends.atLow = low.full;
       ends.low = {
-        horizontalTension: Math.exp(low.x),
+        horizontalTension: largestInstallationTension(model, Math.exp(low.x)),
         case: low.full.clearanceCase,
         check: low.full.clearanceCheck,
       };

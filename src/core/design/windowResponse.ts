@@ -84,7 +84,8 @@ export type CaseSubset = ReadonlySet<number> | undefined;
  * `visit` with each solved state's index (−1 the installation), name, spans and checks.
  */
 export function createCheckEvaluator(model: ProjectModel) {
-  const guesses = model.project.cases.map(() => Number.NaN);
+  // Each case's span tensions from its last solve (a warm start), none before the first.
+  const guesses: (number[] | undefined)[] = model.project.cases.map(() => undefined);
   return (
     tensionN: number,
     visit: (index: number, name: string, spans: SolvedSpan[], checks: CheckValue[]) => void,
@@ -100,7 +101,7 @@ export function createCheckEvaluator(model: ProjectModel) {
     );
     for (const [i, weather] of model.project.cases.entries()) {
       if (only && !only.has(i)) continue;
-      const guess = Number.isFinite(guesses[i]) ? guesses[i] : tensionN;
+      const guess = guesses[i] ?? installed.spans.map((s) => s.tensionN);
       const state = solveChangeOfState(
         model,
         { ...loadStateOfCase(weather), name: weather.name },
@@ -108,7 +109,7 @@ export function createCheckEvaluator(model: ProjectModel) {
         guess,
       );
       if (!state.solved) return false;
-      guesses[i] = Math.max(...state.spans.map((s) => s.tensionN));
+      guesses[i] = state.spans.map((s) => s.tensionN);
       visit(
         i,
         weather.name,

@@ -145,7 +145,7 @@ export function ExportMenu() {
       });
       return;
     }
-    const committed = commitOpened(result.project);
+    const committed = commitOpened(result.project, undefined, result.notes);
     if (!committed.ok) {
       setNotice({
         kind: 'refused',

@@ -45,7 +45,7 @@ export function useSharedProject() {
       // keeps the person's own work, not the first link.
       const mine = useProjectStore.getState().project;
       appSession()?.pause();
-      const committed = commitOpened(opened.project);
+      const committed = commitOpened(opened.project, undefined, opened.notes);
       if (!committed.ok) {
         setState({ kind: 'refused', issues: committed.issues });
         if (!viewing.current) appSession()?.resume();

@@ -29,11 +29,16 @@ export function SelectField<T extends string>(props: {
   value: T;
   options: readonly { value: T; label: string }[];
   edit: (value: T) => Edit;
+  /** Read out before the label (e.g. the fixing's name) where the label repeats in a list. */
+  context?: string;
 }) {
   const id = useId();
   return (
     <div className="field">
-      <label htmlFor={id}>{props.label}</label>
+      <label htmlFor={id}>
+        {props.context && <span className="visually-hidden">{props.context} </span>}
+        {props.label}
+      </label>
       <select
         id={id}
         value={props.value}

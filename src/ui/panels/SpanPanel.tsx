@@ -1,11 +1,17 @@
 /** The span: fixings (position, height, name), the ground line and clearance zones. */
-import type { Project } from '../../core/index.ts';
+import { ATTACHMENTS, type Attachment, type Project } from '../../core/index.ts';
+import { ATTACHMENT_CHOICE } from '../../deliverables/attachmentWords.ts';
 import * as edits from '../../state/projectEdits.ts';
 import { useProjectStore } from '../../state/projectStore.ts';
-import { applyEdit, CheckField } from '../fields/ChoiceFields.tsx';
+import { applyEdit, SelectField } from '../fields/ChoiceFields.tsx';
 import { NumberField } from '../fields/NumberField.tsx';
 import { TextField } from '../fields/TextField.tsx';
 import { Row } from './Row.tsx';
+
+const ATTACHMENT_OPTIONS = ATTACHMENTS.map((value) => ({
+  value,
+  label: ATTACHMENT_CHOICE[value],
+}));
 
 function Supports({ project }: { project: Project }) {
   const count = project.supports.length;
@@ -42,10 +48,16 @@ function Supports({ project }: { project: Project }) {
               edit={(z) => edits.patchSupport(i, { z })}
             />
             {i > 0 && i < count - 1 && (
-              <CheckField
-                label="Runs over a pulley (free)"
-                checked={support.free === true}
-                edit={(free) => edits.patchSupport(i, { free: free || undefined })}
+              <SelectField<Attachment>
+                label="Holds the wire"
+                context={name}
+                value={support.attachment ?? 'clamped'}
+                options={ATTACHMENT_OPTIONS}
+                edit={(attachment) =>
+                  edits.patchSupport(i, {
+                    attachment: attachment === 'clamped' ? undefined : attachment,
+                  })
+                }
               />
             )}
             {count > 2 && (
@@ -61,6 +73,14 @@ function Supports({ project }: { project: Project }) {
           </Row>
         );
       })}
+      {count > 2 && (
+        <p className="muted">
+          A fixing between spans holds the wire clamped (each span keeps its own length of wire),
+          over a pulley or smooth eye (the wire slides through: the same tension on both sides) or
+          on a swing link (a hanging link that swings along the line: the same horizontal pull on
+          both sides).
+        </p>
+      )}
       <button
         type="button"
         onClick={() => applyEdit(edits.addSupport(), 'Add a fixing at the far end')}
