@@ -98,7 +98,14 @@ test('the set-up chart shows the core values, names the span and marks the insta
   await expect(marked).toHaveCount(1);
   await expect(marked.getByRole('rowheader')).toContainText('15\u00a0°C');
   await expect(page.getByText(/cut length: 22\.006\u00a0m unstressed at 15\u00a0°C/)).toBeVisible();
-  await expect(page.getByText(/^Pulse check: flick the wire near a fixing/)).toBeVisible();
+  // The demo's lights hang on the wire while it is set, so the pulse check does not hold (the core
+  // gives no return time) and the chart says to measure the sag instead.
+  const pulseHolds = results.setUpChart.some((row) => row.returnTime !== null);
+  await expect(
+    page.getByText(
+      pulseHolds ? /^Pulse check: flick the wire near a fixing/ : /^Pulse check: not valid/,
+    ),
+  ).toBeVisible();
 
   await page.getByLabel('Imperial').check();
   await expectChart(page, results.setUpChart, expectedImperial);

@@ -51,7 +51,8 @@ export function parkedProject(project: Project, load: MovingLoad, x: number): Pr
 /** The state of a case with the moving load at x, at the fixed cut lengths. */
 export function solveMovingLoadAt(ctx: MovingContext, load: MovingLoad, x: number): StateSolution {
   const model = buildProjectModel(parkedProject(ctx.project, load, x), ctx.refinement);
-  return solveChangeOfState(model, ctx.state, ctx.unstressed, ctx.tensionGuessN);
+  const guesses = ctx.unstressed.map(() => ctx.tensionGuessN);
+  return solveChangeOfState(model, ctx.state, ctx.unstressed, guesses);
 }
 
 function bandGrid(project: Project): number[] {
