@@ -10,6 +10,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { type Load, type Project, solveProject, validateProject } from '../src/core/index.ts';
+import { PROJECT_VERSION } from '../src/core/project.ts';
 import { firstNonFinite } from '../src/core/resultGuard.ts';
 import { hasControlCharacter } from '../src/core/validateFields.ts';
 import { openProjectText, serializeProject } from '../src/deliverables/projectFile.ts';
@@ -54,7 +55,7 @@ function projectOf(s: Shape): Project {
   const longest = Math.max(...s.spans);
   return {
     format: 'sagwright-project',
-    version: 1,
+    version: PROJECT_VERSION,
     title: 'property test span',
     supports: xs.map((x, i) => ({
       x,
