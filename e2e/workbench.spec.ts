@@ -90,6 +90,7 @@ test('the demo opens with the core results in the table and the plot', async ({ 
 test('editing span, load and temperature re-solves to the core values; reload keeps edits; undo and redo', async ({
   page,
 }) => {
+  test.slow(); // edits, a reload, undo and redo: several full solves and redraws in one test
   await openDemo(page);
   const project = demoProject();
 
