@@ -14,6 +14,7 @@ import { useProjectStore } from '../../state/projectStore.ts';
 import { applyEdit } from '../fields/ChoiceFields.tsx';
 import { NumberField } from '../fields/NumberField.tsx';
 import { TextField } from '../fields/TextField.tsx';
+import { LoadWeightField } from './LoadWeightField.tsx';
 import { MovingLoadRow } from './MovingLoadRow.tsx';
 import { Row } from './Row.tsx';
 
@@ -33,25 +34,7 @@ function PointRow({ load, index }: { load: PointLoad; index: number }) {
         value={load.x}
         edit={(x) => edits.patchLoad(index, { x })}
       />
-      {load.force !== undefined ? (
-        <NumberField
-          path={`${path}.force`}
-          context={name}
-          label="Force"
-          quantity="force"
-          value={load.force}
-          edit={(force) => edits.patchLoad(index, { force })}
-        />
-      ) : (
-        <NumberField
-          path={`${path}.mass`}
-          context={name}
-          label="Mass"
-          quantity="mass"
-          value={load.mass ?? 0}
-          edit={(mass) => edits.patchLoad(index, { mass })}
-        />
-      )}
+      <LoadWeightField load={load} index={index} name={name} />
       <NumberField
         path={`${path}.windArea`}
         context={name}

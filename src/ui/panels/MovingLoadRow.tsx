@@ -2,6 +2,7 @@
 import type { MovingLoad } from '../../core/index.ts';
 import * as edits from '../../state/projectEdits.ts';
 import { NumberField } from '../fields/NumberField.tsx';
+import { LoadWeightField } from './LoadWeightField.tsx';
 
 export function MovingLoadRow({ load, index }: { load: MovingLoad; index: number }) {
   const path = `loads[${index}]`;
@@ -24,25 +25,7 @@ export function MovingLoadRow({ load, index }: { load: MovingLoad; index: number
         value={load.to}
         edit={(to) => edits.patchLoad(index, { to })}
       />
-      {load.force !== undefined ? (
-        <NumberField
-          path={`${path}.force`}
-          context={name}
-          label="Force"
-          quantity="force"
-          value={load.force}
-          edit={(force) => edits.patchLoad(index, { force })}
-        />
-      ) : (
-        <NumberField
-          path={`${path}.mass`}
-          context={name}
-          label="Mass"
-          quantity="mass"
-          value={load.mass ?? 0}
-          edit={(mass) => edits.patchLoad(index, { mass })}
-        />
-      )}
+      <LoadWeightField load={load} index={index} name={name} />
       <p className="muted moving-caution" data-testid="moving-caution">
         The envelope shows the worst position for the wire; never for carrying people.
       </p>
