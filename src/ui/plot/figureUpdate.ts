@@ -1,11 +1,13 @@
 /**
- * A quick redraw of the wire lines alone. A typical edit moves only the wires (each case's FE
- * line and its parabola); axes, ground, zones, fixings and legend stay. A full Plotly redraw
- * re-derives and redraws all of it (tens of ms); here the line traces' paths are rewritten from
- * the new numbers with the axes on screen (well under a millisecond). Until the full redraw that
- * follows once edits pause, the notes (annotations) and hover labels, which would still show the
- * old numbers, are hidden (class `plot-sketch`). Anything else that changed (a trace added or
- * restyled, the layout, data leaving the axis ranges) needs the full redraw.
+ * A quick redraw of what moved. A typical edit moves only the wires (each case's FE line and its
+ * parabola); dragging a fixing also moves its marker and label, and perhaps the filled ground;
+ * axes, zones and legend stay. A full Plotly redraw re-derives and redraws all of it (tens of
+ * ms); here the paths of the line traces, the outlines of filled ones and the positions of
+ * markers are rewritten from the new numbers with the axes on screen (well under a millisecond).
+ * Until the full redraw that follows once edits pause, the notes (annotations) and hover labels,
+ * which would still show the old numbers, are hidden (class `plot-sketch`). Anything else that
+ * changed (a trace added or restyled, the layout, data leaving the axis ranges) needs the full
+ * redraw.
  */
 import type { Data, Layout } from 'plotly.js';
 
@@ -23,8 +25,19 @@ export interface FigureSignature {
   layout: string;
   /** Each trace without its numbers. */
   traces: string[];
-  /** Which traces are plain lines that a sketch can redraw. */
-  lines: boolean[];
+  /** How a sketch can redraw each trace, or null when it cannot. */
+  kinds: (SketchKind | null)[];
+}
+
+/**
+ * line: a plain line (its path). fill: a closed filled outline (mode lines, fill toself).
+ * markers: markers with or without text labels (no line).
+ */
+export type SketchKind = 'line' | 'fill' | 'markers';
+
+export interface SketchTrace {
+  index: number;
+  kind: SketchKind;
 }
 
 function withoutData(trace: Data): string {
@@ -33,9 +46,13 @@ function withoutData(trace: Data): string {
   return JSON.stringify(rest);
 }
 
-function isPlainLine(trace: Data): boolean {
+function sketchKind(trace: Data): SketchKind | null {
   const t = trace as { type?: string; mode?: string; fill?: string };
-  return (t.type ?? 'scatter') === 'scatter' && t.mode === 'lines' && !t.fill;
+  if ((t.type ?? 'scatter') !== 'scatter') return null;
+  if (t.mode === 'lines') return !t.fill ? 'line' : t.fill === 'toself' ? 'fill' : null;
+  if (t.mode === 'markers' || t.mode === 'text+markers' || t.mode === 'markers+text')
+    return t.fill ? null : 'markers';
+  return null;
 }
 
 export function figureSignature(figure: FigureLike): FigureSignature {
@@ -43,7 +60,7 @@ export function figureSignature(figure: FigureLike): FigureSignature {
   return {
     layout: JSON.stringify(rest),
     traces: figure.data.map(withoutData),
-    lines: figure.data.map(isPlainLine),
+    kinds: figure.data.map(sketchKind),
   };
 }
 
@@ -79,8 +96,9 @@ export interface Sketched {
 }
 
 /**
- * The traces to redraw for a sketch of `next` over the full drawing of `drawn`, or null when
- * only a full redraw will do.
+ * The traces to redraw for a sketch of `next` over the full drawing of `drawn` (every line,
+ * filled outline and set of markers: a few hundred points in all), or null when only a full
+ * redraw will do.
  * @param ranges the axis ranges on screen; the new data must stay inside them and fill at least
  *   `fill` of each, so the picture never clips or shrinks away.
  */
@@ -89,18 +107,20 @@ export function sketchTraces(
   next: Sketched,
   ranges: { x?: readonly unknown[]; y?: readonly unknown[] },
   fill = 0.6,
-): number[] | null {
+): SketchTrace[] | null {
   const [was, now] = [drawn.signature, next.signature];
   if (was.traces.length !== now.traces.length || was.layout !== now.layout) return null;
-  const lines: number[] = [];
+  const lines: SketchTrace[] = [];
   for (let i = 0; i < now.traces.length; i++) {
     if (was.traces[i] !== now.traces[i]) return null;
-    if (now.lines[i]) lines.push(i);
-    else {
-      const a = drawn.figure.data[i] as Record<string, unknown>;
-      const b = next.figure.data[i] as Record<string, unknown>;
-      if (!DATA_KEYS.every((key) => sameNumbers(a[key], b[key]))) return null;
-    }
+    const kind = now.kinds[i];
+    const a = drawn.figure.data[i] as Record<string, unknown>;
+    const b = next.figure.data[i] as Record<string, unknown>;
+    // Markers keep their count (one DOM node each); a changed count needs the full redraw.
+    const count = (t: Record<string, unknown>) => (Array.isArray(t.x) ? t.x.length : -1);
+    if (kind === 'line' || kind === 'fill' || (kind === 'markers' && count(a) === count(b)))
+      lines.push({ index: i, kind });
+    else if (!DATA_KEYS.every((key) => sameNumbers(a[key], b[key]))) return null;
   }
   for (const axis of ['x', 'y'] as const) {
     const range = ranges[axis];
