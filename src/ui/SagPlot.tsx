@@ -1,15 +1,16 @@
 /**
  * The sag plot on screen: draws buildSagFigure() with Plotly once Plotly has loaded (lazily),
  * in side view (height) or plan view (sideways swing in wind), and states the largest parabola
- * difference. Redraws wait for the next frame and skip results that a newer one replaces.
+ * difference. In side view the fixings and point loads can be dragged (DragHandles.tsx). Redraws wait for the next frame and skip results that a newer one replaces.
  */
-import { useId, useMemo, useRef } from 'react';
+import { useId, useMemo, useRef, useState } from 'react';
 import type { Project, ProjectResults } from '../core/index.ts';
 import type { UnitSystem } from '../core/units.ts';
 import { useResultsStore } from '../state/resultsStore.ts';
 import { documentRevision } from '../state/revision.ts';
 import { useUiStore } from '../state/uiStore.ts';
 import { show } from './format.ts';
+import { DragHandles } from './plot/DragHandles.tsx';
 import { usePlotViewStore } from './plot/plotViewStore.ts';
 import { buildSagFigure, type PlotView, type SagFigure } from './plot/sagFigure.ts';
 import { usePlotlyDraw } from './plot/usePlotlyDraw.ts';
@@ -84,6 +85,31 @@ interface CaptionProps {
   units: UnitSystem;
 }
 
+interface HeldAxes {
+  x: [number, number];
+  y: [number, number];
+}
+
+function axesOnScreen(container: HTMLDivElement | null): HeldAxes | null {
+  const layout = (container as { _fullLayout?: Record<string, { range?: unknown[] }> } | null)
+    ?._fullLayout;
+  const [x, y] = [layout?.xaxis?.range, layout?.yaxis?.range];
+  const pair = (r?: unknown[]) =>
+    r?.length === 2 && typeof r[0] === 'number' && typeof r[1] === 'number'
+      ? ([r[0], r[1]] as [number, number])
+      : null;
+  const [px, py] = [pair(x), pair(y)];
+  return px && py ? { x: px, y: py } : null;
+}
+
+function holdAxes(layout: SagFigure['layout'], held: HeldAxes): SagFigure['layout'] {
+  return {
+    ...layout,
+    xaxis: { ...layout.xaxis, range: held.x, autorange: false },
+    yaxis: { ...layout.yaxis, range: held.y, autorange: false },
+  };
+}
+
 export function SagPlot({ project, results }: { project: Project; results: ProjectResults }) {
   const containerRef = useRef<HTMLDivElement>(null);
   const captionId = useId();
@@ -92,25 +118,41 @@ export function SagPlot({ project, results }: { project: Project; results: Proje
   const view = usePlotViewStore((s) => s.view);
   // A newer result is on its way: drawing this one would be wasted main-thread time.
   const newerPending = useResultsStore((s) => s.stale && s.error === null);
-  const figure = useMemo(
-    () => ({
-      ...buildSagFigure(project, results, units, { equalAspect, view }),
+  // While a handle is dragged the axes hold still (at the ranges on screen when it was
+  // grabbed), so the point under the pointer keeps its meaning and every result is sketched.
+  const [heldAxes, setHeldAxes] = useState<HeldAxes | null>(null);
+  const figure = useMemo(() => {
+    const built = buildSagFigure(project, results, units, { equalAspect, view });
+    return {
+      ...built,
+      layout: heldAxes ? holdAxes(built.layout, heldAxes) : built.layout,
       revision: documentRevision(project),
-    }),
-    [project, results, units, equalAspect, view],
-  );
+    };
+  }, [project, results, units, equalAspect, view, heldAxes]);
   const state = usePlotlyDraw(containerRef, figure, newerPending);
+  const setDragging = (dragging: boolean) =>
+    setHeldAxes(dragging ? axesOnScreen(containerRef.current) : null);
+  const dragging = heldAxes !== null;
 
   return (
     <figure
-      className="sag-plot"
+      className={`sag-plot${dragging ? ' plot-dragging' : ''}`}
       aria-label="Sag plot"
       aria-describedby={captionId}
       data-plot-state={state}
       data-plot-view={view}
     >
       <PlotTools />
-      <div ref={containerRef} className="sag-plot-canvas" />
+      <div className="sag-plot-stage">
+        <div ref={containerRef} className="sag-plot-canvas" />
+        {view === 'side' && (
+          <DragHandles
+            containerRef={containerRef}
+            drawn={state === 'drawn'}
+            onDragging={setDragging}
+          />
+        )}
+      </div>
       {state === 'loading' && <p className="muted">Loading the plot…</p>}
       {state === 'failed' && <p role="alert">The plot could not be drawn; the numbers stand.</p>}
       <Caption id={captionId} figure={figure} view={view} units={units} />

@@ -100,7 +100,8 @@ export interface Sketched {
  * filled outline and set of markers: a few hundred points in all), or null when only a full
  * redraw will do.
  * @param ranges the axis ranges on screen; the new data must stay inside them and fill at least
- *   `fill` of each, so the picture never clips or shrinks away.
+ *   `fill` of each, so the picture never clips or shrinks away (unless the layout holds the
+ *   axes at a fixed range, as during a drag: then the range on screen must be that one).
  */
 export function sketchTraces(
   drawn: Sketched,
@@ -126,6 +127,13 @@ export function sketchTraces(
     const range = ranges[axis];
     if (range?.length !== 2 || typeof range[0] !== 'number') return null;
     const [r0, r1] = range as [number, number];
+    // Axes held at a fixed range (while a drag is on): what leaves them is clipped, as a full
+    // redraw would clip it, so the drawing on screen must simply have that range.
+    const held = (next.figure.layout[`${axis}axis`] as { range?: unknown[] } | undefined)?.range;
+    if (held) {
+      if (held[0] !== r0 || held[1] !== r1) return null;
+      continue;
+    }
     const [low, high] = extent(next.figure.data, axis);
     const [from, to] = [Math.min(r0, r1), Math.max(r0, r1)];
     if (!(low >= from && high <= to) || high - low < fill * (to - from)) return null;
