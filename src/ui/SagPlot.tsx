@@ -11,12 +11,35 @@ import { documentRevision } from '../state/revision.ts';
 import { useUiStore } from '../state/uiStore.ts';
 import { show } from './format.ts';
 import { DragHandles } from './plot/DragHandles.tsx';
+import { downloadPlot } from './plot/plotDownload.ts';
 import { usePlotViewStore } from './plot/plotViewStore.ts';
 import { buildSagFigure, type PlotView, type SagFigure } from './plot/sagFigure.ts';
 import { usePlotlyDraw } from './plot/usePlotlyDraw.ts';
 import './plot/plot.css';
 
-function PlotTools() {
+function DownloadButtons({ project, results }: { project: Project; results: ProjectResults }) {
+  const units = useUiStore((s) => s.unitSystem);
+  const [problem, setProblem] = useState<string | null>(null);
+  const save = (format: 'png' | 'svg') => {
+    setProblem(null);
+    downloadPlot(project, results, units, format).catch(() =>
+      setProblem(`The ${format.toUpperCase()} could not be made; the plot on screen stands.`),
+    );
+  };
+  return (
+    <div className="plot-downloads">
+      <button type="button" onClick={() => save('png')}>
+        Download PNG
+      </button>
+      <button type="button" onClick={() => save('svg')}>
+        Download SVG
+      </button>
+      {problem && <span role="alert">{problem}</span>}
+    </div>
+  );
+}
+
+function PlotTools({ project, results }: { project: Project; results: ProjectResults }) {
   const equalAspect = useUiStore((s) => s.equalAspect);
   const setEqualAspect = useUiStore((s) => s.setEqualAspect);
   const view = usePlotViewStore((s) => s.view);
@@ -51,6 +74,7 @@ function PlotTools() {
         />
         True proportions (equal scales)
       </label>
+      <DownloadButtons project={project} results={results} />
     </div>
   );
 }
@@ -142,7 +166,7 @@ export function SagPlot({ project, results }: { project: Project; results: Proje
       data-plot-state={state}
       data-plot-view={view}
     >
-      <PlotTools />
+      <PlotTools project={project} results={results} />
       <div className="sag-plot-stage">
         <div ref={containerRef} className="sag-plot-canvas" />
         {view === 'side' && (

@@ -88,6 +88,8 @@ export function DragHandles({
   const drag = useRef<Drag | null>(null);
   const pending = useRef<Position | null>(null);
   const frame = useRef(0);
+  /** Counts the times a handle takes the focus: each visit's arrow presses are one undo step. */
+  const focusVisit = useRef(0);
   const hintId = useId();
 
   // Re-place the handles after every Plotly drawing (new axes, zoom, resize).
@@ -237,8 +239,9 @@ export function DragHandles({
     const shown = (m: number) => toSi(snap(fromSi(m, 'length', units)), 'length', units);
     const x = shown(handle.x + dx);
     const z = handle.kind === 'support' ? shown(handle.z + dz) : handle.z;
-    // Arrow presses in a row on one handle make one undo step, as typing in a field does.
-    if (place(handle, x, z, `${handle.key}:keys`, false)) setSpoken(where(handle, x, z));
+    // The arrow presses while a handle keeps the focus make one undo step, as one drag does.
+    if (place(handle, x, z, `${handle.key}:keys:${focusVisit.current}`, true))
+      setSpoken(where(handle, x, z));
   }
 
   const handles = dragHandles(project, results);
@@ -277,6 +280,9 @@ export function DragHandles({
             onPointerCancel: onPointerEnd,
             onLostPointerCapture: onPointerEnd,
             onKeyDown: (event: React.KeyboardEvent<HTMLElement>) => onKeyDown(event, handle),
+            onFocus: () => {
+              focusVisit.current += 1;
+            },
           };
           if (handle.kind === 'support')
             return (
