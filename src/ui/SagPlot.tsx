@@ -3,14 +3,16 @@
  * in side view (height) or plan view (sideways swing in wind), and states the largest parabola
  * difference. In side view the fixings and point loads can be dragged (DragHandles.tsx). Redraws wait for the next frame and skip results that a newer one replaces.
  */
-import { useId, useMemo, useRef, useState } from 'react';
+import { type RefObject, useEffect, useId, useMemo, useRef, useState } from 'react';
 import type { Project, ProjectResults } from '../core/index.ts';
-import type { UnitSystem } from '../core/units.ts';
+import { type UnitSystem, unitSymbol } from '../core/units.ts';
 import { useResultsStore } from '../state/resultsStore.ts';
 import { documentRevision } from '../state/revision.ts';
 import { useUiStore } from '../state/uiStore.ts';
 import { show } from './format.ts';
+import { COMPACT_WIDTH_PX, compactFigure, compactTitles } from './plot/compactFigure.ts';
 import { DragHandles } from './plot/DragHandles.tsx';
+import { PlotKey } from './plot/PlotKey.tsx';
 import { downloadPlot } from './plot/plotDownload.ts';
 import { usePlotViewStore } from './plot/plotViewStore.ts';
 import { buildSagFigure, type PlotView, type SagFigure } from './plot/sagFigure.ts';
@@ -109,6 +111,21 @@ interface CaptionProps {
   units: UnitSystem;
 }
 
+/** True while the plot is narrower than COMPACT_WIDTH_PX (a phone). */
+function useNarrow(ref: RefObject<HTMLDivElement | null>): boolean {
+  const [narrow, setNarrow] = useState(false);
+  useEffect(() => {
+    const element = ref.current;
+    if (!element || typeof ResizeObserver === 'undefined') return;
+    const observer = new ResizeObserver(([entry]) =>
+      setNarrow(entry.contentRect.width > 0 && entry.contentRect.width < COMPACT_WIDTH_PX),
+    );
+    observer.observe(element);
+    return () => observer.disconnect();
+  }, [ref]);
+  return narrow;
+}
+
 interface HeldAxes {
   x: [number, number];
   y: [number, number];
@@ -145,14 +162,18 @@ export function SagPlot({ project, results }: { project: Project; results: Proje
   // While a handle is dragged the axes hold still (at the ranges on screen when it was
   // grabbed), so the point under the pointer keeps its meaning and every result is sketched.
   const [heldAxes, setHeldAxes] = useState<HeldAxes | null>(null);
+  const compact = useNarrow(containerRef);
   const figure = useMemo(() => {
-    const built = buildSagFigure(project, results, units, { equalAspect, view });
+    const wide = buildSagFigure(project, results, units, { equalAspect, view });
+    const built = compact
+      ? compactFigure(wide, compactTitles(view, unitSymbol('length', units)))
+      : wide;
     return {
       ...built,
       layout: heldAxes ? holdAxes(built.layout, heldAxes) : built.layout,
       revision: documentRevision(project),
     };
-  }, [project, results, units, equalAspect, view, heldAxes]);
+  }, [project, results, units, equalAspect, view, heldAxes, compact]);
   const state = usePlotlyDraw(containerRef, figure, newerPending);
   const setDragging = (dragging: boolean) =>
     setHeldAxes(dragging ? axesOnScreen(containerRef.current) : null);
@@ -177,6 +198,7 @@ export function SagPlot({ project, results }: { project: Project; results: Proje
           />
         )}
       </div>
+      {compact && <PlotKey data={figure.data} />}
       {state === 'loading' && <p className="muted">Loading the plot…</p>}
       {state === 'failed' && <p role="alert">The plot could not be drawn; the numbers stand.</p>}
       <Caption id={captionId} figure={figure} view={view} units={units} />
