@@ -126,6 +126,22 @@ function useNarrow(ref: RefObject<HTMLDivElement | null>): boolean {
   return narrow;
 }
 
+/**
+ * On screen the legend sits above the plot (Plotly makes room for it), clear of the distance
+ * axis title that a legend below runs into on a tablet's shorter plot. Exported images keep
+ * theirs below (src/ui/export/plotImage.ts).
+ */
+function legendOnTop(figure: SagFigure): SagFigure {
+  return {
+    ...figure,
+    layout: {
+      ...figure.layout,
+      legend: { ...figure.layout.legend, orientation: 'h', x: 0, y: 1.02, yanchor: 'bottom' },
+      margin: { ...figure.layout.margin, b: 44 },
+    },
+  };
+}
+
 interface HeldAxes {
   x: [number, number];
   y: [number, number];
@@ -167,7 +183,7 @@ export function SagPlot({ project, results }: { project: Project; results: Proje
     const wide = buildSagFigure(project, results, units, { equalAspect, view });
     const built = compact
       ? compactFigure(wide, compactTitles(view, unitSymbol('length', units)))
-      : wide;
+      : legendOnTop(wide);
     return {
       ...built,
       layout: heldAxes ? holdAxes(built.layout, heldAxes) : built.layout,
