@@ -70,6 +70,26 @@ describe('which edits can be sketched', () => {
     expect(sketchTraces(drawn, sketchOf(raised), ranges)).toBeNull();
   });
 
+  it('sketches a fixing dragged past the axes while the drag holds them at the range on screen', () => {
+    const raised = checked(demo);
+    raised.supports[1].z += 0.5;
+    const next = sketchOf(raised);
+    const held = (r: number[]) => ({ range: r as [number, number], autorange: false });
+    const layout = {
+      ...next.figure.layout,
+      xaxis: { ...next.figure.layout.xaxis, ...held(ranges.x) },
+      yaxis: { ...next.figure.layout.yaxis, ...held(ranges.y) },
+    };
+    const holding = {
+      figure: { ...next.figure, layout },
+      signature: figureSignature({ ...next.figure, layout }),
+    };
+    expect(sketchTraces(drawn, holding, ranges)).not.toBeNull();
+    // Held at another range than the one on screen: only a full redraw shows it.
+    const shifted = { x: ranges.x, y: [ranges.y[0] - 1, ranges.y[1]] };
+    expect(sketchTraces(drawn, holding, shifted)).toBeNull();
+  });
+
   it('needs the full redraw when a fixing is added (a marker more than drawn)', () => {
     const more = checked(demo);
     more.supports.push({ x: 30, z: 4.2, label: 'Post' });

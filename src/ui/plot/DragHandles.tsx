@@ -45,6 +45,8 @@ type PlotDiv = HTMLDivElement & {
 /** Keyboard steps in display units: an arrow press, and with Shift. */
 const STEP = 0.1;
 const BIG_STEP = 1;
+/** The longest a dragged position waits for the result of the one before it, ms. */
+const MAX_WAIT_MS = 300;
 
 interface Drag {
   handle: DragHandle;
@@ -88,6 +90,7 @@ export function DragHandles({
   const drag = useRef<Drag | null>(null);
   const pending = useRef<Position | null>(null);
   const frame = useRef(0);
+  const committedAt = useRef(0);
   /** Counts the times a handle takes the focus: each visit's arrow presses are one undo step. */
   const focusVisit = useRef(0);
   const hintId = useId();
@@ -198,14 +201,28 @@ export function DragHandles({
     const z = active.handle.kind === 'support' ? to.z : active.handle.z;
     setLive({ key: active.handle.key, x: to.x, z });
     pending.current = { key: active.handle.key, x: to.x, z };
-    if (!frame.current)
-      frame.current = requestAnimationFrame(() => {
-        frame.current = 0;
-        const next = pending.current;
-        pending.current = null;
-        const now = drag.current;
-        if (next && now) place(now.handle, next.x, next.z, now.mergeKey, true);
-      });
+    if (!frame.current) frame.current = requestAnimationFrame(commitPending);
+  }
+
+  /**
+   * Commits the newest position at a frame. One position is with the solver at a time: while
+   * the last one's result is on its way the newest waits (the handle follows the pointer
+   * meanwhile), so positions never queue up behind a slow solve or a busy page.
+   */
+  function commitPending() {
+    frame.current = 0;
+    const next = pending.current;
+    const active = drag.current;
+    if (!next || !active) return;
+    const results = useResultsStore.getState();
+    const waited = performance.now() - committedAt.current;
+    if (results.stale && results.error === null && waited < MAX_WAIT_MS) {
+      frame.current = requestAnimationFrame(commitPending);
+      return;
+    }
+    pending.current = null;
+    committedAt.current = performance.now();
+    place(active.handle, next.x, next.z, active.mergeKey, true);
   }
 
   function onPointerEnd(event: ReactPointerEvent<HTMLElement>) {

@@ -21,7 +21,7 @@ const DATA_KEYS = ['x', 'y', 'customdata'] as const;
 
 /** Taken when a figure arrives, before Plotly draws it (Plotly writes into what it draws). */
 export interface FigureSignature {
-  /** The layout without its notes. */
+  /** The layout without its notes and axis ranges (checked against the screen instead). */
   layout: string;
   /** Each trace without its numbers. */
   traces: string[];
@@ -55,10 +55,17 @@ function sketchKind(trace: Data): SketchKind | null {
   return null;
 }
 
+/** An axis without its range: holding the range on screen still (a drag) is no change. */
+function withoutRange(axis: unknown): unknown {
+  if (!axis || typeof axis !== 'object') return axis;
+  const { range: _range, autorange: _auto, ...rest } = axis as Record<string, unknown>;
+  return rest;
+}
+
 export function figureSignature(figure: FigureLike): FigureSignature {
-  const { annotations: _notes, ...rest } = figure.layout;
+  const { annotations: _notes, xaxis, yaxis, ...rest } = figure.layout;
   return {
-    layout: JSON.stringify(rest),
+    layout: JSON.stringify({ ...rest, xaxis: withoutRange(xaxis), yaxis: withoutRange(yaxis) }),
     traces: figure.data.map(withoutData),
     kinds: figure.data.map(sketchKind),
   };

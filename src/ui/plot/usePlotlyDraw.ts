@@ -8,8 +8,8 @@
  *   the next frame; figures arriving in a burst wait until the burst pauses (drawPolicy.ts); a
  *   figure that a newer result is about to replace is not fully redrawn at all.
  * The last drawing stays meanwhile. Each draw, sketch or full, is recorded as the performance
- * measure "sagwright:plot-draw" (its main-thread time) with the document version drawn, for
- * measurement, never for assertions.
+ * measure "sagwright:plot-draw" (its main-thread time) with the document version drawn and the
+ * kind of draw (sketch or full), for measurement, never for assertions.
  */
 
 import type { Config, Data, Layout } from 'plotly.js';
@@ -117,8 +117,8 @@ function sketch(container: PlotDiv, figure: DrawableFigure, traces: SketchTrace[
   return true;
 }
 
-function measure(start: number, figure: DrawableFigure) {
-  const detail = { revision: figure.revision };
+function measure(start: number, figure: DrawableFigure, kind: 'sketch' | 'full') {
+  const detail = { revision: figure.revision, kind };
   performance.measure(PLOT_DRAW_MEASURE, { start, end: performance.now(), detail });
 }
 
@@ -162,7 +162,7 @@ export function usePlotlyDraw(
         const start = performance.now();
         if (sketch(container, figure, lines)) {
           sketched.current = figure;
-          measure(start, figure);
+          measure(start, figure, 'sketch');
         }
       });
     }
@@ -177,7 +177,7 @@ export function usePlotlyDraw(
         return;
       }
       container.classList.remove(SKETCH_CLASS);
-      measure(start, figure);
+      measure(start, figure, 'full');
       full.current = next;
       firstUndrawnAt.current = null;
       done.then(
