@@ -76,7 +76,7 @@ function PlotTools({ project, results }: { project: Project; results: ProjectRes
         />
         True proportions (equal scales)
       </label>
-      <DownloadButtons project={project} results={results} />
+      {view === 'side' && <DownloadButtons project={project} results={results} />}
     </div>
   );
 }

@@ -137,6 +137,14 @@ export function usePlotlyDraw(
   const arrival = useRef<Arrival | null>(null);
   const previousArrivalAt = useRef<number | null>(null);
   const firstUndrawnAt = useRef<number | null>(null);
+  const sketchFrame = useRef<{ figure: DrawableFigure; id: number } | null>(null);
+
+  useEffect(
+    () => () => {
+      if (sketchFrame.current) cancelAnimationFrame(sketchFrame.current.id);
+    },
+    [],
+  );
 
   useEffect(() => {
     const container = containerRef.current as PlotDiv | null;
@@ -156,15 +164,22 @@ export function usePlotlyDraw(
     const next = arrival.current;
     let cancelled = false;
     let frame = 0;
-    if (next.lines && sketched.current !== figure) {
+    // The sketch frame outlives this effect: a change of `deferred` (a newer result on its way,
+    // as at every step of a drag) must not cancel the sketch of the figure on hand; only a
+    // newer figure replaces it.
+    if (next.lines && sketched.current !== figure && sketchFrame.current?.figure !== figure) {
       const lines = next.lines;
-      frame = requestAnimationFrame(() => {
+      if (sketchFrame.current) cancelAnimationFrame(sketchFrame.current.id);
+      const id = requestAnimationFrame(() => {
+        sketchFrame.current = null;
+        if (full.current?.figure === figure) return;
         const start = performance.now();
         if (sketch(container, figure, lines)) {
           sketched.current = figure;
           measure(start, figure, 'sketch');
         }
       });
+      sketchFrame.current = { figure, id };
     }
     const drawFully = (plotly: Plotly) => {
       if (cancelled) return;
@@ -185,7 +200,7 @@ export function usePlotlyDraw(
         () => setState('failed'),
       );
     };
-    if (deferred && full.current) return () => cancelAnimationFrame(frame);
+    if (deferred && full.current) return;
     const timer = setTimeout(
       () => {
         loadPlotly()
