@@ -6,7 +6,11 @@
  *     from the input event to the end of the plot draw for that edit, split into waiting for
  *     the result (solve, messages) and drawing (React, frame wait, Plotly);
  * (c) a continuous edit, one new value every 33 ms (a drag on a touch screen): drawings per
- *     second and that the drawings follow the edits in order and end on the last one.
+ *     second and that the drawings follow the edits in order and end on the last one;
+ * (d) dragging the far fixing on the side view: pointer moves at every animation frame for
+ *     DRAG_FIXING_MS, through the app's own handle (commit, worker solve, figure, sketch):
+ *     plot drawings per second, how many were full Plotly redraws, and from each committed
+ *     position to the plot drawn for it (p50/p95); then that the last position is drawn.
  * Needs `npm run build` first. The page is served by `vite preview` on BENCH_PORT (default 4399).
  */
 import { existsSync, readFileSync } from 'node:fs';
@@ -20,10 +24,27 @@ const DRAG_STEPS = 60;
 const DRAG_STEP_MS = 33;
 const FIELD = 'Temperature on the day (°C)';
 
+const DRAG_FIXING_MS = 3000;
+const FIXING = 'Studio wall bracket';
+
+export interface FixingDrag {
+  seconds: number;
+  moves: number;
+  edits: number;
+  draws: number;
+  fullDraws: number;
+  /** Committed position → plot drawn for it, ms, for the positions drawn. */
+  editToDrawMs: number[];
+  /** Positions committed but replaced by a newer one before being drawn. */
+  skipped: number;
+  lastShown: boolean;
+}
+
 export interface BrowserFigures {
   weight: { file: string; gzipBytes: number }[];
   edits: { totalMs: number; waitMs: number; drawMs: number; plotlyMs: number }[];
   drag: { edits: number; draws: number; seconds: number; inOrder: boolean; lastShown: boolean };
+  fixingDrag: FixingDrag;
 }
 
 function gzipSize(path: string): number {
@@ -111,6 +132,78 @@ async function continuousEdit(page: Page): Promise<BrowserFigures['drag']> {
   };
 }
 
+/**
+ * Drags the far fixing's handle with pointer events sent at every animation frame from inside
+ * the page (so the rate is the page's own): a little along the span and up and down.
+ */
+async function dragFixing(page: Page): Promise<FixingDrag> {
+  const name = new RegExp(`^Move ${FIXING} \\(`);
+  const handle = page.getByRole('button', { name });
+  await handle.waitFor();
+  const startLog = await log(page);
+  // tsx names the page function's inner functions with a __name helper: give the page one.
+  await page.evaluate('globalThis.__name ??= (f) => f');
+  const span = await handle.evaluate(
+    (element, durationMs) =>
+      new Promise<{ from: number; to: number; moves: number }>((resolve) => {
+        const box = element.getBoundingClientRect();
+        const [x0, y0] = [box.left + box.width / 2, box.top + box.height / 2];
+        const send = (type: string, x: number, y: number) =>
+          element.dispatchEvent(
+            new PointerEvent(type, {
+              bubbles: true,
+              cancelable: true,
+              pointerId: 7,
+              pointerType: 'mouse',
+              button: 0,
+              buttons: type === 'pointerup' ? 0 : 1,
+              clientX: x,
+              clientY: y,
+            }),
+          );
+        send('pointerdown', x0, y0);
+        const from = performance.now();
+        let moves = 0;
+        const step = (now: number) => {
+          const t = (now - from) / durationMs;
+          if (t >= 1) {
+            send('pointerup', x0, y0 - 20);
+            resolve({ from, to: now, moves });
+            return;
+          }
+          // Up to 10 px along (the cable ends half a metre in) and ±30 px up and down.
+          send('pointermove', x0 - 10 * Math.sin(Math.PI * t), y0 - 30 * Math.sin(6 * Math.PI * t));
+          moves += 1;
+          requestAnimationFrame(step);
+        };
+        requestAnimationFrame(step);
+      }),
+    DRAG_FIXING_MS,
+  );
+  await page.waitForTimeout(1500);
+  const l = await log(page);
+  const edits = l.edits.slice(startLog.edits.length).filter((e) => e.at <= span.to);
+  const during = l.draws.filter((d) => d.end >= span.from && d.end <= span.to);
+  const editToDrawMs: number[] = [];
+  let skipped = 0;
+  for (const edit of edits) {
+    const draw = l.draws.find((d) => d.revision === edit.revision && d.end >= edit.at);
+    if (draw) editToDrawMs.push(draw.end - edit.at);
+    else skipped += 1;
+  }
+  const lastEdit = l.edits.at(-1);
+  return {
+    seconds: (span.to - span.from) / 1000,
+    moves: span.moves,
+    edits: edits.length,
+    draws: during.length,
+    fullDraws: during.filter((d) => d.kind === 'full').length,
+    editToDrawMs,
+    skipped,
+    lastShown: l.draws.at(-1)?.revision === lastEdit?.revision,
+  };
+}
+
 const quantile = (values: number[], q: number) => {
   const sorted = [...values].sort((a, b) => a - b);
   return sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))];
@@ -143,7 +236,9 @@ export async function measureBrowser(port: number): Promise<BrowserFigures> {
       await page.waitForTimeout(150);
     }
     const drag = await continuousEdit(page);
-    return { weight, edits, drag };
+    await page.waitForTimeout(500);
+    const fixingDrag = await dragFixing(page);
+    return { weight, edits, drag, fixingDrag };
   } finally {
     await browser.close();
     await new Promise<void>((resolve) => server.httpServer.close(() => resolve()));
@@ -174,5 +269,23 @@ export function browserLines(figures: BrowserFigures): string[] {
     `Continuous edit, one value every ${DRAG_STEP_MS} ms for ${d.seconds.toFixed(1)} s: ${d.edits} edits, ` +
       `${d.draws} plot drawings (${(d.draws / d.seconds).toFixed(1)} per second, goal ≥ 30); ` +
       `drawings in edit order: ${d.inOrder ? 'yes' : 'NO'}; last edit shown: ${d.lastShown ? 'yes' : 'NO'}.`,
+    '',
+    ...fixingDragLines(figures.fixingDrag),
+  ];
+}
+
+function fixingDragLines(f: FixingDrag): string[] {
+  const ms = (q: number) =>
+    f.editToDrawMs.length ? quantile(f.editToDrawMs, q).toFixed(1) : 'n/a';
+  return [
+    `| dragging "${FIXING}" on the side view for ${f.seconds.toFixed(1)} s (pointer moves every frame) | figure |`,
+    '|---|---:|',
+    `| pointer moves per second | ${(f.moves / f.seconds).toFixed(1)} |`,
+    `| positions committed per second | ${(f.edits / f.seconds).toFixed(1)} |`,
+    `| **plot drawings per second** (goal ≥ 30) | **${(f.draws / f.seconds).toFixed(1)}** |`,
+    `| of which full Plotly redraws (goal: none after the first) | ${f.fullDraws} |`,
+    `| committed position → plot drawn, p50 / p95 (ms) | ${ms(0.5)} / ${ms(0.95)} |`,
+    `| positions replaced by a newer one before drawing | ${f.skipped} of ${f.edits} |`,
+    `| last position drawn after release | ${f.lastShown ? 'yes' : 'NO'} |`,
   ];
 }

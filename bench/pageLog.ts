@@ -7,7 +7,7 @@ export interface PageLog {
   inputs: number[];
   edits: { revision: number; at: number }[];
   results: { revision: number; at: number }[];
-  draws: { revision: number; start: number; end: number }[];
+  draws: { revision: number; start: number; end: number; kind: string }[];
 }
 
 export function benchPageScript(): void {
@@ -33,6 +33,7 @@ export function benchPageScript(): void {
         revision: revisionOf(entry),
         start: entry.startTime,
         end: entry.startTime + entry.duration,
+        kind: ((entry as PerformanceMeasure).detail as { kind?: string } | null)?.kind ?? '',
       }));
     },
   };

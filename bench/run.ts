@@ -6,7 +6,8 @@
  * and (d) the inclined example through solveProject (all cases, with the error estimate on the
  * nested mesh of twice the elements).
  * (e) the built app in headless Chromium (bench/browser.ts): page weight until the first plot,
- * edit to plot p50/p95 and continuous edits; skipped with `--no-browser` or without dist/.
+ * edit to plot p50/p95, continuous edits and dragging a fixing on the side view; skipped with
+ * `--no-browser` or without dist/.
  * `npm run bench -- --write` also writes the figures to doc/benchmarks.md.
  */
 import { existsSync, readFileSync, writeFileSync } from 'node:fs';

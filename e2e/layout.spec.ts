@@ -32,6 +32,30 @@ async function pageWidth(page: Page) {
   return page.evaluate(() => document.documentElement.scrollWidth);
 }
 
+/**
+ * Elements whose right edge passes the screen's, except inside a box that scrolls sideways on
+ * purpose (wide tables) and text kept for screen readers only. A clipped plot note counts.
+ */
+async function stickingOut(page: Page) {
+  return page.evaluate(() => {
+    const width = document.documentElement.clientWidth;
+    const scrolls = (el: Element) => {
+      for (let e: Element | null = el.parentElement; e; e = e.parentElement) {
+        const style = getComputedStyle(e);
+        if (style.overflowX === 'auto' || style.overflowX === 'scroll') return true;
+        if (e.classList.contains('visually-hidden')) return true;
+      }
+      return false;
+    };
+    return [...document.querySelectorAll('body *')]
+      .filter((el) => {
+        const box = el.getBoundingClientRect();
+        return box.width > 0 && box.right > width + 1 && !scrolls(el);
+      })
+      .map((el) => `${el.tagName.toLowerCase()}.${el.getAttribute('class') ?? ''}`);
+  });
+}
+
 async function top(page: Page, selector: string) {
   return (await page.locator(selector).first().boundingBox())?.y ?? Number.NaN;
 }
@@ -44,6 +68,7 @@ for (const view of VIEWS) {
       test.setTimeout(180_000);
       await open(page);
       expect(await pageWidth(page)).toBeLessThanOrEqual(view.width);
+      expect(await stickingOut(page)).toEqual([]);
       const scan = await new AxeBuilder({ page })
         .withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa'])
         .analyze();
@@ -55,6 +80,34 @@ for (const view of VIEWS) {
     });
   });
 }
+
+test('on a phone the plot fits: its notes inside it, no legend rows, a folded key below', async ({
+  page,
+}) => {
+  test.setTimeout(120_000);
+  await page.setViewportSize({ width: 360, height: 800 });
+  await open(page);
+  const plot = page.getByRole('figure', { name: 'Sag plot' });
+  const canvas = await plot.locator('.js-plotly-plot').boundingBox();
+  if (!canvas) throw new Error('no plot drawn');
+  const notes = await plot.locator('.infolayer .annotation').all();
+  expect(notes.length).toBeGreaterThan(0);
+  for (const note of notes) {
+    const box = await note.boundingBox();
+    expect(box?.x ?? -1).toBeGreaterThanOrEqual(canvas.x);
+    expect((box?.x ?? 0) + (box?.width ?? Number.POSITIVE_INFINITY)).toBeLessThanOrEqual(
+      canvas.x + canvas.width,
+    );
+  }
+  // The legend's dozen rows would take the plot's height: the key below replaces it.
+  await expect(plot.locator('.legend')).toHaveCount(0);
+  const key = plot.getByText('Key to the plot');
+  await key.click();
+  for (const name of ['Installation', demo.cases[0].name, 'Ground', 'Supports'])
+    await expect(plot.getByRole('listitem').filter({ hasText: name })).toBeVisible();
+  expect(await pageWidth(page)).toBeLessThanOrEqual(360);
+  expect(await stickingOut(page)).toEqual([]);
+});
 
 test.describe('phone and tablet', () => {
   for (const view of VIEWS.slice(0, 2)) {

@@ -4,12 +4,12 @@
  * invalid. The reproduction: add a fixing, add a part-span load reaching past the old end,
  * remove that fixing.
  */
-import { describe, expect, it } from 'vitest';
+import { afterEach, describe, expect, it, vi } from 'vitest';
 import { type Project, validateProject } from '../src/core/index.ts';
 import { commit, commitAction, type Workbench } from '../src/state/commit.ts';
 import { demoProject } from '../src/state/demoProject.ts';
 import * as edits from '../src/state/projectEdits.ts';
-import { createProjectStore } from '../src/state/projectStore.ts';
+import { createProjectStore, MERGE_WINDOW_MS } from '../src/state/projectStore.ts';
 import { createSessionStore } from '../src/state/sessionStore.ts';
 
 function bench(project: Project = demoProject): Workbench {
@@ -132,6 +132,54 @@ describe('removing a fixing that loads depend on', () => {
     const outcome = commit(edits.setTitle('Mine'), {}, b);
     expect(outcome.ok).toBe(false);
     expect(!outcome.ok && outcome.reason).toBe('otherTab');
+    expect(b.store.getState().project).toBe(demoProject);
+  });
+});
+
+describe('a gesture (a drag on the plot) is one undo step however slow', () => {
+  afterEach(() => vi.useRealTimers());
+
+  function dragFarFixing(b: Workbench, gesture: boolean) {
+    vi.useFakeTimers();
+    for (const [i, x] of [21.9, 21.8, 21.7].entries()) {
+      vi.setSystemTime(new Date(2026, 0, 1, 12, 0, 0, i * 3 * MERGE_WINDOW_MS));
+      const outcome = commit(
+        edits.patchSupport(1, { x, z: 4.2 + i * 0.1 }),
+        {
+          mergeKey: 'supports[1]:drag:1',
+          gesture,
+        },
+        b,
+      );
+      expect(outcome.ok).toBe(true);
+    }
+  }
+
+  it('merges the moves of one drag with pauses longer than the typing window', () => {
+    const b = bench();
+    dragFarFixing(b, true);
+    expect(b.store.getState().project.supports[1]).toMatchObject({ x: 21.7 });
+    b.store.undo();
+    expect(b.store.getState().project).toBe(demoProject);
+  });
+
+  it('without the gesture, the same pauses make separate steps (typing)', () => {
+    const b = bench();
+    dragFarFixing(b, false);
+    b.store.undo();
+    expect(b.store.getState().project.supports[1]).toMatchObject({ x: 21.8 });
+  });
+
+  it('a refused move changes nothing and the drag goes on from the last good position', () => {
+    const b = bench();
+    const refused = commit(edits.patchSupport(1, { x: 20 }), { mergeKey: 'd', gesture: true }, b);
+    expect(refused.ok).toBe(false);
+    expect(!refused.ok && refused.issues.map((i) => i.path)).toEqual(['loads[0].to']);
+    expect(b.store.getState().project).toBe(demoProject);
+    expect(commit(edits.patchSupport(1, { x: 21.6 }), { mergeKey: 'd', gesture: true }, b).ok).toBe(
+      true,
+    );
+    b.store.undo();
     expect(b.store.getState().project).toBe(demoProject);
   });
 });

@@ -33,25 +33,68 @@ const range = (axis: 'x' | 'y') => {
 const ranges = { x: range('x'), y: range('y') };
 
 describe('which edits can be sketched', () => {
-  it('sketches every plain line (wires, parabolas, clearance line) when the installation temperature changes', () => {
+  it('sketches every line (wires, parabolas, clearance line), outline and marker when the installation temperature changes', () => {
     const warmer = checked(demo);
     warmer.installation.temperature += 3;
     const lines = sketchTraces(drawn, sketchOf(warmer), ranges);
-    const names = (lines ?? []).map((i) => String(drawn.figure.data[i].name));
+    const names = (lines ?? []).map((t) => String(drawn.figure.data[t.index].name));
+    const kind = (name: string) =>
+      lines?.find((t) => drawn.figure.data[t.index].name === name)?.kind;
     const cases = 1 + demo.cases.length;
-    expect(lines).toHaveLength(2 * cases + 1);
-    expect(names).toContain('Installation');
+    // Every case's wire and parabola, the clearance line, the ground, the zone and the fixings.
+    expect(lines).toHaveLength(2 * cases + 1 + 1 + demo.limits.zones.length + 1);
+    expect(kind('Installation')).toBe('line');
     expect(names.filter((n) => n.startsWith('Minimum clearance'))).toHaveLength(1);
-    // The filled ground and zones and the fixings' markers are not lines to sketch.
-    expect(names).not.toContain('Ground');
-    expect(names).not.toContain('Supports');
+    expect(kind('Ground')).toBe('fill');
+    expect(kind('Supports')).toBe('markers');
     expect(names.filter((n) => n.endsWith('— parabola'))).toHaveLength(cases);
   });
 
-  it('needs the full redraw when a fixing moves (the ground and fixings change)', () => {
+  it('sketches a fixing dragged along and up (its marker moves with the wires)', () => {
     const moved = checked(demo);
-    moved.supports[1].x -= 1;
-    expect(sketchTraces(drawn, sketchOf(moved), ranges)).toBeNull();
+    moved.supports[1].x -= 0.4;
+    moved.supports[1].z += 0.1;
+    const next = sketchOf(moved);
+    const lines = sketchTraces(drawn, next, ranges);
+    const supports = lines?.find((t) => t.kind === 'markers');
+    expect(supports && (next.figure.data[supports.index] as { x: number[] }).x).toEqual([0, 21.6]);
+    expect(supports && (next.figure.data[supports.index] as { y: number[] }).y[1]).toBeCloseTo(
+      4.3,
+      12,
+    );
+  });
+
+  it('needs the full redraw when a fixing is dragged above the axes on screen', () => {
+    const raised = checked(demo);
+    raised.supports[1].z += 0.5;
+    expect(sketchTraces(drawn, sketchOf(raised), ranges)).toBeNull();
+  });
+
+  it('sketches a fixing dragged past the axes while the drag holds them at the range on screen', () => {
+    const raised = checked(demo);
+    raised.supports[1].z += 0.5;
+    const next = sketchOf(raised);
+    const held = (r: number[]) => ({ range: r as [number, number], autorange: false });
+    const layout = {
+      ...next.figure.layout,
+      xaxis: { ...next.figure.layout.xaxis, ...held(ranges.x) },
+      yaxis: { ...next.figure.layout.yaxis, ...held(ranges.y) },
+    };
+    const holding = {
+      figure: { ...next.figure, layout },
+      signature: figureSignature({ ...next.figure, layout }),
+    };
+    expect(sketchTraces(drawn, holding, ranges)).not.toBeNull();
+    // Held at another range than the one on screen: only a full redraw shows it.
+    const shifted = { x: ranges.x, y: [ranges.y[0] - 1, ranges.y[1]] };
+    expect(sketchTraces(drawn, holding, shifted)).toBeNull();
+  });
+
+  it('needs the full redraw when a fixing is added (a marker more than drawn)', () => {
+    const more = checked(demo);
+    more.supports.push({ x: 30, z: 4.2, label: 'Post' });
+    const wide = { x: [-2, 32], y: ranges.y };
+    expect(sketchTraces(drawn, sketchOf(more), wide)).toBeNull();
   });
 
   it('needs the full redraw when a case is renamed (a trace is restyled)', () => {

@@ -16,6 +16,11 @@ export type Edit = (project: Project) => Project;
 export interface CommitOptions {
   /** Keystrokes with the same key within a short time make one undo step (a field's path). */
   mergeKey?: string;
+  /**
+   * The edits of one gesture (a drag on the plot) that share `mergeKey` make one undo step
+   * however long apart they are.
+   */
+  gesture?: boolean;
   /** Carry dependants along (a removal); the changes are told in a notice with Undo. */
   carry?: boolean;
   /** Index of a fixing being removed, so a sag target can follow its span. */
@@ -69,7 +74,13 @@ export function commit(
   }
   const checked = validateProject(candidate);
   if (!checked.ok) return { ok: false, reason: 'invalid', issues: checked.issues };
-  bench.store.getState().setProject(candidate, options.mergeKey);
+  bench.store
+    .getState()
+    .setProject(
+      candidate,
+      options.mergeKey,
+      options.gesture ? Number.POSITIVE_INFINITY : undefined,
+    );
   if (options.carry)
     bench.session.setState({
       editNotice:

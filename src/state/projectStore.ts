@@ -12,8 +12,12 @@ import { demoProject } from './demoProject.ts';
 
 export interface ProjectState {
   project: Project;
-  /** Replace the document. Edits sharing `mergeKey` within MERGE_WINDOW_MS make one undo step. */
-  setProject(next: Project, mergeKey?: string): void;
+  /**
+   * Replace the document. Edits sharing `mergeKey` within `mergeWindowMs` (default
+   * MERGE_WINDOW_MS) make one undo step; a drag on the plot passes Infinity, so one drag is one
+   * step however long it pauses.
+   */
+  setProject(next: Project, mergeKey?: string, mergeWindowMs?: number): void;
   /** Replace the document and forget the undo history (opening the autosave, another tab's copy). */
   resetProject(next: Project): void;
 }
@@ -27,12 +31,12 @@ export function createProjectStore(initial: Project) {
     temporal(
       (set) => ({
         project: initial,
-        setProject(next, mergeKey) {
+        setProject(next, mergeKey, mergeWindowMs = MERGE_WINDOW_MS) {
           const now = Date.now();
           const merge =
             mergeKey !== undefined &&
             lastMerge?.key === mergeKey &&
-            now - lastMerge.at < MERGE_WINDOW_MS;
+            now - lastMerge.at < mergeWindowMs;
           lastMerge = mergeKey === undefined ? undefined : { key: mergeKey, at: now };
           if (!merge) {
             set({ project: next });

@@ -84,7 +84,8 @@ function caseTraces(
     x: profile.x.map(len),
     y: parabola.map(len),
     line: { color: colour, width: 1.2, dash: 'dash' },
-    hovertemplate: `parabola %{y:.3f} ${lu}<extra>%{fullData.name}</extra>`,
+    // Hover reads the wire: the parabola lies within millimetres of it and would take the label.
+    hoverinfo: 'skip',
   };
   return { traces: [wire, closedForm], differenceM: largestDifference(profile.z, parabola) };
 }

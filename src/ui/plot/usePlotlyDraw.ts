@@ -1,20 +1,27 @@
 /**
  * Draws a Plotly figure into a container without holding up typing or dragging.
- * - When only the wire lines moved (figureUpdate.ts), they are sketched at the next animation
- *   frame, every time (well under a millisecond), with the notes and hover labels hidden; the
- *   full redraw follows once results pause for BURST_GAP_MS.
+ * - When only lines, filled outlines and markers moved (an edit, a drag of a fixing; see
+ *   figureUpdate.ts), they are sketched at the next animation frame, every time (well under a
+ *   millisecond), with the notes and hover labels hidden; the full redraw follows once results
+ *   pause for BURST_GAP_MS, so a drag never waits for a full Plotly redraw.
  * - Any other change needs a full Plotly.react (tens of ms): a figure after a pause is drawn at
  *   the next frame; figures arriving in a burst wait until the burst pauses (drawPolicy.ts); a
  *   figure that a newer result is about to replace is not fully redrawn at all.
  * The last drawing stays meanwhile. Each draw, sketch or full, is recorded as the performance
- * measure "sagwright:plot-draw" (its main-thread time) with the document version drawn, for
- * measurement, never for assertions.
+ * measure "sagwright:plot-draw" (its main-thread time) with the document version drawn and the
+ * kind of draw (sketch or full), for measurement, never for assertions.
  */
 
 import type { Config, Data, Layout } from 'plotly.js';
 import { type RefObject, useEffect, useRef, useState } from 'react';
 import { BURST_GAP_MS, drawDelayMs } from './drawPolicy.ts';
-import { type FigureSignature, figureSignature, linePath, sketchTraces } from './figureUpdate.ts';
+import {
+  type FigureSignature,
+  figureSignature,
+  linePath,
+  type SketchTrace,
+  sketchTraces,
+} from './figureUpdate.ts';
 import { loadPlotly, type Plotly } from './loadPlotly.ts';
 
 export type PlotState = 'loading' | 'drawn' | 'failed';
@@ -30,12 +37,19 @@ export const PLOT_DRAW_MEASURE = 'sagwright:plot-draw';
 /** On the plot container while the wires are sketched ahead of the full redraw. */
 export const SKETCH_CLASS = 'plot-sketch';
 
-const CONFIG: Partial<Config> = {
+/**
+ * The mode bar keeps zoom, pan and reset only. Plotly's own image button is replaced by the
+ * plot's download buttons (title and caution in the image, plotDownload.ts), and nothing offers
+ * to send the chart to an online service: the work stays on this device.
+ */
+export const PLOT_CONFIG: Partial<Config> = {
   displaylogo: false,
   responsive: true,
   // Text is the person's own: never typeset as TeX (a label between $ signs stays text).
   typesetMath: false,
-  modeBarButtonsToRemove: ['select2d', 'lasso2d'],
+  showSendToCloud: false,
+  plotlyServerURL: '',
+  modeBarButtonsToRemove: ['select2d', 'lasso2d', 'toImage', 'sendChartToCloud'],
 };
 
 interface Sketch {
@@ -46,8 +60,8 @@ interface Sketch {
 interface Arrival extends Sketch {
   /** performance.now() before which it is not fully drawn. */
   holdUntil: number;
-  /** The line traces to sketch at once, or null when it must wait for a full redraw. */
-  lines: number[] | null;
+  /** The traces to sketch at once, or null when it must wait for a full redraw. */
+  lines: SketchTrace[] | null;
 }
 
 interface PlotAxis {
@@ -60,24 +74,51 @@ function axes(container: PlotDiv) {
   return { x: container._fullLayout?.xaxis, y: container._fullLayout?.yaxis };
 }
 
-/** Rewrites the paths of the line traces; false when the drawing is not as expected. */
-function sketch(container: PlotDiv, figure: DrawableFigure, lines: number[]): boolean {
+/** Moves each marker (and its text label, if any) of a trace to its new point. */
+function moveMarkers(group: Element, xs: unknown[], ys: unknown[], toX: Axis, toY: Axis): boolean {
+  const points = group.querySelectorAll('g.points path.point');
+  const texts = group.querySelectorAll('g.text g.textpoint text');
+  if (points.length !== xs.length || (texts.length > 0 && texts.length !== xs.length)) return false;
+  points.forEach((point, i) => {
+    const [x, y] = [xs[i], ys[i]];
+    if (typeof x !== 'number' || typeof y !== 'number') return;
+    const [px, py] = [toX(x).toFixed(2), toY(y).toFixed(2)];
+    point.setAttribute('transform', `translate(${px},${py})`);
+    texts[i]?.setAttribute('x', px);
+    texts[i]?.setAttribute('y', py);
+  });
+  return true;
+}
+
+type Axis = (value: number) => number;
+
+/** Redraws the given traces from the figure's numbers; false when the drawing is not as expected. */
+function sketch(container: PlotDiv, figure: DrawableFigure, traces: SketchTrace[]): boolean {
   const { x, y } = axes(container);
   const groups = container.querySelectorAll('.scatterlayer .trace');
   if (!x?.l2p || !y?.l2p || groups.length !== figure.data.length) return false;
-  const paths = lines.map((i) => groups[i].querySelector('path.js-line'));
-  if (paths.some((path) => path === null)) return false;
   const [toX, toY] = [x.l2p.bind(x), y.l2p.bind(y)];
-  lines.forEach((i, k) => {
-    const trace = figure.data[i] as { x?: unknown[]; y?: unknown[] };
-    paths[k]?.setAttribute('d', linePath(trace.x ?? [], trace.y ?? [], toX, toY));
-  });
+  for (const { index, kind } of traces) {
+    const trace = figure.data[index] as { x?: unknown[]; y?: unknown[] };
+    const [xs, ys] = [trace.x ?? [], trace.y ?? []];
+    const group = groups[index];
+    if (kind === 'markers') {
+      if (!moveMarkers(group, xs, ys, toX, toY)) return false;
+      continue;
+    }
+    const line = group.querySelector('path.js-line');
+    const fill = kind === 'fill' ? group.querySelector('path.js-fill') : null;
+    if (!line || (kind === 'fill' && !fill)) return false;
+    const path = linePath(xs, ys, toX, toY);
+    line.setAttribute('d', path);
+    fill?.setAttribute('d', `${path}Z`);
+  }
   container.classList.add(SKETCH_CLASS);
   return true;
 }
 
-function measure(start: number, figure: DrawableFigure) {
-  const detail = { revision: figure.revision };
+function measure(start: number, figure: DrawableFigure, kind: 'sketch' | 'full') {
+  const detail = { revision: figure.revision, kind };
   performance.measure(PLOT_DRAW_MEASURE, { start, end: performance.now(), detail });
 }
 
@@ -96,6 +137,14 @@ export function usePlotlyDraw(
   const arrival = useRef<Arrival | null>(null);
   const previousArrivalAt = useRef<number | null>(null);
   const firstUndrawnAt = useRef<number | null>(null);
+  const sketchFrame = useRef<{ figure: DrawableFigure; id: number } | null>(null);
+
+  useEffect(
+    () => () => {
+      if (sketchFrame.current) cancelAnimationFrame(sketchFrame.current.id);
+    },
+    [],
+  );
 
   useEffect(() => {
     const container = containerRef.current as PlotDiv | null;
@@ -115,28 +164,35 @@ export function usePlotlyDraw(
     const next = arrival.current;
     let cancelled = false;
     let frame = 0;
-    if (next.lines && sketched.current !== figure) {
+    // The sketch frame outlives this effect: a change of `deferred` (a newer result on its way,
+    // as at every step of a drag) must not cancel the sketch of the figure on hand; only a
+    // newer figure replaces it.
+    if (next.lines && sketched.current !== figure && sketchFrame.current?.figure !== figure) {
       const lines = next.lines;
-      frame = requestAnimationFrame(() => {
+      if (sketchFrame.current) cancelAnimationFrame(sketchFrame.current.id);
+      const id = requestAnimationFrame(() => {
+        sketchFrame.current = null;
+        if (full.current?.figure === figure) return;
         const start = performance.now();
         if (sketch(container, figure, lines)) {
           sketched.current = figure;
-          measure(start, figure);
+          measure(start, figure, 'sketch');
         }
       });
+      sketchFrame.current = { figure, id };
     }
     const drawFully = (plotly: Plotly) => {
       if (cancelled) return;
       const start = performance.now();
       let done: Promise<unknown>;
       try {
-        done = plotly.react(container, figure.data, figure.layout, CONFIG);
+        done = plotly.react(container, figure.data, figure.layout, PLOT_CONFIG);
       } catch {
         setState('failed');
         return;
       }
       container.classList.remove(SKETCH_CLASS);
-      measure(start, figure);
+      measure(start, figure, 'full');
       full.current = next;
       firstUndrawnAt.current = null;
       done.then(
@@ -144,7 +200,7 @@ export function usePlotlyDraw(
         () => setState('failed'),
       );
     };
-    if (deferred && full.current) return () => cancelAnimationFrame(frame);
+    if (deferred && full.current) return;
     const timer = setTimeout(
       () => {
         loadPlotly()
