@@ -17,6 +17,8 @@ import {
   tensionWindow,
   type WindowEnd,
   windowCurve,
+  windowTensionSpans,
+  windowTensionWords,
 } from '../src/core/index.ts';
 import { atInstallationTension, loadExample } from './helpers/designProjects.ts';
 
@@ -98,7 +100,9 @@ function courtyardWithBasket(): Project {
   return p;
 }
 
-describe('tension window with a moving load (courtyard with a 25 kg basket)', () => {
+describe('tension window with a moving load (courtyard with a 25 kg basket)', {
+  timeout: 60_000,
+}, () => {
   const project = courtyardWithBasket();
   const refinement = solveProject(project).mesh.refinement;
   const window = tensionWindow(project, refinement);
@@ -156,7 +160,7 @@ describe('wire chooser with a moving load', () => {
       expect(r.cases.every((k) => k.ok)).toBe(true);
       expect(r.cases.some((k) => (k.movingLoads ?? []).length > 0)).toBe(true);
     }
-  });
+  }, 120_000);
 });
 
 describe('window over a pulley (terrace corner): the largest span’s horizontal tension', () => {
@@ -192,6 +196,24 @@ describe('window over a pulley (terrace corner): the largest span’s horizontal
       expect(Math.abs(utilisation / curve.utilisation[i] - 1)).toBeLessThan(1e-6);
       expect(Math.abs(margin - curve.clearanceMargin[i])).toBeLessThan(1e-6);
     });
+  });
+
+  it('names the spans whose tension it states: those with the largest, at installation', () => {
+    const spans = design.cases[0].spans.map((s) => s.horizontalTension);
+    const named = windowTensionSpans(spans) ?? [];
+    expect(named.length).toBeGreaterThan(0);
+    for (const j of named) expect(spans[j]).toBeCloseTo(design.cases[0].horizontalTension, 6);
+    for (const j of spans.keys())
+      if (!named.includes(j)) expect(spans[j]).toBeLessThan(design.cases[0].horizontalTension);
+    const words = windowTensionWords(project, spans);
+    for (const j of named)
+      expect(words).toContain(`${project.supports[j].label} – ${project.supports[j + 1].label}`);
+    expect(words).not.toContain(`${project.supports[0].label} – ${project.supports[1].label}`);
+    expect(window.advice.join(' ')).toContain(words);
+    // Without a pulley every span has the same: no span is singled out.
+    const plain = loadExample('examples/workshop-yard-inclined.json');
+    const plainSpans = solveProject(plain).cases[0].spans.map((s) => s.horizontalTension);
+    expect(windowTensionSpans(plainSpans)).toBeNull();
   });
 
   it('the high end, pulled as a target, puts the tension check at its limit', () => {
