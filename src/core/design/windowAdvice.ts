@@ -36,7 +36,7 @@ export function windowTensionSpans(spanTensionsN: readonly number[]): number[] |
 /** "the horizontal tension of every span" or "… of the span X – Y (the largest; …)". */
 export function windowTensionWords(project: Project, spanTensionsN: readonly number[]): string {
   const spans = windowTensionSpans(spanTensionsN);
-  if (!spans) return spanTensionsN.length > 1 ? 'the same in every span' : 'of the span';
+  if (!spans) return spanTensionsN.length > 1 ? 'the same in every span' : 'one span';
   const name = (j: number) => {
     const label = (i: number) => project.supports[i]?.label?.trim() || `Fixing ${i + 1}`;
     return `${label(j)} – ${label(j + 1)}`;
