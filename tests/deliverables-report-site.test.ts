@@ -204,6 +204,30 @@ describe('moving loads in the report', () => {
   );
 
   it(
+    'a case failed by its moving-load envelope says why beside its row and in the verdict',
+    async () => {
+      const failed = results.cases.filter((c) => (c.movingLoads ?? []).some((m) => !m.ok));
+      expect(failed.length).toBeGreaterThan(0);
+      const built = await report(project, results);
+      const table = built.pages.find((p) => p.includes('Results by case')) ?? '';
+      let checked = 0;
+      for (const c of failed) {
+        for (const m of c.movingLoads ?? []) {
+          if (m.utilisation <= 1) continue;
+          checked++;
+          const words = flat(
+            `with ${m.label} at ${formatLength('si', m.maxTensionAt - x0)} from Kitchen wall bracket: tension ${formatForceShort('si', m.maxTension)} is ${Math.round(100 * m.utilisation)} % of the working limit`,
+          );
+          expect(table).toContain(words);
+          expect(built.pages[0]).toContain(`${c.name} fails: ${words}`);
+        }
+      }
+      expect(checked).toBeGreaterThan(0);
+    },
+    SLOW,
+  );
+
+  it(
     'the appendix lists each check of each envelope with the load’s worst position',
     async () => {
       const built = await report(project, results, { appendix: { movingLoads: true } });

@@ -229,10 +229,12 @@ async function plotAndCases(
   const table = caseTable(project, results, units);
   const style = caseTableStyle(project, results, units);
   const tableHeight = w.tableHeight(table, CASE_COLUMNS, style) + 12;
-  const height = Math.max(
-    55,
-    Math.min(w.width / options.plotAspect, w.remaining - tableHeight - 6),
-  );
+  const full = w.width / options.plotAspect;
+  // The plot shrinks (to 55 mm at least) to keep the case table on page 1; when the table cannot
+  // stay even then, it starts the next page whole and the plot keeps its full size here.
+  const withTable = w.remaining - tableHeight - 6;
+  const height =
+    withTable >= 55 ? Math.min(full, withTable) : Math.max(55, Math.min(full, w.remaining - 12));
   w.ensure(height + 6);
   if (options.plot) {
     applyFontFamily(options.plot, w.fonts);
@@ -275,7 +277,9 @@ export async function buildPdfReport(
   decisionBlocks(w, project, results, options);
   keyNumberRow(w, project, results, options.unitSystem);
   await plotAndCases(w, project, results, options);
-  w.newPage();
+  // The fixing schedule starts page 2, or follows the case table when that went to page 2.
+  if (doc.getNumberOfPages() === 1) w.newPage();
+  else w.y += 4;
   fixingSection(w, project, results, options.unitSystem);
   if (hasMovingLoads(project)) movingSection(w, project, results, options.unitSystem);
   if (options.asBuilt) asBuiltSection(w, project, results, options.asBuilt, options.unitSystem);

@@ -97,7 +97,35 @@ export function caseFailures(project: Project, c: CaseResult, units: UnitSystem)
       `clearance ${where} ${formatLength(units, m.clearance)}, needs ${formatLength(units, m.required)} (${formatLength(units, m.required - m.clearance)} short)`,
     );
   }
+  failures.push(...movingFailures(project, c, units));
+  // A case failed by a check not worded above (e.g. the wire's elastic range): its own messages.
+  if (failures.length === 0 && !c.ok) failures.push(...c.messages);
   return failures;
+}
+
+/** The checks a case's moving-load envelopes fail, each with where the load was. */
+function movingFailures(project: Project, c: CaseResult, units: UnitSystem): string[] {
+  const out: string[] = [];
+  const x0 = project.supports[0]?.x ?? 0;
+  const first = project.supports[0]?.label?.trim() || 'Fixing 1';
+  for (const m of c.movingLoads ?? []) {
+    const at = (x: number) => `with ${m.label} at ${formatLength(units, x - x0)} from ${first}`;
+    if (m.utilisation > 1)
+      out.push(
+        `${at(m.maxTensionAt)}: tension ${formatForceShort(units, m.maxTension)} is ${percent(m.utilisation)} of the working limit ${formatForceShort(units, workingLimitN(c))}`,
+      );
+    if (m.clearance < project.limits.minClearance)
+      out.push(
+        `${at(m.clearanceAt)}: clearance over the whole span ${formatLength(units, m.clearance)}, needs ${formatLength(units, project.limits.minClearance)}`,
+      );
+    for (const z of m.zoneClearances)
+      if (!z.ok)
+        out.push(
+          `${at(z.at)}: clearance at ${z.label} ${formatLength(units, z.clearance)}, needs ${formatLength(units, z.required)}`,
+        );
+    if (!m.ok && out.length === 0) out.push(`${m.label}: some positions could not be solved`);
+  }
+  return out;
 }
 
 /** The findings beside a case's row: what fails, or that it passes and what it governs. */
