@@ -22,6 +22,7 @@ import {
   validateProject,
   type WireChoice,
 } from '../src/core/index.ts';
+import { designReport, windowParagraphs } from '../src/deliverables/designContent.ts';
 import {
   formatForceShort,
   formatLength,
@@ -281,7 +282,7 @@ describe('wires considered appendix', () => {
             ),
           );
         }
-        expect(rest).toContain('(one span)');
+        expect(rest).toContain('H is the installation horizontal tension at 15°C');
         expect(rest).toContain('the square root of lowest × highest');
         // A continued table repeats its header on each page it reaches.
         for (const page of built.pages.slice(start))
@@ -292,4 +293,34 @@ describe('wires considered appendix', () => {
       SLOW,
     );
   }
+});
+
+describe('the window in the report over a pulley names whose tension it is', () => {
+  it(
+    'the largest span’s, named; the plain single span names none',
+    () => {
+      const terrace = loadExample('examples/terrace-corner-pulley.json');
+      const results = solveProject(terrace);
+      const d = designReport(terrace, results, null);
+      const text = windowParagraphs(terrace, results, d, 'si').join(' ');
+      const spans = results.cases[0].spans.map((s) => s.horizontalTension);
+      const largest = Math.max(...spans);
+      spans.forEach((H, j) => {
+        const name = `${terrace.supports[j].label} – ${terrace.supports[j + 1].label}`;
+        if (H >= largest * (1 - 1e-9)) expect(text).toContain(name);
+        else expect(text).not.toContain(name);
+      });
+      expect(text).toContain('the largest');
+      const demo = loadExample('examples/courtyard-lights.json');
+      const demoResults = solveProject(demo);
+      const plain = windowParagraphs(
+        demo,
+        demoResults,
+        designReport(demo, demoResults, null),
+        'si',
+      );
+      expect(plain[0]).toMatch(/^Installation horizontal tension at 15°C/);
+    },
+    SLOW,
+  );
 });

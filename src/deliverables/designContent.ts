@@ -40,6 +40,9 @@ export function designReport(
   };
 }
 
+/** " (words)", or nothing for empty words. */
+export const inParentheses = (words: string) => (words ? ` (${words})` : '');
+
 /** Which span's horizontal tension the window is stated in (the design's installation). */
 export function windowSpanWords(project: Project, results: ProjectResults): string {
   return windowTensionWords(
@@ -78,7 +81,7 @@ export function windowParagraphs(
     ? ', every moving load included at its worst position,'
     : '';
   const lines = [
-    `Installation horizontal tension (${windowSpanWords(project, results)}) at ${temperatureText(units, project.installation.temperature)} ` +
+    `Installation horizontal tension${inParentheses(windowSpanWords(project, results))} at ${temperatureText(units, project.installation.temperature)} ` +
       `with the installation loads for which every case passes every check${moving}` +
       (window.empty ? ': none. ' : '. ') +
       `${endLine(project, window.low, 'Lowest', units)} ${endLine(project, window.high, 'Highest', units)}`,

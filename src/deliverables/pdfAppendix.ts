@@ -13,7 +13,7 @@ import {
   type WireChoice,
 } from '../core/index.ts';
 import { attachmentWords } from './attachmentWords.ts';
-import { windowSpanWords } from './designContent.ts';
+import { inParentheses, windowSpanWords } from './designContent.ts';
 import {
   formatForceShort,
   formatLength,
@@ -142,7 +142,8 @@ function movingAppendix(
     8,
   );
   w.table(table, cols([1.5, 1.4, 1.6, 1.9, 1.1, 0.6], [3, 4]), {
-    cellColour: (row) => (table.rows[row][5] === 'Fail' ? FAIL : PASS),
+    cellColour: (row, col) =>
+      col === 5 ? (table.rows[row][5] === 'Fail' ? FAIL : PASS) : undefined,
     legend: ['Not for lifting or carrying people.'],
   });
 }
@@ -164,6 +165,24 @@ export function choicesTable(project: Project, choices: WireChoice[], units: Uni
   };
 }
 
+const CHOICE_COLUMNS = cols([2.6, 1, 1.2, 1.2, 1], [1, 2, 3, 4]);
+
+function choicesIntro(choices: WireChoice[]): string {
+  return `Every wire of the catalogue (and the project's own custom wire) tried on this project; listed are the ${choices.length} that pass every case at some installation tension, lightest first. ${SUGGESTION_RULE.replace('√(lowest × highest)', 'the square root of lowest × highest')}`;
+}
+
+/** Height of the wires appendix's intro and table, to keep them on one page when they fit. */
+function choicesHeight(w: PdfWriter, project: Project, options: ReportOptions): number {
+  const choices = options.wireChoices ?? [];
+  if (choices.length === 0) return 0;
+  return (
+    w.paragraphHeight(choicesIntro(choices), 8) +
+    w.tableHeight(choicesTable(project, choices, options.unitSystem), CHOICE_COLUMNS, {
+      legend: ['', ''],
+    })
+  );
+}
+
 function choicesAppendix(
   w: PdfWriter,
   project: Project,
@@ -181,13 +200,10 @@ function choicesAppendix(
     );
     return;
   }
-  w.paragraph(
-    `Every wire of the catalogue (and the project's own custom wire) tried on this project; listed are the ${choices.length} that pass every case at some installation tension, lightest first. ${SUGGESTION_RULE.replace('√(lowest × highest)', 'the square root of lowest × highest')}`,
-    8,
-  );
-  w.table(choicesTable(project, choices, units), cols([2.6, 1, 1.2, 1.2, 1], [1, 2, 3, 4]), {
+  w.paragraph(choicesIntro(choices), 8);
+  w.table(choicesTable(project, choices, units), CHOICE_COLUMNS, {
     legend: [
-      `H is the installation horizontal tension (${windowSpan}) at ${temperatureText(units, project.installation.temperature)} with the installation loads. Each wire passes every case, moving loads included, anywhere between its lowest and highest H.`,
+      `H is the installation horizontal tension${inParentheses(windowSpan)} at ${temperatureText(units, project.installation.temperature)} with the installation loads. Each wire passes every case, moving loads included, anywhere between its lowest and highest H.`,
     ],
   });
 }
@@ -278,7 +294,7 @@ export function appendixSections(
   options: ReportOptions,
 ): void {
   const units = options.unitSystem;
-  const sections: [boolean, string, () => void][] = [
+  const sections: [boolean, string, () => void, (() => number)?][] = [
     [
       options.appendix.setUpChart,
       'Set-up chart: setting the wire on other days',
@@ -293,6 +309,7 @@ export function appendixSections(
       options.appendix.wireChoices,
       'Wires considered',
       () => choicesAppendix(w, project, options, units, windowSpanWords(project, results)),
+      () => choicesHeight(w, project, options),
     ],
     [
       options.appendix.inputs,
@@ -303,7 +320,10 @@ export function appendixSections(
   const chosen = sections.filter(([on]) => on);
   if (chosen.length === 0) return;
   w.newPage();
-  chosen.forEach(([, title, draw], i) => {
+  chosen.forEach(([, title, draw, height], i) => {
+    // A section that fits a page starts on a fresh one rather than leave its intro behind.
+    const need = (height?.() ?? 0) + 14;
+    if (need > w.remaining && need <= w.bottom - w.top) w.newPage();
     w.heading(`Appendix ${String.fromCharCode(65 + i)}. ${title}`);
     draw();
   });

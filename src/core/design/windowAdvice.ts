@@ -33,10 +33,10 @@ export function windowTensionSpans(spanTensionsN: readonly number[]): number[] |
   return spans.length === spanTensionsN.length ? null : spans;
 }
 
-/** "the horizontal tension of every span" or "… of the span X – Y (the largest; …)". */
+/** "the same in every span", "of the span X – Y, the largest: …", or "" for a single span. */
 export function windowTensionWords(project: Project, spanTensionsN: readonly number[]): string {
   const spans = windowTensionSpans(spanTensionsN);
-  if (!spans) return spanTensionsN.length > 1 ? 'the same in every span' : 'one span';
+  if (!spans) return spanTensionsN.length > 1 ? 'the same in every span' : '';
   const name = (j: number) => {
     const label = (i: number) => project.supports[i]?.label?.trim() || `Fixing ${i + 1}`;
     return `${label(j)} – ${label(j + 1)}`;

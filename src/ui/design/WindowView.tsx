@@ -53,7 +53,8 @@ export function WindowView({
     <section className="design-block" aria-labelledby="window-heading">
       <h3 id="window-heading">Tension window</h3>
       <p className="setup-note" data-testid="window-quantity">
-        The installation horizontal tension ({answers.tensionWords}), at{' '}
+        The installation horizontal tension
+        {answers.tensionWords ? ` (${answers.tensionWords})` : ''}, at{' '}
         {show(project.installation.temperature, 'temperature', units)} with the installation loads,
         for which every case passes every check
         {project.loads.some((l) => l.type === 'moving')
