@@ -35,6 +35,7 @@ import {
   asBuiltParagraphs,
   MOVING_HEADING,
 } from '../src/deliverables/pdfSiteSections.ts';
+import { keyNumbers } from '../src/deliverables/reportContent.ts';
 import { loadExample } from './helpers/designProjects.ts';
 import { nodeFontSource } from './helpers/reportFonts.ts';
 
@@ -254,6 +255,27 @@ describe('moving loads in the report', () => {
     },
     SLOW,
   );
+});
+
+describe('key numbers with a moving load', () => {
+  it('the largest tension and least clearance are the envelope’s when it is worse', () => {
+    const project = courtyardWithBasket();
+    const results = solveProject(project);
+    const moving = results.cases.flatMap((c) => c.movingLoads ?? []);
+    const staticMax = Math.max(...results.cases.map((c) => c.maxTension));
+    const movingMax = Math.max(...moving.map((m) => m.maxTension));
+    expect(movingMax).toBeGreaterThan(staticMax);
+    const numbers = keyNumbers(project, results, 'si');
+    const tension = numbers.find((n) => n.label === 'Largest tension');
+    expect(tension?.value).toBe(formatForceShort('si', movingMax));
+    expect(tension?.note).toContain('Pulley basket at');
+    const margins = moving.flatMap((m) =>
+      m.zoneClearances.map((z) => ({ margin: z.clearance - z.required, value: z.clearance })),
+    );
+    const least = margins.reduce((a, b) => (b.margin < a.margin ? b : a));
+    const clearance = numbers.find((n) => n.label === 'Least clearance');
+    expect(clearance?.value).toBe(formatLength('si', least.value));
+  });
 });
 
 describe('wires considered appendix', () => {

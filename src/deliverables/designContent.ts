@@ -78,7 +78,7 @@ export function windowParagraphs(
 ): string[] {
   const { window } = d;
   const moving = project.loads.some((l) => l.type === 'moving')
-    ? ', every moving load included at its worst position,'
+    ? ' (every moving load included at its worst position)'
     : '';
   const lines = [
     `Installation horizontal tension${inParentheses(windowSpanWords(project, results))} at ${temperatureText(units, project.installation.temperature)} ` +
