@@ -4,7 +4,20 @@
  * back-computation with every case re-solved. Timed by the caller's timer (µs per call).
  */
 import { readFileSync } from 'node:fs';
-import { type Project, solveAsBuilt, solveProject } from '../src/core/index.ts';
+import {
+  chooseWires,
+  type Project,
+  solveAsBuilt,
+  solveProject,
+  tensionWindow,
+} from '../src/core/index.ts';
+
+/** One call's time, µs (the chooser with a moving load is too slow to repeat). */
+function once(call: () => void): number {
+  const start = performance.now();
+  call();
+  return (performance.now() - start) * 1000;
+}
 
 export function movingAsBuiltLines(file: string, time: (call: () => void) => number): string[] {
   const project = JSON.parse(readFileSync(file, 'utf8')) as Project;
@@ -30,5 +43,8 @@ export function movingAsBuiltLines(file: string, time: (call: () => void) => num
     `| solveProject without a moving load | ${f1(time(() => solveProject(project)))} | |`,
     `| solveProject with one moving load over the whole line | ${f1(time(() => solveProject(moving)))} | ${positions} positions solved over ${results.cases.length} states |`,
     `| as-built check from a sag (cut length + every case) | ${f1(time(() => solveAsBuilt(project, m, plain)))} | |`,
+    `| tension window without a moving load | ${f1(time(() => tensionWindow(project, 1)))} | |`,
+    `| tension window with the moving load (its envelope in every loaded case) | ${f1(time(() => tensionWindow(moving, 1)))} | |`,
+    `| wire chooser with the moving load, one call | ${f1(once(() => chooseWires(moving, undefined, 1)))} | every wire's window with the envelope |`,
   ];
 }

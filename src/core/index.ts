@@ -18,6 +18,7 @@ export {
 } from './cautions.ts';
 export { type DaySetting, type SagPosition, settingAt } from './design/daySetting.ts';
 export { type TensionWindow, tensionWindow, type WindowEnd } from './design/tensionWindow.ts';
+export { windowTensionSpans, windowTensionWords } from './design/windowAdvice.ts';
 export { type WindowCurve, windowCurve, windowPosition } from './design/windowPosition.ts';
 export {
   chooseWires,

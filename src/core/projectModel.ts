@@ -49,6 +49,8 @@ export interface ProjectModel {
   /** … and sideways (wind on the item), N. */
   supportLateralN: number[];
   installation: NamedState;
+  /** The mesh refinement the model was built with (every element split this many times). */
+  refinement: number;
 }
 
 export const INSTALLATION_NAME = 'Installation';
@@ -82,6 +84,7 @@ export function buildProjectModel(project: Project, refinement = 1): ProjectMode
   const inst = project.installation;
   return {
     project,
+    refinement,
     wire,
     env,
     settings,

@@ -12,6 +12,7 @@ import {
   tensionWindow,
   type WindowEnd,
   windowPosition,
+  windowTensionWords,
 } from '../core/index.ts';
 import { formatQuantity as fq, type UnitSystem } from './displayUnits.ts';
 import { fixingName, spanName, temperatureText } from './setUpContent.ts';
@@ -39,7 +40,25 @@ export function designReport(
   };
 }
 
-function endLine(end: WindowEnd | null, what: string, units: UnitSystem): string {
+/** " (words)", or nothing for empty words. */
+export const inParentheses = (words: string) => (words ? ` (${words})` : '');
+
+/** Which span's horizontal tension the window is stated in (the design's installation). */
+export function windowSpanWords(project: Project, results: ProjectResults): string {
+  return windowTensionWords(
+    project,
+    (results.cases[0]?.spans ?? []).map((s) => s.horizontalTension),
+  );
+}
+
+/** ", with Pulley basket at 11.000 m from West post", when a moving load sets the end. */
+function movingWords(project: Project, end: WindowEnd, units: UnitSystem): string {
+  if (!end.movingLoad) return '';
+  const from = project.supports[0];
+  return `, with ${end.movingLoad.label} at ${fq(units, 'length', end.movingLoad.at - from.x)} from ${fixingName(project, 0)}`;
+}
+
+function endLine(project: Project, end: WindowEnd | null, what: string, units: UnitSystem): string {
   if (!end) return `${what}: none within the range searched.`;
   const check =
     end.check === 'tension'
@@ -47,17 +66,25 @@ function endLine(end: WindowEnd | null, what: string, units: UnitSystem): string
       : end.check === 'clearance'
         ? 'the clearance over the ground'
         : `the clearance over ${end.check}`;
-  return `${what}: ${fq(units, 'force', end.horizontalTension)}, set by ${check} in "${end.case}".`;
+  return `${what}: ${fq(units, 'force', end.horizontalTension)}, set by ${check} in "${end.case}"${movingWords(project, end, units)}.`;
 }
 
 /** The window as report paragraphs. */
-export function windowParagraphs(project: Project, d: DesignReport, units: UnitSystem): string[] {
+export function windowParagraphs(
+  project: Project,
+  results: ProjectResults,
+  d: DesignReport,
+  units: UnitSystem,
+): string[] {
   const { window } = d;
+  const moving = project.loads.some((l) => l.type === 'moving')
+    ? ' (every moving load included at its worst position)'
+    : '';
   const lines = [
-    `Installation horizontal tension at ${temperatureText(units, project.installation.temperature)} ` +
-      'with the installation loads for which every case passes every check' +
+    `Installation horizontal tension${inParentheses(windowSpanWords(project, results))} at ${temperatureText(units, project.installation.temperature)} ` +
+      `with the installation loads for which every case passes every check${moving}` +
       (window.empty ? ': none. ' : '. ') +
-      `${endLine(window.low, 'Lowest', units)} ${endLine(window.high, 'Highest', units)}`,
+      `${endLine(project, window.low, 'Lowest', units)} ${endLine(project, window.high, 'Highest', units)}`,
     `This design, ${fq(units, 'force', d.currentTension)}: ${windowPosition(project, window, d.currentTension)}`,
   ];
   if (window.empty) lines.push(...window.advice);

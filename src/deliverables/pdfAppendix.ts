@@ -8,15 +8,19 @@ import {
   DEFAULT_MODEL,
   type Project,
   type ProjectResults,
+  resolveWire,
+  SUGGESTION_RULE,
+  type WireChoice,
 } from '../core/index.ts';
 import { attachmentWords } from './attachmentWords.ts';
+import { inParentheses, windowSpanWords } from './designContent.ts';
 import {
   formatForceShort,
   formatLength,
   formatQuantity as fq,
   type UnitSystem,
 } from './displayUnits.ts';
-import type { ReportOptions } from './pdfReport.ts';
+import { FAIL, PASS, type ReportOptions } from './pdfReport.ts';
 import type { Colour, PdfWriter } from './pdfWriter.ts';
 import type { Table } from './reportContent.ts';
 import {
@@ -44,24 +48,6 @@ export const NO_APPENDIX: AppendixChoice = {
   inputs: false,
 };
 
-/** A wire the chooser found to work, with its tension window (N) and suggested setting. */
-export interface WireChoice {
-  label: string;
-  massPerLength: number;
-  low: { horizontalTension: number } | null;
-  high: { horizontalTension: number } | null;
-  suggestedHorizontalTension: number;
-}
-
-/** The moving-load envelope of one case (results contract: cases[].movingLoads). */
-interface MovingEnvelope {
-  label: string;
-  maxTension: number;
-  maxTensionAt: number;
-  clearance: number;
-  clearanceAt: number;
-}
-
 const INSTALLATION_FILL: Colour = [227, 238, 248];
 const cols = (weights: number[], right: number[] = []) =>
   weights.map((weight, i) => ({
@@ -87,64 +73,139 @@ function setUpAppendix(w: PdfWriter, project: Project, results: ProjectResults, 
   });
 }
 
-function movingAppendix(w: PdfWriter, results: ProjectResults, units: UnitSystem) {
-  const rows = results.cases.flatMap((c) =>
-    ((c as { movingLoads?: MovingEnvelope[] }).movingLoads ?? []).map((m) => [
-      c.name,
-      m.label,
-      formatForceShort(units, m.maxTension),
-      formatLength(units, m.maxTensionAt),
-      formatLength(units, m.clearance),
-      formatLength(units, m.clearanceAt),
-    ]),
-  );
-  if (rows.length === 0) {
-    w.paragraph('This project has no moving load, so there is no envelope to show.', 8);
+/** Every moving load in every case: each check of its envelope with the load's worst position. */
+export function movingEnvelopeTable(
+  project: Project,
+  results: ProjectResults,
+  units: UnitSystem,
+): Table {
+  const x0 = project.supports[0].x;
+  const at = (x: number) => formatLength(units, x - x0, true);
+  const verdict = (ok: boolean) => (ok ? 'Pass' : 'Fail');
+  const rows: string[][] = [];
+  for (const c of results.cases) {
+    for (const m of c.movingLoads ?? []) {
+      rows.push([
+        c.name,
+        m.label,
+        'Tension',
+        `${formatForceShort(units, m.maxTension)} (${Math.round(100 * m.utilisation)} % of limit)`,
+        at(m.maxTensionAt),
+        verdict(m.utilisation <= 1),
+      ]);
+      rows.push([
+        c.name,
+        m.label,
+        'Clearance over the ground',
+        `${formatLength(units, m.clearance, true)} (needs ${formatLength(units, project.limits.minClearance, true)})`,
+        at(m.clearanceAt),
+        verdict(m.clearance >= project.limits.minClearance),
+      ]);
+      for (const z of m.zoneClearances)
+        rows.push([
+          c.name,
+          m.label,
+          `Clearance over ${z.label}`,
+          `${formatLength(units, z.clearance, true)} (needs ${formatLength(units, z.required, true)})`,
+          at(z.at),
+          verdict(z.ok),
+        ]);
+    }
+  }
+  return {
+    head: [
+      'Case',
+      'Moving load',
+      'Check',
+      'Worst value',
+      `Load at (from ${fixingName(project, 0)})`,
+      '',
+    ],
+    rows,
+  };
+}
+
+function movingAppendix(
+  w: PdfWriter,
+  project: Project,
+  results: ProjectResults,
+  units: UnitSystem,
+) {
+  const table = movingEnvelopeTable(project, results, units);
+  if (table.rows.length === 0) {
+    w.paragraph('This project has no moving load in any case, so there is no envelope to show.', 8);
     return;
   }
-  w.table(
-    {
-      head: [
-        'Case',
-        'Moving load',
-        'Largest tension',
-        'with the load at',
-        'Least clearance',
-        'with the load at',
-      ],
-      rows,
-    },
-    cols([1.6, 1.6, 1, 1, 1, 1], [2, 3, 4, 5]),
-    { legend: ['Positions along the span from the first fixing. Not for carrying people.'] },
+  const positions = results.cases.flatMap((c) => (c.movingLoads ?? []).map((m) => m.positions));
+  w.paragraph(
+    `Each moving load alone, at the design's cut length, solved at ${Math.min(...positions)} to ${Math.max(...positions)} positions along its path per case (an even scan, then the worst position refined). The tension limit is the breaking load with the end fittings divided by the safety factor.`,
+    8,
+  );
+  w.table(table, cols([1.5, 1.4, 1.6, 1.9, 1.1, 0.6], [3, 4]), {
+    cellColour: (row, col) =>
+      col === 5 ? (table.rows[row][5] === 'Fail' ? FAIL : PASS) : undefined,
+    legend: ['Not for lifting or carrying people.'],
+  });
+}
+
+/** The wires the chooser found to work, lightest first, the project's own marked. */
+export function choicesTable(project: Project, choices: WireChoice[], units: UnitSystem): Table {
+  const own = resolveWire(project.wire);
+  const end = (n: number | null) =>
+    n === null ? 'no clearance limit' : formatForceShort(units, n);
+  return {
+    head: ['Wire', 'Mass', 'Lowest H that passes', 'Highest H that passes', 'Suggested H'],
+    rows: choices.map((c) => [
+      own && c.label === own.label ? `${c.label} (this design)` : c.label,
+      fq(units, 'massPerLength', c.massPerLength),
+      end(c.low),
+      formatForceShort(units, c.high),
+      formatForceShort(units, c.suggestedHorizontalTension),
+    ]),
+  };
+}
+
+const CHOICE_COLUMNS = cols([2.6, 1, 1.2, 1.2, 1], [1, 2, 3, 4]);
+
+function choicesIntro(choices: WireChoice[]): string {
+  return `Every wire of the catalogue (and the project's own custom wire) tried on this project; listed are the ${choices.length} that pass every case at some installation tension, lightest first. ${SUGGESTION_RULE.replace('√(lowest × highest)', 'the square root of lowest × highest')}`;
+}
+
+/** Height of the wires appendix's intro and table, to keep them on one page when they fit. */
+function choicesHeight(w: PdfWriter, project: Project, options: ReportOptions): number {
+  const choices = options.wireChoices ?? [];
+  if (choices.length === 0) return 0;
+  return (
+    w.paragraphHeight(choicesIntro(choices), 8) +
+    w.tableHeight(choicesTable(project, choices, options.unitSystem), CHOICE_COLUMNS, {
+      legend: ['', ''],
+    })
   );
 }
 
-function choicesAppendix(w: PdfWriter, options: ReportOptions, units: UnitSystem) {
+function choicesAppendix(
+  w: PdfWriter,
+  project: Project,
+  options: ReportOptions,
+  units: UnitSystem,
+  windowSpan: string,
+) {
   const choices = options.wireChoices ?? [];
   if (choices.length === 0) {
-    w.paragraph('No list of wires considered was made with this report.', 8);
+    w.paragraph(
+      options.wireChoices
+        ? 'No wire of the catalogue passes every case of this project at any installation tension.'
+        : 'No list of wires considered was made with this report.',
+      8,
+    );
     return;
   }
-  const end = (e: { horizontalTension: number } | null) =>
-    e ? formatForceShort(units, e.horizontalTension) : 'none';
-  w.table(
-    {
-      head: ['Wire', 'Mass', 'Lowest H that passes', 'Highest H that passes', 'Suggested H'],
-      rows: choices.map((c) => [
-        c.label,
-        fq(units, 'massPerLength', c.massPerLength),
-        end(c.low),
-        end(c.high),
-        formatForceShort(units, c.suggestedHorizontalTension),
-      ]),
-    },
-    cols([2.4, 1, 1.2, 1.2, 1], [1, 2, 3, 4]),
-    {
-      legend: [
-        'Wires that pass every case, lightest first; H is the horizontal tension set at installation.',
-      ],
-    },
-  );
+  w.paragraph(choicesIntro(choices), 8);
+  w.table(choicesTable(project, choices, units), CHOICE_COLUMNS, {
+    legend: [
+      `H is the installation horizontal tension${inParentheses(windowSpan)} at ${temperatureText(units, project.installation.temperature)} with the installation loads. Each wire passes every case, moving loads included, anywhere between its lowest and highest H.`,
+    ],
+  });
 }
 
 function inputTables(
@@ -233,14 +294,23 @@ export function appendixSections(
   options: ReportOptions,
 ): void {
   const units = options.unitSystem;
-  const sections: [boolean, string, () => void][] = [
+  const sections: [boolean, string, () => void, (() => number)?][] = [
     [
       options.appendix.setUpChart,
       'Set-up chart: setting the wire on other days',
       () => setUpAppendix(w, project, results, units),
     ],
-    [options.appendix.movingLoads, 'Moving-load envelope', () => movingAppendix(w, results, units)],
-    [options.appendix.wireChoices, 'Wires considered', () => choicesAppendix(w, options, units)],
+    [
+      options.appendix.movingLoads,
+      'Moving-load envelope',
+      () => movingAppendix(w, project, results, units),
+    ],
+    [
+      options.appendix.wireChoices,
+      'Wires considered',
+      () => choicesAppendix(w, project, options, units, windowSpanWords(project, results)),
+      () => choicesHeight(w, project, options),
+    ],
     [
       options.appendix.inputs,
       'The project’s inputs in full',
@@ -250,7 +320,10 @@ export function appendixSections(
   const chosen = sections.filter(([on]) => on);
   if (chosen.length === 0) return;
   w.newPage();
-  chosen.forEach(([, title, draw], i) => {
+  chosen.forEach(([, title, draw, height], i) => {
+    // A section that fits a page starts on a fresh one rather than leave its intro behind.
+    const need = (height?.() ?? 0) + 14;
+    if (need > w.remaining && need <= w.bottom - w.top) w.newPage();
     w.heading(`Appendix ${String.fromCharCode(65 + i)}. ${title}`);
     draw();
   });

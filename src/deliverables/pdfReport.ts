@@ -6,7 +6,13 @@
  * and the fonts load only when a report is asked for.
  */
 import type { jsPDF } from 'jspdf';
-import { CAUTION_SUMMARY, type Project, type ProjectResults } from '../core/index.ts';
+import {
+  type AsBuiltResult,
+  CAUTION_SUMMARY,
+  type Project,
+  type ProjectResults,
+  type WireChoice,
+} from '../core/index.ts';
 import {
   DESIGN_HEADING,
   type DesignReport,
@@ -14,9 +20,10 @@ import {
   windowParagraphs,
 } from './designContent.ts';
 import type { UnitSystem } from './displayUnits.ts';
-import { type AppendixChoice, appendixSections, type WireChoice } from './pdfAppendix.ts';
+import { type AppendixChoice, appendixSections } from './pdfAppendix.ts';
 import { type FontSource, ReportFonts } from './pdfFonts.ts';
 import { basisSection, fixingSection, recordSection } from './pdfSections.ts';
+import { asBuiltSection, hasMovingLoads, movingSection } from './pdfSiteSections.ts';
 import {
   ACCENT,
   type Colour,
@@ -51,8 +58,10 @@ export interface ReportOptions {
   decisionNotes?: string[];
   /** The tension window and today's setting; left out when not given. */
   design?: DesignReport | null;
-  /** Wires considered by the chooser, for the appendix, if known. */
+  /** Wires the chooser found to work, for the appendix, if known. */
   wireChoices?: WireChoice[];
+  /** The as-built check of a site measurement, when one was entered. */
+  asBuilt?: AsBuiltResult | null;
 }
 
 export const PASS: Colour = [26, 122, 62];
@@ -128,7 +137,7 @@ function decisionBlocks(
       { text: setting.head, size: 8.8, bold: true },
       ...setting.lines.map((text) => ({ text, size: 7.8 })),
       ...(options.decisionNotes ?? []).map((text) => ({ text, size: 7.8 })),
-      ...designLines(project, options),
+      ...designLines(project, results, options),
     ],
     ACCENT,
     [236, 242, 248],
@@ -136,13 +145,13 @@ function decisionBlocks(
 }
 
 /** The tension window and, when a temperature of the day was given, the setting for it. */
-function designLines(project: Project, options: ReportOptions) {
+function designLines(project: Project, results: ProjectResults, options: ReportOptions) {
   const d = options.design;
   if (!d) return [];
   const units = options.unitSystem;
   return [
     { text: `${DESIGN_HEADING}.`, size: 8.4, bold: true },
-    ...windowParagraphs(project, d, units).map((text) => ({ text, size: 7.8 })),
+    ...windowParagraphs(project, results, d, units).map((text) => ({ text, size: 7.8 })),
     ...settingParagraphs(project, d, units).map((text) => ({ text, size: 7.8 })),
   ];
 }
@@ -220,10 +229,12 @@ async function plotAndCases(
   const table = caseTable(project, results, units);
   const style = caseTableStyle(project, results, units);
   const tableHeight = w.tableHeight(table, CASE_COLUMNS, style) + 12;
-  const height = Math.max(
-    55,
-    Math.min(w.width / options.plotAspect, w.remaining - tableHeight - 6),
-  );
+  const full = w.width / options.plotAspect;
+  // The plot shrinks (to 55 mm at least) to keep the case table on page 1; when the table cannot
+  // stay even then, it starts the next page whole and the plot keeps its full size here.
+  const withTable = w.remaining - tableHeight - 6;
+  const height =
+    withTable >= 55 ? Math.min(full, withTable) : Math.max(55, Math.min(full, w.remaining - 12));
   w.ensure(height + 6);
   if (options.plot) {
     applyFontFamily(options.plot, w.fonts);
@@ -266,8 +277,12 @@ export async function buildPdfReport(
   decisionBlocks(w, project, results, options);
   keyNumberRow(w, project, results, options.unitSystem);
   await plotAndCases(w, project, results, options);
-  w.newPage();
+  // The fixing schedule starts page 2, or follows the case table when that went to page 2.
+  if (doc.getNumberOfPages() === 1) w.newPage();
+  else w.y += 4;
   fixingSection(w, project, results, options.unitSystem);
+  if (hasMovingLoads(project)) movingSection(w, project, results, options.unitSystem);
+  if (options.asBuilt) asBuiltSection(w, project, results, options.asBuilt, options.unitSystem);
   basisSection(w, project, results, options);
   recordSection(w, project, options);
   appendixSections(w, project, results, options);

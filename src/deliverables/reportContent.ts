@@ -81,6 +81,44 @@ export function governingClearance(
   return all.reduce((a, b) => (b.clearance - b.required < a.clearance - a.required ? b : a));
 }
 
+/** The moving-load envelope with the largest tension, or the least clearance margin. */
+function worstMoving(project: Project, cases: CaseResult[], kind: 'tension' | 'clearance') {
+  let best:
+    | {
+        c: CaseResult;
+        m: NonNullable<CaseResult['movingLoads']>[number];
+        margin: number;
+        clearance: number;
+        required: number;
+        at: number;
+        where: string;
+      }
+    | undefined;
+  for (const c of cases)
+    for (const m of c.movingLoads ?? []) {
+      const options = [
+        {
+          margin: kind === 'tension' ? -m.maxTension : m.clearance - project.limits.minClearance,
+          clearance: m.clearance,
+          required: project.limits.minClearance,
+          at: m.clearanceAt,
+          where: 'over the whole span',
+        },
+        ...(kind === 'clearance'
+          ? m.zoneClearances.map((z) => ({
+              margin: z.clearance - z.required,
+              clearance: z.clearance,
+              required: z.required,
+              at: z.at,
+              where: `at ${z.label}`,
+            }))
+          : []),
+      ];
+      for (const o of options) if (!best || o.margin < best.margin) best = { c, m, ...o };
+    }
+  return best;
+}
+
 /** Every check a case fails, in words and the chosen units. */
 export function caseFailures(project: Project, c: CaseResult, units: UnitSystem): string[] {
   if (!c.solved) return [c.messages.join(' ') || 'could not be solved'];
@@ -97,7 +135,35 @@ export function caseFailures(project: Project, c: CaseResult, units: UnitSystem)
       `clearance ${where} ${formatLength(units, m.clearance)}, needs ${formatLength(units, m.required)} (${formatLength(units, m.required - m.clearance)} short)`,
     );
   }
+  failures.push(...movingFailures(project, c, units));
+  // A case failed by a check not worded above (e.g. the wire's elastic range): its own messages.
+  if (failures.length === 0 && !c.ok) failures.push(...c.messages);
   return failures;
+}
+
+/** The checks a case's moving-load envelopes fail, each with where the load was. */
+function movingFailures(project: Project, c: CaseResult, units: UnitSystem): string[] {
+  const out: string[] = [];
+  const x0 = project.supports[0]?.x ?? 0;
+  const first = project.supports[0]?.label?.trim() || 'Fixing 1';
+  for (const m of c.movingLoads ?? []) {
+    const at = (x: number) => `with ${m.label} at ${formatLength(units, x - x0)} from ${first}`;
+    if (m.utilisation > 1)
+      out.push(
+        `${at(m.maxTensionAt)}: tension ${formatForceShort(units, m.maxTension)} is ${percent(m.utilisation)} of the working limit ${formatForceShort(units, workingLimitN(c))}`,
+      );
+    if (m.clearance < project.limits.minClearance)
+      out.push(
+        `${at(m.clearanceAt)}: clearance over the whole span ${formatLength(units, m.clearance)}, needs ${formatLength(units, project.limits.minClearance)}`,
+      );
+    for (const z of m.zoneClearances)
+      if (!z.ok)
+        out.push(
+          `${at(z.at)}: clearance at ${z.label} ${formatLength(units, z.clearance)}, needs ${formatLength(units, z.required)}`,
+        );
+    if (!m.ok && out.length === 0) out.push(`${m.label}: some positions could not be solved`);
+  }
+  return out;
 }
 
 /** The findings beside a case's row: what fails, or that it passes and what it governs. */
@@ -187,13 +253,30 @@ export function keyNumbers(
     });
   if (solved.length === 0) return numbers;
   const t = extreme(solved, (c) => c.maxTension, true);
-  numbers.push({
-    label: 'Largest tension',
-    value: formatForceShort(units, t.maxTension),
-    note: `${percent(t.utilisation)} of the working limit ${formatForceShort(units, workingLimitN(t))}, ${t.name}`,
-  });
+  const movingT = worstMoving(project, solved, 'tension');
+  numbers.push(
+    movingT && movingT.m.maxTension > t.maxTension
+      ? {
+          label: 'Largest tension',
+          value: formatForceShort(units, movingT.m.maxTension),
+          note: `${percent(movingT.m.utilisation)} of the working limit ${formatForceShort(units, workingLimitN(movingT.c))}, ${movingT.c.name}, ${movingT.m.label} at ${formatLength(units, movingT.m.maxTensionAt - (project.supports[0]?.x ?? 0))}`,
+        }
+      : {
+          label: 'Largest tension',
+          value: formatForceShort(units, t.maxTension),
+          note: `${percent(t.utilisation)} of the working limit ${formatForceShort(units, workingLimitN(t))}, ${t.name}`,
+        },
+  );
   const g = governingClearance(project, results);
-  if (g) {
+  const movingC = worstMoving(project, solved, 'clearance');
+  if (g && movingC && movingC.margin < g.clearance - g.required) {
+    const spare = movingC.margin;
+    numbers.push({
+      label: 'Least clearance',
+      value: formatLength(units, movingC.clearance),
+      note: `${formatLength(units, movingC.required)} required ${movingC.where}: ${formatLength(units, Math.abs(spare))} ${spare >= 0 ? 'to spare' : 'short'}, ${movingC.c.name}, ${movingC.m.label} at ${formatLength(units, movingC.at - (project.supports[0]?.x ?? 0))}`,
+    });
+  } else if (g) {
     const spare = g.clearance - g.required;
     const where =
       g.requirement === 'the whole span' ? 'over the whole span' : `at ${g.requirement}`;

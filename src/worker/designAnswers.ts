@@ -16,6 +16,7 @@ import {
   type WireChoice,
   windowCurve,
   windowPosition,
+  windowTensionWords,
 } from '../core/index.ts';
 
 export interface DesignQuestion {
@@ -31,6 +32,8 @@ export interface DesignAnswers {
   /** The installation horizontal tension of the current design (N) and where it sits. */
   currentTension: number;
   position: string;
+  /** Which span's horizontal tension the window states ("the same in every span", …). */
+  tensionWords: string;
   /** Null until the chooser is asked for. */
   choices: WireChoice[] | null;
   setting: DaySetting | null;
@@ -66,6 +69,10 @@ function windowAndChoices(project: Project, results: ProjectResults, choose: boo
     curve,
     currentTension,
     position: windowPosition(project, window, currentTension),
+    tensionWords: windowTensionWords(
+      project,
+      (results.cases[0]?.spans ?? []).map((s) => s.horizontalTension),
+    ),
     choices: null,
     windowMs,
     chooserMs: 0,

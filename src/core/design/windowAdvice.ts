@@ -8,6 +8,7 @@
 import type { Load, Project } from '../project.ts';
 import { buildProjectModel, type ProjectModel } from '../projectModel.ts';
 import { brent } from '../rootFind.ts';
+import { solveInstallation } from '../states.ts';
 import { findWindowEnds, type WindowEnds } from './windowEnds.ts';
 import { CLEARANCE_CHECK, type WindowResponse } from './windowResponse.ts';
 
@@ -20,6 +21,30 @@ export function checkWords(project: Project, check: string): string {
   if (check === 'tension') return 'the tension limit';
   const zone = (project.limits.zones ?? []).find((z, i) => (z.label ?? `Zone ${i + 1}`) === check);
   return zone ? `${metres(zone.height)} over ${check}` : check;
+}
+
+/**
+ * The spans whose horizontal tension the window states (indices): the largest at installation.
+ * Null when every span has the same (no pulley at installation): then it is every span's.
+ */
+export function windowTensionSpans(spanTensionsN: readonly number[]): number[] | null {
+  const largest = Math.max(...spanTensionsN);
+  const spans = spanTensionsN.flatMap((H, j) => (H >= largest * (1 - 1e-9) ? [j] : []));
+  return spans.length === spanTensionsN.length ? null : spans;
+}
+
+/** "the same in every span", "of the span X – Y, the largest: …", or "" for a single span. */
+export function windowTensionWords(project: Project, spanTensionsN: readonly number[]): string {
+  const spans = windowTensionSpans(spanTensionsN);
+  if (!spans) return spanTensionsN.length > 1 ? 'the same in every span' : '';
+  const name = (j: number) => {
+    const label = (i: number) => project.supports[i]?.label?.trim() || `Fixing ${i + 1}`;
+    return `${label(j)} – ${label(j + 1)}`;
+  };
+  return (
+    `of ${spans.length === 1 ? 'the span' : 'the spans'} ${spans.map(name).join(' and ')}, the largest: ` +
+    'over a pulley the spans’ horizontal tensions differ, and a horizontalTension target means the largest'
+  );
 }
 
 /** Every hung load scaled by k (point masses and forces, uniform masses per metre). */
@@ -132,6 +157,14 @@ export function windowAdvice(model: ProjectModel, ends: WindowEnds, refinement =
   advice.push(
     `Every case passes for an installation horizontal tension from ${from} to ${to} at ${p.installation.temperature} °C (${loads}).`,
   );
+  if (model.installationJoints.some((joint) => joint === 'tension')) {
+    const spans = solveInstallation(model, ends.floorN).spans.map((s) => s.tensionN);
+    advice.push(`The tensions are the horizontal tension ${windowTensionWords(p, spans)}.`);
+  }
+  if (p.loads.some((l) => l.type === 'moving'))
+    advice.push(
+      'Moving loads are in the window: each case that carries the hung loads is checked with every moving load at its worst position along its path.',
+    );
   if (ends.low)
     advice.push(
       `The low end is where "${ends.low.case}" just clears ${checkWords(p, ends.low.check)}.`,

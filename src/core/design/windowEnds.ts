@@ -5,7 +5,10 @@
  * ln u = 0 and the low end the root of m = 0, each found in ln H₀ by a bracketing root find.
  * Each root is first found for the case that governs at the start only (two states per step
  * instead of all), then checked with every case; a case that governs there joins and the root
- * is found again from that point, until the governing case is among those solved.
+ * is found again from that point, until the governing case is among those solved. With moving
+ * loads the focused solves park each load at its last worst positions; the full check at the
+ * root takes the whole envelope, and when it finds a worse position the root is found again
+ * with the load parked there, until the full check is at the limit too.
  */
 import { type ProjectModel, prepareState } from '../projectModel.ts';
 import { largestInstallationTension } from '../states.ts';
@@ -22,6 +25,8 @@ export interface WindowEnd {
   case: string;
   /** "tension", "clearance" or a zone's label. */
   check: string;
+  /** When a moving load sets this end: the load and its position then (m along the line). */
+  movingLoad?: { label: string; at: number };
 }
 
 /** Why a window is empty: nothing within the tension limit, clearance never met, or both ends cross. */
@@ -67,6 +72,9 @@ function floorTension(model: ProjectModel): number {
 
 type Kind = 'tension' | 'clearance';
 
+/** How close to its limit the full check must be at a root found with parked moving loads. */
+const MOVING_SETTLED = 1e-9;
+
 interface WorstRoot {
   status: RangeRoot['status'];
   x: number;
@@ -85,6 +93,7 @@ function worstRoot(
   range: [number, number],
   tolerance: number,
   count: { evaluations: number },
+  moving: boolean,
 ): WorstRoot {
   const at = (x: number, only?: CaseSubset) => {
     count.evaluations++;
@@ -107,10 +116,14 @@ function worstRoot(
     };
     const root = rootInRange(f, x, range[0], range[1], tolerance);
     if (root.status === 'failed') return { status: 'failed', x: root.x, full: null };
+    // With moving loads the full check (whole envelopes) must agree with the focused one at the
+    // root; they differ only when a load's worst position has moved.
+    const focused = moving && root.status === 'root' ? f(root.x) : Number.NaN;
     full = at(root.x);
     if (!full.solved) return { status: 'failed', x: root.x, full: null };
     const now = governing(full);
-    if (now < 0 || focus.has(now)) return { status: root.status, x: root.x, full };
+    const settled = !moving || !(Math.abs(value(full) - focused) > MOVING_SETTLED);
+    if ((now < 0 || focus.has(now)) && settled) return { status: root.status, x: root.x, full };
     x = root.x;
   }
   return { status: 'failed', x, full: null };
@@ -136,15 +149,17 @@ export function findWindowEnds(model: ProjectModel, options: WindowOptions = {})
     evaluations: 0,
   };
   const count = { evaluations: 0 };
+  const moving = model.project.loads.some((l) => l.type === 'moving');
   const allowed = model.wire.breakingLoad / model.project.limits.safetyFactor / 2;
   const start = Math.min(range[1], Math.max(range[0], Math.log(allowed)));
-  const high = worstRoot(ends, 'tension', start, range, tolerance, count);
+  const high = worstRoot(ends, 'tension', start, range, tolerance, count, moving);
   if (high.status === 'root' && high.full) {
     ends.atHigh = high.full;
     ends.high = {
       horizontalTension: largestInstallationTension(model, Math.exp(high.x)),
       case: high.full.tensionCase,
       check: TENSION_CHECK,
+      ...(high.full.tensionMoving ? { movingLoad: high.full.tensionMoving } : {}),
     };
     if (high.full.clearanceMargin < 0) {
       ends.empty = true;
@@ -159,13 +174,14 @@ export function findWindowEnds(model: ProjectModel, options: WindowOptions = {})
     let from = high.status === 'root' ? high.x : range[0];
     if (options.lowGuessN !== undefined && options.lowGuessN > 0)
       from = Math.min(from, Math.log(options.lowGuessN));
-    const low = worstRoot(ends, 'clearance', from, range, tolerance, count);
+    const low = worstRoot(ends, 'clearance', from, range, tolerance, count, moving);
     if (low.status === 'root' && low.full) {
       ends.atLow = low.full;
       ends.low = {
         horizontalTension: largestInstallationTension(model, Math.exp(low.x)),
         case: low.full.clearanceCase,
         check: low.full.clearanceCheck,
+        ...(low.full.clearanceMoving ? { movingLoad: low.full.clearanceMoving } : {}),
       };
     } else if (low.status === 'negative' || low.status === 'failed') {
       // Not even the tightest wire searched clears: no tension opens the window.

@@ -6,6 +6,7 @@
  */
 import type { Project } from '../project.ts';
 import { buildProjectModel } from '../projectModel.ts';
+import { largestInstallationTension } from '../states.ts';
 import type { TensionWindow } from './tensionWindow.ts';
 import { checkWords } from './windowAdvice.ts';
 import { createWindowResponse } from './windowResponse.ts';
@@ -31,7 +32,9 @@ export function windowPosition(project: Project, window: TensionWindow, tensionN
 }
 
 export interface WindowCurve {
-  /** Installation horizontal tension, N. */
+  /** Installation horizontal tension, N: the largest span's (what the window's ends, a
+   * horizontalTension target and every case's horizontalTension mean; over a pulley the spans'
+   * horizontal tensions differ). */
   tension: number[];
   /** Worst utilisation over the cases (passes ≤ 1). */
   utilisation: number[];
@@ -55,11 +58,17 @@ export function windowCurve(
   const from = Math.log(Math.min(...ends) / 2);
   const to = Math.log(Math.max(...ends) * 1.5);
   const curve: WindowCurve = { tension: [], utilisation: [], clearanceMargin: [] };
+  // Moving loads: their full envelope at every 8th sample (about 50 solves each), parked at the
+  // worst positions found so far in between (a picture of the window, not its ends).
+  const everyCase = new Set(project.cases.map((_, i) => i));
+  const hasMoving = project.loads.some((l) => l.type === 'moving');
   for (let i = 0; i < count; i++) {
-    const H = Math.exp(from + ((to - from) * i) / (count - 1));
-    const r = response(H);
+    // The installation is solved from the first span's H₁; over a pulley the largest span's H
+    // differs from it, so each sample is placed at the largest, like the ends and the marker.
+    const H1 = Math.exp(from + ((to - from) * i) / (count - 1));
+    const r = response(H1, hasMoving && i % 8 !== 0 && i !== count - 1 ? everyCase : undefined);
     if (!r.solved) continue;
-    curve.tension.push(H);
+    curve.tension.push(largestInstallationTension(model, H1));
     curve.utilisation.push(r.utilisation);
     curve.clearanceMargin.push(r.clearanceMargin);
   }

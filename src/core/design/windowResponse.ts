@@ -4,11 +4,19 @@
  * Tension check: utilisation u = T_max · SF / (breaking load · end-fitting efficiency) (passes at
  * u ≤ 1). Clearance checks:
  * margin = clearance − required (m) over the whole span and each zone (passes at ≥ 0).
+ * Moving loads: in each state that carries the hung loads, every moving load's envelope over its
+ * path (movingLoads.ts) adds the same checks, as solveProject fails a case on it. The full
+ * envelope (a scan and a local refinement, about 50 solves) is taken when every case is
+ * evaluated; when only some cases are (the root finds of windowEnds.ts), the load is parked at
+ * the worst positions of the last full envelope (a few solves), and the root is then checked
+ * with the full envelope again.
  */
 import { clearanceOver, largestSag, largestStateTension, type SolvedSpan } from '../caseChecks.ts';
 import { resolveEndFittings } from '../endFittings.ts';
 import { hungDrops, loadStateOfCase } from '../loads.ts';
-import type { ProjectModel } from '../projectModel.ts';
+import { type MovingContext, movingLoadEnvelope, solveMovingLoadAt } from '../movingLoads.ts';
+import type { MovingLoad } from '../project.ts';
+import type { NamedState, ProjectModel } from '../projectModel.ts';
 import { solveChangeOfState, solveInstallation } from '../states.ts';
 
 /** The contract's name of the whole-span clearance check and of the tension check. */
@@ -22,6 +30,8 @@ export interface CheckValue {
   /** Tension: utilisation (limit 1). Clearance: clearance in m (limit `limit`). */
   value: number;
   limit: number;
+  /** A moving-load check: the load's label and its position (m along the line). */
+  moving?: { label: string; at: number };
 }
 
 export interface WindowResponse {
@@ -37,6 +47,9 @@ export interface WindowResponse {
   /** The governing cases by index (−1 the installation). */
   tensionIndex: number;
   clearanceIndex: number;
+  /** When a moving load governs a check: the load and where it is. */
+  tensionMoving?: { label: string; at: number };
+  clearanceMoving?: { label: string; at: number };
 }
 
 /**
@@ -75,46 +88,156 @@ function stateChecks(
   return checks;
 }
 
+/** Worst positions remembered per moving load and state. */
+const PARKED_PER_LOAD = 12;
+
 /** Weather cases to solve, by index; the installation (index −1) is always solved. */
 export type CaseSubset = ReadonlySet<number> | undefined;
 
 /**
+ * The moving-load checks of one solved state: the full envelope of each moving load (and the
+ * worst positions it found are remembered in `parked`), or, with `full` false and positions
+ * known, the load parked at those positions only.
+ */
+function movingChecks(
+  model: ProjectModel,
+  state: NamedState,
+  unstressed: readonly number[],
+  spans: SolvedSpan[],
+  parked: number[][] | undefined,
+  full: boolean,
+): { checks: CheckValue[]; worst: number[][] } {
+  const p = model.project;
+  const moving = p.loads.filter((l): l is MovingLoad => l.type === 'moving');
+  const efficiency = resolveEndFittings(p.limits.endFittings).efficiency;
+  const ctx: MovingContext = {
+    project: p,
+    unstressed,
+    state,
+    tensionGuessN: Math.max(...spans.map((s) => s.tensionN)),
+    refinement: model.refinement,
+    endFittingEfficiency: efficiency,
+  };
+  const checks: CheckValue[] = [];
+  const worst: number[][] = [];
+  moving.forEach((load, k) => {
+    const label = load.label ?? `Moving load ${k + 1}`;
+    if (full || !parked?.[k]) {
+      const m = movingLoadEnvelope(ctx, load, k);
+      checks.push(
+        {
+          case: state.name,
+          check: TENSION_CHECK,
+          value: m.utilisation,
+          limit: 1,
+          moving: { label, at: m.maxTensionAt },
+        },
+        {
+          case: state.name,
+          check: CLEARANCE_CHECK,
+          value: m.clearance,
+          limit: p.limits.minClearance,
+          moving: { label, at: m.clearanceAt },
+        },
+        ...m.zoneClearances.map((z) => ({
+          case: state.name,
+          check: z.label,
+          value: z.clearance,
+          limit: z.required,
+          moving: { label, at: z.at },
+        })),
+      );
+      worst.push([
+        ...new Set([m.maxTensionAt, m.clearanceAt, ...m.zoneClearances.map((z) => z.at)]),
+      ]);
+      return;
+    }
+    for (const x of parked[k]) {
+      const at = solveMovingLoadAt(ctx, load, x);
+      if (!at.solved) continue;
+      for (const c of stateChecks(model, state.name, at.spans, state.withLoads))
+        checks.push({ ...c, moving: { label, at: x } });
+    }
+    worst.push(parked[k]);
+  });
+  return { checks, worst };
+}
+
+/**
  * An evaluator of every check at installation tension H₀ (of the installation and the weather
  * cases in `only`, default all), warm-starting each case from its last solved tension. Calls
- * `visit` with each solved state's index (−1 the installation), name, spans and checks.
+ * `visit` with each solved state's index (−1 the installation), name, spans and checks. With
+ * every case (`only` undefined) moving loads take their full envelope; with a subset they are
+ * parked at the worst positions of the last full envelope.
  */
 export function createCheckEvaluator(model: ProjectModel) {
   // Each case's span tensions from its last solve (a warm start), none before the first.
   const guesses: (number[] | undefined)[] = model.project.cases.map(() => undefined);
+  const hasMoving = model.project.loads.some((l) => l.type === 'moving');
+  // Worst positions of each moving load in each state (index + 1; 0 the installation).
+  const parked = new Map<number, number[][]>();
+  const withMoving = (
+    index: number,
+    state: NamedState,
+    unstressed: readonly number[],
+    spans: SolvedSpan[],
+    checks: CheckValue[],
+    full: boolean,
+  ): CheckValue[] => {
+    if (!hasMoving || !state.withLoads) return checks;
+    const known = parked.get(index + 1);
+    const m = movingChecks(model, state, unstressed, spans, known, full);
+    // Every worst position found so far is kept (the newest first, a few per load), so the
+    // parked checks are exact wherever one of them is the worst.
+    parked.set(
+      index + 1,
+      m.worst.map((xs, k) =>
+        [...new Set([...xs, ...(known?.[k] ?? [])])].slice(0, PARKED_PER_LOAD),
+      ),
+    );
+    return [...checks, ...m.checks];
+  };
   return (
     tensionN: number,
     visit: (index: number, name: string, spans: SolvedSpan[], checks: CheckValue[]) => void,
     only?: CaseSubset,
   ): boolean => {
+    const full = only === undefined;
     const installed = solveInstallation(model, tensionN);
     if (!installed.solved) return false;
+    const base = model.installation;
     visit(
       -1,
-      model.installation.name,
+      base.name,
       installed.spans,
-      stateChecks(model, model.installation.name, installed.spans, model.installation.withLoads),
+      withMoving(
+        -1,
+        base,
+        installed.unstressed,
+        installed.spans,
+        stateChecks(model, base.name, installed.spans, base.withLoads),
+        full,
+      ),
     );
     for (const [i, weather] of model.project.cases.entries()) {
       if (only && !only.has(i)) continue;
       const guess = guesses[i] ?? installed.spans.map((s) => s.tensionN);
-      const state = solveChangeOfState(
-        model,
-        { ...loadStateOfCase(weather), name: weather.name },
-        installed.unstressed,
-        guess,
-      );
+      const named = { ...loadStateOfCase(weather), name: weather.name };
+      const state = solveChangeOfState(model, named, installed.unstressed, guess);
       if (!state.solved) return false;
       guesses[i] = state.spans.map((s) => s.tensionN);
       visit(
         i,
         weather.name,
         state.spans,
-        stateChecks(model, weather.name, state.spans, weather.withLoads),
+        withMoving(
+          i,
+          named,
+          installed.unstressed,
+          state.spans,
+          stateChecks(model, weather.name, state.spans, weather.withLoads),
+          full,
+        ),
       );
     }
     return true;
@@ -145,6 +268,7 @@ export function createWindowResponse(
             r.utilisation = c.value;
             r.tensionCase = name;
             r.tensionIndex = index;
+            r.tensionMoving = c.moving;
           }
         } else if (c.value - c.limit < r.clearanceMargin) {
           r.clearanceMargin = c.value - c.limit;
@@ -152,6 +276,7 @@ export function createWindowResponse(
           r.clearanceIndex = index;
           r.clearanceCheck = c.check;
           r.clearanceSagM = largestSag(spans);
+          r.clearanceMoving = c.moving;
         }
       }
     };

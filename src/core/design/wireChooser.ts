@@ -6,6 +6,7 @@
  */
 import type { Project, WireSpec } from '../project.ts';
 import { buildProjectModel } from '../projectModel.ts';
+import { largestInstallationTension } from '../states.ts';
 import { resolveWire, WIRE_CATALOG, type WireKind, type WireProperties } from '../wireCatalog.ts';
 import { findWindowEnds } from './windowEnds.ts';
 
@@ -67,7 +68,10 @@ export function chooseWire(
     massPerLength: wire.massPerLength,
     low,
     high,
-    suggestedHorizontalTension: Math.sqrt((low ?? ends.floorN) * high),
+    // The floor is a first-span H₁; the ends are the largest span's H (they differ over a pulley).
+    suggestedHorizontalTension: Math.sqrt(
+      (low ?? largestInstallationTension(model, ends.floorN)) * high,
+    ),
   };
 }
 

@@ -8,7 +8,7 @@ import type { DesignAnswers } from '../../worker/designAnswers.ts';
 import { show } from '../format.ts';
 import { WindowPlot } from './WindowPlot.tsx';
 
-function endText(end: WindowEnd | null, units: UnitSystem, what: string): string {
+function endText(project: Project, end: WindowEnd | null, units: UnitSystem, what: string): string {
   if (!end) return `${what}: none found`;
   const check =
     end.check === 'tension'
@@ -16,14 +16,25 @@ function endText(end: WindowEnd | null, units: UnitSystem, what: string): string
       : end.check === 'clearance'
         ? 'clearance over the ground'
         : `clearance over ${end.check}`;
-  return `${what}: ${show(end.horizontalTension, 'force', units)} (${check}, ${end.case})`;
+  const moving = end.movingLoad
+    ? `, ${end.movingLoad.label} at ${show(end.movingLoad.at - project.supports[0].x, 'length', units)} from the first fixing`
+    : '';
+  return `${what}: ${show(end.horizontalTension, 'force', units)} (${check}, ${end.case}${moving})`;
 }
 
-function Ends({ window, units }: { window: TensionWindow; units: UnitSystem }) {
+function Ends({
+  project,
+  window,
+  units,
+}: {
+  project: Project;
+  window: TensionWindow;
+  units: UnitSystem;
+}) {
   return (
     <ul className="window-ends">
-      <li data-testid="window-low">{endText(window.low, units, 'Lowest')}</li>
-      <li data-testid="window-high">{endText(window.high, units, 'Highest')}</li>
+      <li data-testid="window-low">{endText(project, window.low, units, 'Lowest')}</li>
+      <li data-testid="window-high">{endText(project, window.high, units, 'Highest')}</li>
     </ul>
   );
 }
@@ -41,17 +52,21 @@ export function WindowView({
   return (
     <section className="design-block" aria-labelledby="window-heading">
       <h3 id="window-heading">Tension window</h3>
-      <p className="setup-note">
-        The installation horizontal tension, at{' '}
+      <p className="setup-note" data-testid="window-quantity">
+        The installation horizontal tension
+        {answers.tensionWords ? ` (${answers.tensionWords})` : ''}, at{' '}
         {show(project.installation.temperature, 'temperature', units)} with the installation loads,
-        for which every case passes every check.
+        for which every case passes every check
+        {project.loads.some((l) => l.type === 'moving')
+          ? ', every moving load included at its worst position.'
+          : '.'}
       </p>
       <p className={window.empty ? 'verdict-fail' : 'verdict-pass'} data-testid="window-verdict">
         {window.empty
           ? '✗ No tension passes every case.'
           : '✓ Every case passes inside the window.'}
       </p>
-      <Ends window={window} units={units} />
+      <Ends project={project} window={window} units={units} />
       <p data-testid="window-position">
         Current setting, {show(answers.currentTension, 'force', units)}: {answers.position}
       </p>

@@ -20,7 +20,8 @@ const ROLES = [
 ] as const;
 const APPENDICES: [keyof AppendixChoice, string][] = [
   ['setUpChart', 'Set-up chart (what to set on other days)'],
-  ['movingLoads', 'Moving-load envelope'],
+  ['movingLoads', 'Moving-load envelope, every check with the load’s worst position'],
+  ['wireChoices', 'Wires considered (every wire that works, with its tension window)'],
   ['inputs', 'The project’s inputs in full'],
 ];
 
@@ -199,7 +200,9 @@ export function ReportDialog({
         </fieldset>
         <fieldset>
           <legend>Appendices</legend>
-          {APPENDICES.map(([key, label]) => (
+          {APPENDICES.filter(
+            ([key]) => key !== 'movingLoads' || project.loads.some((l) => l.type === 'moving'),
+          ).map(([key, label]) => (
             <label key={key}>
               <input
                 type="checkbox"

@@ -5,7 +5,16 @@
  */
 
 import { version as appVersion } from '../../../package.json';
-import { type Project, type ProjectResults, solveProject } from '../../core/index.ts';
+import {
+  type AsBuiltMeasurement,
+  chooseWires,
+  type Project,
+  type ProjectResults,
+  solveAsBuilt,
+  solveProject,
+  validateAsBuilt,
+  type WireChoice,
+} from '../../core/index.ts';
 import type { UnitSystem } from '../../core/units.ts';
 import { profilesCsv } from '../../deliverables/csv.ts';
 import { type DesignReport, designReport } from '../../deliverables/designContent.ts';
@@ -15,6 +24,7 @@ import {
   serializeProject,
 } from '../../deliverables/projectFile.ts';
 import { shareUrl } from '../../deliverables/shareLink.ts';
+import { useAsBuiltStore } from '../../state/asBuiltStore.ts';
 import { useDesignStore } from '../../state/designStore.ts';
 import { downloadBlob, downloadUrl, fileStem } from './download.ts';
 import { parseSvg, renderPlotImage, svgMarkupFromDataUrl } from './plotImage.ts';
@@ -74,14 +84,30 @@ export async function savePlotImage(
   downloadUrl(url, `${fileStem(projectFileName(project.title))}${suffix}`);
 }
 
+/** What the report adds besides the design: the chooser's list and the site measurement. */
+export interface ReportExtras {
+  /** The wires that work, when the workbench already has them for this document. */
+  wireChoices?: WireChoice[];
+  /** The as-built measurement entered in the workbench, if any. */
+  measurement?: AsBuiltMeasurement | null;
+}
+
 export async function buildReportBlob(
   request: ReportRequest,
   units: UnitSystem,
   temperatureNow: number | null = null,
   design?: DesignReport,
+  extras: ReportExtras = {},
 ): Promise<Blob> {
   const { project } = request;
   const results = solved(project);
+  // The wires considered: the workbench's list when it has one, else worked out now.
+  const wireChoices = request.appendix.wireChoices
+    ? (extras.wireChoices ?? chooseWires(project, undefined, results.mesh.refinement))
+    : undefined;
+  const m = extras.measurement;
+  const asBuilt =
+    m && validateAsBuilt(project, m).length === 0 ? solveAsBuilt(project, m, results) : null;
   const [{ buildPdfReport }, { exportFigure }, { browserFontSource }] = await Promise.all([
     import('../../deliverables/pdfReport.ts'),
     import('./plotImage.ts'),
@@ -111,6 +137,8 @@ export async function buildReportBlob(
       appVersion,
       appendix: request.appendix,
       design: design ?? designReport(project, results, temperatureNow),
+      wireChoices,
+      asBuilt,
     });
     return doc.output('blob');
   } finally {
@@ -130,6 +158,10 @@ export async function saveReport(request: ReportRequest, units: UnitSystem): Pro
           setting: aids.answers.setting,
         }
       : undefined;
-  const blob = await buildReportBlob(request, units, aids.temperatureNow, ready);
+  const fresh = aids.answersProject === project && !aids.stale;
+  const blob = await buildReportBlob(request, units, aids.temperatureNow, ready, {
+    wireChoices: fresh ? (aids.answers?.choices ?? undefined) : undefined,
+    measurement: useAsBuiltStore.getState().measurement,
+  });
   downloadBlob(blob, `${fileStem(projectFileName(project.title))}-report.pdf`);
 }

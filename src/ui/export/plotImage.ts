@@ -105,5 +105,31 @@ export function svgMarkupFromDataUrl(dataUrl: string): string {
 export function parseSvg(markup: string): SVGSVGElement | null {
   const parsed = new DOMParser().parseFromString(markup, 'image/svg+xml');
   const root = parsed.documentElement;
-  return root.nodeName === 'svg' ? (root as unknown as SVGSVGElement) : null;
+  if (root.nodeName !== 'svg') return null;
+  restyle(root);
+  return root as unknown as SVGSVGElement;
+}
+
+/**
+ * The page's Content-Security-Policy (style-src 'self') does not apply style attributes that
+ * come from parsed markup, so the plot's fills and strokes would be lost (an unstyled fill is
+ * black) when the report reads computed styles. Each declaration is set again through the CSSOM,
+ * which the policy allows.
+ */
+function restyle(root: Element): void {
+  for (const element of [root, ...Array.from(root.querySelectorAll('[style]'))]) {
+    const text = element.getAttribute('style');
+    if (!text) continue;
+    const style = (element as SVGElement).style;
+    if (!style) continue;
+    element.removeAttribute('style');
+    for (const declaration of text.split(';')) {
+      const colon = declaration.indexOf(':');
+      if (colon < 0) continue;
+      const name = declaration.slice(0, colon).trim();
+      const value = declaration.slice(colon + 1).trim();
+      const important = /!important$/i.test(value);
+      style.setProperty(name, value.replace(/\s*!important$/i, ''), important ? 'important' : '');
+    }
+  }
 }
