@@ -16,6 +16,14 @@ export {
   cautionsFor,
   MOVING_LOAD_CAUTION,
 } from './cautions.ts';
+export {
+  clearanceMessage,
+  SI_WORDING,
+  type TensionFacts,
+  tensionMessage,
+  type Wording,
+  zoneMessage,
+} from './checkMessages.ts';
 export { type DaySetting, type SagPosition, settingAt } from './design/daySetting.ts';
 export { type TensionWindow, tensionWindow, type WindowEnd } from './design/tensionWindow.ts';
 export { type WindowCurve, windowCurve, windowPosition } from './design/windowPosition.ts';

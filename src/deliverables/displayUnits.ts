@@ -2,6 +2,7 @@
  * Number formatting for exports over the app's display units (src/core/units.ts): the value in
  * the chosen system with the digits a person expects for that quantity, and its symbol.
  */
+import type { Wording } from '../core/checkMessages.ts';
 import { fromSi, type Quantity, unitSymbol as symbolOf, type UnitSystem } from '../core/units.ts';
 
 export type { Quantity, UnitSystem };
@@ -82,4 +83,24 @@ export function formatLength(system: UnitSystem, metres: number, compact = false
   const fraction = rest ? `\u00a0${rest / divisor}/${8 / divisor}` : '';
   const inchText = `${inches}${fraction}\u00a0in`;
   return feet === 0 ? `${sign}${inchText}` : `${sign}${feet}\u00a0ft\u00a0${inchText}`;
+}
+
+/**
+ * How a check message words a force and a length in the chosen units: whole newtons or pounds
+ * force; lengths as the report gives them (metres to the millimetre, or feet and inches).
+ */
+export function wordingFor(system: UnitSystem): Wording {
+  return {
+    force: (newtons) => formatQuantity(system, 'force', newtons),
+    length: (metres) => formatLength(system, metres),
+  };
+}
+
+/**
+ * A temperature in the chosen units without drift: to a tenth of a degree, with a whole number
+ * shown whole (15 °C → "59°F", 7.5 °C → "45.5°F", never "45.49999°F" or a rounded "46°F").
+ */
+export function formatTemperature(system: UnitSystem, celsius: number): string {
+  const shown = Math.round(fromSi(celsius, 'temperature', system) * 10) / 10;
+  return `${Object.is(shown, -0) ? 0 : shown}${symbolOf('temperature', system)}`;
 }

@@ -97,6 +97,10 @@ export function caseFailures(project: Project, c: CaseResult, units: UnitSystem)
       `clearance ${where} ${formatLength(units, m.clearance)}, needs ${formatLength(units, m.required)} (${formatLength(units, m.required - m.clearance)} short)`,
     );
   }
+  if (failures.length === 0 && !c.ok)
+    failures.push(
+      'the wire stretches beyond its linear-elastic range, so its numbers are not valid',
+    );
   return failures;
 }
 

@@ -1,6 +1,8 @@
 /** Results by case: tension, utilisation with pass/fail in words, sag, lowest point, clearance, swing. */
-import type { CaseResult, ProjectResults } from '../../core/index.ts';
+import type { CaseResult, Project, ProjectResults } from '../../core/index.ts';
 import { unitSymbol } from '../../core/units.ts';
+import { caseMessages } from '../../deliverables/caseMessages.ts';
+import { formatLength } from '../../deliverables/displayUnits.ts';
 import { useUiStore } from '../../state/uiStore.ts';
 import { num, percent, show } from '../format.ts';
 import { TableScroll } from './TableScroll.tsx';
@@ -30,7 +32,7 @@ export function utilisationBasis(results: ProjectResults): string {
   return `Utilisation = largest tension × safety factor / (breaking load × ${percent(f.efficiency)}): the weaker end fitting is ${weaker.label.toLowerCase()} at the ${f.governing === 'start' ? 'first' : 'last'} fixing.`;
 }
 
-export function ResultsTable({ results }: { results: ProjectResults }) {
+export function ResultsTable({ project, results }: { project: Project; results: ProjectResults }) {
   const units = useUiStore((s) => s.unitSystem);
   const lu = unitSymbol('length', units);
   const fu = unitSymbol('force', units);
@@ -54,10 +56,11 @@ export function ResultsTable({ results }: { results: ProjectResults }) {
         <tbody>
           {results.cases.map((result) => {
             const marks = governs(result, results);
+            const messages = caseMessages(project, results, result, units);
             const zones = result.zoneClearances
               .map(
                 (z) =>
-                  `${z.label}: ${show(z.clearance, 'length', units, 2)}${z.ok ? '' : ` — too low, needs ${show(z.required, 'length', units, 2)}`}`,
+                  `${z.label}: ${formatLength(units, z.clearance)}${z.ok ? '' : ` — too low, needs ${formatLength(units, z.required)}`}`,
               )
               .join('; ');
             return (
@@ -74,9 +77,7 @@ export function ResultsTable({ results }: { results: ProjectResults }) {
                 <td>{percent(result.utilisation)}</td>
                 <td>
                   <Verdict result={result} />
-                  {result.messages.length > 0 && (
-                    <span className="case-meta">{result.messages.join(' ')}</span>
-                  )}
+                  {messages.length > 0 && <span className="case-meta">{messages.join(' ')}</span>}
                 </td>
                 <td>{num(result.sag, 'length', units)}</td>
                 <td>
