@@ -48,9 +48,9 @@ describe('the verdict first', () => {
     expect(roadResults.cases.every((c) => c.clearance >= road.limits.minClearance)).toBe(true);
     const s = summaryText(road, roadResults, 'si');
     expect(s.pass).toBe(false);
-    expect(s.verdict.startsWith(`${failing.length} of ${roadResults.cases.length} cases fail`)).toBe(
-      true,
-    );
+    expect(
+      s.verdict.startsWith(`${failing.length} of ${roadResults.cases.length} cases fail`),
+    ).toBe(true);
     for (const c of failing) {
       const z = c.zoneClearances[0];
       expect(s.verdict).toContain(
@@ -105,7 +105,9 @@ describe('check messages in the chosen units', () => {
     if (!c) throw new Error('no failing case');
     const imperial = caseMessages(road, roadResults, c, 'imperial');
     // 4.5 m / 0.0254 = 177.165 in = 14 ft 9 1/8 in to the nearest eighth.
-    expect(imperial.join(' ')).toContain('is below the required 14\u00a0ft\u00a09\u00a01/8\u00a0in.');
+    expect(imperial.join(' ')).toContain(
+      'is below the required 14\u00a0ft\u00a09\u00a01/8\u00a0in.',
+    );
     expect(imperial.join(' ')).not.toMatch(/\d m\b/);
     expect(imperial).toHaveLength(c.messages.length);
   });
