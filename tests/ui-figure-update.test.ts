@@ -33,14 +33,15 @@ const range = (axis: 'x' | 'y') => {
 const ranges = { x: range('x'), y: range('y') };
 
 describe('which edits can be sketched', () => {
-  it('sketches every plain line (wires, parabolas, clearance line) when the installation temperature changes', () => {
+  it('sketches every plain line (wires, parabolas, clearance line, sag mark) when the installation temperature changes', () => {
     const warmer = checked(demo);
     warmer.installation.temperature += 3;
     const lines = sketchTraces(drawn, sketchOf(warmer), ranges);
     const names = (lines ?? []).map((i) => String(drawn.figure.data[i].name));
     const cases = 1 + demo.cases.length;
-    expect(lines).toHaveLength(2 * cases + 1);
+    expect(lines).toHaveLength(2 * cases + 2);
     expect(names).toContain('Installation');
+    expect(names).toContain('Largest sag, measured here');
     expect(names.filter((n) => n.startsWith('Minimum clearance'))).toHaveLength(1);
     // The filled ground and zones and the fixings' markers are not lines to sketch.
     expect(names).not.toContain('Ground');
