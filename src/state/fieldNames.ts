@@ -134,7 +134,7 @@ export function fieldName(project: Project, path: string): string {
   }
   if (first.key === 'limits' && second?.key === 'zones' && second.index !== undefined) {
     const zone = project.limits.zones?.[second.index];
-    const name = zone?.label?.trim() || `Clearance zone ${second.index + 1}`;
+    const name = zone?.label?.trim() || `Zone ${second.index + 1}`;
     const field = s[2];
     return field ? `${name} ${ZONE_FIELDS[field.key] ?? field.key}` : name;
   }

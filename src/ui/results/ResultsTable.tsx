@@ -4,6 +4,7 @@ import { unitSymbol } from '../../core/units.ts';
 import { caseMessages } from '../../deliverables/caseMessages.ts';
 import { formatLength } from '../../deliverables/displayUnits.ts';
 import { useUiStore } from '../../state/uiStore.ts';
+import { Hint } from '../fields/Hint.tsx';
 import { num, percent, show } from '../format.ts';
 import { TableScroll } from './TableScroll.tsx';
 
@@ -43,11 +44,19 @@ export function ResultsTable({ project, results }: { project: Project; results: 
         <thead>
           <tr>
             <th scope="col">Case</th>
-            <th scope="col">Horizontal tension ({fu})</th>
-            <th scope="col">Largest tension ({fu})</th>
-            <th scope="col">Utilisation</th>
+            <th scope="col">
+              Horizontal tension ({fu}) <Hint term="horizontalTension" />
+            </th>
+            <th scope="col">
+              Largest tension ({fu}) <Hint term="largestTension" />
+            </th>
+            <th scope="col">
+              Utilisation <Hint term="utilisation" />
+            </th>
             <th scope="col">Check</th>
-            <th scope="col">Sag ({lu})</th>
+            <th scope="col">
+              Sag ({lu}) <Hint term="sag" />
+            </th>
             <th scope="col">Lowest point ({lu})</th>
             <th scope="col">Clearance ({lu})</th>
             <th scope="col">Swing ({lu})</th>
