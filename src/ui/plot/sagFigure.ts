@@ -3,7 +3,7 @@
  * same thing: each case's wire (solid) with its closed-form parabola (dashed), the ground
  * filled, clearance zones shaded at their required heights, supports, the lowest point and the
  * largest sag annotated (sag drawn where it is measured: down from the straight line between the
- * fixings, dotted on inclined spans, at the point where that drop is largest), and the band a moving load sweeps (movingBand.ts). Values are
+ * fixings, dash-dotted on inclined spans, at the point where that drop is largest), and the band a moving load sweeps (movingBand.ts). Values are
  * converted to the chosen display units. The plan view (options.view 'plan', planFigure.ts)
  * shows the sideways swing in wind instead.
  */
@@ -129,7 +129,7 @@ export function largestSagPoint(project: Project, results: ProjectResults): SagP
 const CHORD_NAME = 'Straight line between fixings (sag is measured down from it)';
 
 /**
- * The chord of each inclined span (dotted), and the largest sag drawn as a short line from the
+ * The chord of each inclined span (dash-dotted), and the largest sag drawn as a short line from the
  * chord straight down to the wire where it is measured.
  */
 function sagTraces(project: Project, point: SagPoint | null, units: UnitSystem): Data[] {
@@ -146,7 +146,7 @@ function sagTraces(project: Project, point: SagPoint | null, units: UnitSystem):
       showlegend: traces.length === 0,
       x: [len(a.x), len(b.x)],
       y: [len(a.z), len(b.z)],
-      line: { color: '#57606a', width: 1.2, dash: 'dot' },
+      line: { color: '#1f2328', width: 1.2, dash: 'dashdot' },
       hoverinfo: 'skip',
     });
   });

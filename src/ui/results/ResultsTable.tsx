@@ -35,7 +35,11 @@ export function utilisationBasis(results: ProjectResults): string {
 
 export function ResultsTable({ project, results }: { project: Project; results: ProjectResults }) {
   const units = useUiStore((s) => s.unitSystem);
-  const lu = unitSymbol('length', units);
+  // Lengths as installers read them: metres (unit in the heading), or feet and inches per cell.
+  const si = units === 'si';
+  const lu = si ? ` (${unitSymbol('length', units)})` : '';
+  const length = (m: number) => (si ? num(m, 'length', units) : formatLength(units, m, true));
+  const position = (m: number) => (si ? show(m, 'length', units, 2) : formatLength(units, m));
   const fu = unitSymbol('force', units);
   return (
     <TableScroll>
@@ -55,11 +59,11 @@ export function ResultsTable({ project, results }: { project: Project; results: 
             </th>
             <th scope="col">Check</th>
             <th scope="col">
-              Sag ({lu}) <Hint term="sag" />
+              Sag{lu} <Hint term="sag" />
             </th>
-            <th scope="col">Lowest point ({lu})</th>
-            <th scope="col">Clearance ({lu})</th>
-            <th scope="col">Swing ({lu})</th>
+            <th scope="col">Lowest point{lu}</th>
+            <th scope="col">Clearance{lu}</th>
+            <th scope="col">Swing{lu}</th>
           </tr>
         </thead>
         <tbody>
@@ -88,18 +92,16 @@ export function ResultsTable({ project, results }: { project: Project; results: 
                   <Verdict result={result} />
                   {messages.length > 0 && <span className="case-meta">{messages.join(' ')}</span>}
                 </td>
-                <td>{num(result.sag, 'length', units)}</td>
+                <td>{length(result.sag)}</td>
                 <td>
-                  {num(result.lowestPoint.z, 'length', units)}
-                  <span className="case-meta">
-                    at {show(result.lowestPoint.x, 'length', units, 2)}
-                  </span>
+                  {length(result.lowestPoint.z)}
+                  <span className="case-meta">at {position(result.lowestPoint.x)}</span>
                 </td>
                 <td>
-                  {num(result.clearance, 'length', units)}
+                  {length(result.clearance)}
                   {zones && <span className="case-meta">{zones}</span>}
                 </td>
-                <td>{num(result.swing, 'length', units)}</td>
+                <td>{length(result.swing)}</td>
               </tr>
             );
           })}

@@ -14,8 +14,10 @@ import { percent, showForceShort } from '../format.ts';
 
 export interface Summary {
   pass: boolean;
-  /** The verdict in words: all pass, or which case fails which check and by how much. */
+  /** The verdict in a few words: all pass, or how many cases fail. */
   verdict: string;
+  /** Which case fails which check and by how much, one entry a case. */
+  failures: string[];
   /** The governing numbers. */
   detail: string;
 }
@@ -26,9 +28,8 @@ export function summaryText(project: Project, results: ProjectResults, units: Un
   const verdict =
     failing.length === 0
       ? `All ${total} cases pass every check.`
-      : `${failing.length} of ${total} ${total === 1 ? 'case fails' : 'cases fail'}: ${failing
-          .map((c) => `${c.name}, ${caseFailures(project, c, units).join('; ')}`)
-          .join('. ')}.`;
+      : `${failing.length} of ${total} ${total === 1 ? 'case fails' : 'cases fail'}:`;
+  const failures = failing.map((c) => `${c.name}, ${caseFailures(project, c, units).join('; ')}.`);
   const byId = (id: string) => results.cases.find((c) => c.id === id && c.solved);
   const tensionCase = byId(results.governingIds.tension);
   const parts: string[] = [];
@@ -49,11 +50,12 @@ export function summaryText(project: Project, results: ProjectResults, units: Un
   return {
     pass: failing.length === 0,
     verdict,
+    failures,
     detail: sentence ? `${sentence.charAt(0).toUpperCase()}${sentence.slice(1)}.` : '',
   };
 }
 
 /** The summary as one line of text (verdict, then the governing numbers). */
 export function summaryLineText(summary: Summary): string {
-  return summary.detail ? `${summary.verdict} ${summary.detail}` : summary.verdict;
+  return [summary.verdict, ...summary.failures, summary.detail].filter(Boolean).join(' ');
 }
