@@ -8,11 +8,25 @@
  */
 import { describe, expect, it } from 'vitest';
 import demo from '../examples/courtyard-lights.json' with { type: 'json' };
-import { type Project, solveProject, validateProject } from '../src/core/index.ts';
+import {
+  adviceWords,
+  type Project,
+  solveProject,
+  tensionWindowWithFacts,
+  validateProject,
+  windowPosition,
+} from '../src/core/index.ts';
 import { caseMessages } from '../src/deliverables/caseMessages.ts';
+import {
+  adviceWordingFor,
+  formatLength,
+  formatTemperature,
+} from '../src/deliverables/displayUnits.ts';
 import { keyNumbers, summaryLine } from '../src/deliverables/reportContent.ts';
+import { show } from '../src/ui/format.ts';
 import { summaryLineText, summaryText } from '../src/ui/results/summaryText.ts';
 import { upToDateStatus } from '../src/ui/statusText.ts';
+import { roadSquare } from './helpers/designProjects.ts';
 
 function open(raw: unknown): Project {
   const checked = validateProject(raw);
@@ -129,5 +143,48 @@ describe('check messages in the chosen units', () => {
     const text = summaryLineText(summaryText(road, roadResults, 'imperial'));
     expect(text).toContain('ft');
     expect(text).not.toMatch(/\d m\b|\d N\b|kN/);
+  });
+});
+
+describe('the tension window in the chosen units', () => {
+  const shut = roadSquare();
+  const { window, adviceFacts } = tensionWindowWithFacts(shut);
+  const imperial = adviceWords(shut, adviceFacts, adviceWordingFor('imperial'));
+
+  it('words the same advice as the contract in SI', () => {
+    expect(adviceWords(shut, adviceFacts, adviceWordingFor('si'))).toEqual(window.advice);
+  });
+
+  it('words the advice for a shut window in pounds force, feet and inches and pounds', () => {
+    expect(window.empty).toBe(true);
+    expect(imperial).toHaveLength(window.advice.length);
+    const text = imperial.join(' ');
+    expect(text).toMatch(/\d lbf/);
+    expect(text).toMatch(/\d+\u00a0ft\u00a0\d+/);
+    expect(text).not.toMatch(/\d m\b|\d N\b|kN|\d kg\b/);
+    // The fixing rise in feet and inches: the SI advice's metres / 0.0254, to the nearest eighth.
+    const metres = Number(window.advice.join(' ').match(/by at least ([\d.]+) m/)?.[1]);
+    const raise = imperial.find((line) => line.startsWith('Raising every fixing'));
+    expect(raise).toContain(`by at least ${formatLength('imperial', metres)}`);
+  });
+
+  it('says where the demo setting sits in feet and inches, with the temperature in °F', () => {
+    const open = tensionWindowWithFacts(passing);
+    const H = passingResults.cases[0].horizontalTension;
+    const words = adviceWordingFor('imperial');
+    // 3 m / 0.3048 = 9.8425 ft = 9 ft 10 1/8 in to the nearest eighth of an inch.
+    expect(windowPosition(passing, open.window, H, words)).toContain(
+      'clears 9\u00a0ft\u00a010\u00a01/8\u00a0in over Walkway',
+    );
+    // 15 °C × 9/5 + 32 = 59 °F exactly.
+    expect(adviceWords(passing, open.adviceFacts, words)[0]).toContain('at 59°F');
+  });
+
+  it('shows temperatures without rounding drift', () => {
+    // 7.5 °C = 45.5 °F exactly; 15 °C = 59 °F.
+    expect(formatTemperature('imperial', 7.5)).toBe('45.5°F');
+    expect(formatTemperature('imperial', 15)).toBe('59°F');
+    expect(show(7.5, 'temperature', 'imperial')).toBe('45.5\u00a0°F');
+    expect(show(-10, 'temperature', 'si')).toBe('-10\u00a0°C');
   });
 });

@@ -5,16 +5,26 @@
  * with SI_WORDING give exactly the messages the core puts in a case's `messages`.
  */
 
-/** How a force (N) and a length (m) are written. */
+/** How a force (N), a length (m), a mass (kg) and a temperature (°C) are written. */
 export interface Wording {
   force(newtons: number): string;
   length(metres: number): string;
+  mass(kg: number): string;
+  temperature(celsius: number): string;
 }
 
-/** The core's own wording: whole newtons, metres to the centimetre. */
+/** The core's own wording: whole newtons, metres to the centimetre, kilograms to 0.1 kg. */
 export const SI_WORDING: Wording = {
   force: (n) => `${n.toFixed(0)} N`,
   length: (m) => `${m.toFixed(2)} m`,
+  mass: (kg) => `${kg.toFixed(1)} kg`,
+  temperature: (c) => `${c} °C`,
+};
+
+/** The tension window's SI wording: from 10 kN in kilonewtons to 0.1 kN, else whole newtons. */
+export const ADVICE_SI: Wording = {
+  ...SI_WORDING,
+  force: (n) => (n >= 10_000 ? `${(n / 1000).toFixed(1)} kN` : `${n.toFixed(0)} N`),
 };
 
 /** The numbers behind a case's tension check. */

@@ -25,7 +25,13 @@ export {
   zoneMessage,
 } from './checkMessages.ts';
 export { type DaySetting, type SagPosition, settingAt } from './design/daySetting.ts';
-export { type TensionWindow, tensionWindow, type WindowEnd } from './design/tensionWindow.ts';
+export {
+  type TensionWindow,
+  tensionWindow,
+  tensionWindowWithFacts,
+  type WindowEnd,
+} from './design/tensionWindow.ts';
+export { type AdviceFact, adviceWords } from './design/windowAdvice.ts';
 export { type WindowCurve, windowCurve, windowPosition } from './design/windowPosition.ts';
 export {
   chooseWires,

@@ -2,7 +2,7 @@
  * Number formatting for exports over the app's display units (src/core/units.ts): the value in
  * the chosen system with the digits a person expects for that quantity, and its symbol.
  */
-import type { Wording } from '../core/checkMessages.ts';
+import { ADVICE_SI, type Wording } from '../core/checkMessages.ts';
 import { fromSi, type Quantity, unitSymbol as symbolOf, type UnitSystem } from '../core/units.ts';
 
 export type { Quantity, UnitSystem };
@@ -86,21 +86,38 @@ export function formatLength(system: UnitSystem, metres: number, compact = false
 }
 
 /**
- * How a check message words a force and a length in the chosen units: whole newtons or pounds
- * force; lengths as the report gives them (metres to the millimetre, or feet and inches).
+ * How a message words numbers in the chosen units: whole newtons or pounds force; lengths as the
+ * report gives them (metres to the millimetre, or feet and inches); masses to 0.1 kg or lb;
+ * temperatures without drift (formatTemperature).
  */
 export function wordingFor(system: UnitSystem): Wording {
   return {
     force: (newtons) => formatQuantity(system, 'force', newtons),
     length: (metres) => formatLength(system, metres),
+    mass: (kg) => formatQuantity(system, 'mass', kg, 1),
+    temperature: (celsius) => formatTemperature(system, celsius),
   };
 }
 
 /**
- * A temperature in the chosen units without drift: to a tenth of a degree, with a whole number
- * shown whole (15 °C → "59°F", 7.5 °C → "45.5°F", never "45.49999°F" or a rounded "46°F").
+ * The tension window's advice and position words: in SI the core's own advice wording (so the
+ * workbench, report and CLI say the same), in imperial pounds force and feet and inches.
  */
+export function adviceWordingFor(system: UnitSystem): Wording {
+  if (system === 'si') return ADVICE_SI;
+  return { ...wordingFor(system), force: (newtons) => formatForceShort(system, newtons) };
+}
+
+/**
+ * Digits for a temperature in the chosen units without drift: a whole number shown whole, else
+ * one decimal (15 °C → 59 °F, 7.5 °C → 45.5 °F, never a rounded 46 °F).
+ */
+export function temperatureDigits(system: UnitSystem, celsius: number): number {
+  const shown = fromSi(celsius, 'temperature', system);
+  return Math.abs(shown - Math.round(shown)) < 1e-9 ? 0 : 1;
+}
+
+/** A temperature in the chosen units without drift ("59°F", "45.5°F"). */
 export function formatTemperature(system: UnitSystem, celsius: number): string {
-  const shown = Math.round(fromSi(celsius, 'temperature', system) * 10) / 10;
-  return `${Object.is(shown, -0) ? 0 : shown}${symbolOf('temperature', system)}`;
+  return formatQuantity(system, 'temperature', celsius, temperatureDigits(system, celsius));
 }
