@@ -188,3 +188,25 @@ describe('the tension window in the chosen units', () => {
     expect(show(-10, 'temperature', 'si')).toBe('-10\u00a0°C');
   });
 });
+
+describe('moving-load findings in the chosen units', () => {
+  // A 60 kg basket hauled across the demo span pulls the wire below the walkway's 3 m.
+  const hauled = open({
+    ...demo,
+    loads: [...demo.loads, { type: 'moving', from: 2, to: 20, mass: 60, label: 'Basket' }],
+  });
+  const results = solveProject(hauled);
+  const c = results.cases.find((r) => r.messages.some((m) => m.startsWith('Basket:')));
+
+  it('words the moving load’s clearance and position in feet and inches', () => {
+    if (!c) throw new Error('the basket fails no check');
+    expect(c.messages.join(' ')).toMatch(/Basket: .* with the load at [\d.]+ m/);
+    const imperial = caseMessages(hauled, results, c, 'imperial');
+    const basket = imperial.filter((m) => m.startsWith('Basket:'));
+    expect(basket.length).toBe(c.messages.filter((m) => m.startsWith('Basket:')).length);
+    for (const line of basket) {
+      expect(line).toMatch(/with the load at \d+\u00a0ft/);
+      expect(line).not.toMatch(/\d m\b|\d N\b/);
+    }
+  });
+});

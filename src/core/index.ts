@@ -54,6 +54,7 @@ export {
   PROJECT_MIGRATIONS,
   type ProjectDocument,
 } from './migrateProject.ts';
+export { movingLoadFailures } from './movingLoads.ts';
 export * from './project.ts';
 export { INTERNAL_ERROR_MESSAGE } from './resultGuard.ts';
 export { type SolveOptions, solveProject } from './solveProject.ts';

@@ -7,6 +7,7 @@
 import {
   type CaseResult,
   clearanceMessage,
+  movingLoadFailures,
   type Project,
   type ProjectResults,
   resolveWire,
@@ -40,6 +41,7 @@ function checkMessages(
     tension,
     clearanceMessage(c.clearance, project.limits.minClearance, w),
     ...c.zoneClearances.map((z) => zoneMessage(z, w)),
+    ...(c.movingLoads ?? []).flatMap((m) => movingLoadFailures(m, project, w)),
   ].filter((m): m is string => m !== null);
 }
 
