@@ -9,7 +9,15 @@
 import AxeBuilder from '@axe-core/playwright';
 import { expect, type Page, test } from '@playwright/test';
 import demo from '../examples/courtyard-lights.json' with { type: 'json' };
-import { type Project, solveProject, validateProject } from '../src/core/index.ts';
+import {
+  adviceWords,
+  type Project,
+  solveProject,
+  tensionWindowWithFacts,
+  validateProject,
+  windowPosition,
+} from '../src/core/index.ts';
+import { adviceWordingFor } from '../src/deliverables/displayUnits.ts';
 
 function demoProject(): Project {
   const checked = validateProject(demo);
@@ -101,6 +109,29 @@ test('imperial: the failing checks and the summary are in feet and inches, not m
   await expect(check).not.toContainText(/\d m\b/);
   await expect(summary(page)).toContainText('needs 14\u00a0ft\u00a09\u00a01/8\u00a0in');
   await expect(summary(page)).not.toContainText(/\d m\b|\d N\b|kN/);
+});
+
+test('imperial: the tension window says where the setting sits in feet and inches and pounds force', async ({
+  page,
+}) => {
+  test.slow(); // the design aids solve the window in the worker
+  await openDemo(page);
+  await page.getByRole('radio', { name: 'Imperial' }).check();
+  await expect(page.getByTestId('design-status')).toHaveText('Design aids up to date.', {
+    timeout: 90_000,
+  });
+  const project = demoProject();
+  const { window, adviceFacts } = tensionWindowWithFacts(project);
+  const H = solveProject(project).cases[0].horizontalTension;
+  const words = adviceWordingFor('imperial');
+  const position = windowPosition(project, window, H, words);
+  // 3 m / 0.3048 = 9.8425 ft = 9 ft 10 1/8 in to the nearest eighth (1 ft = 0.3048 m exactly).
+  expect(position).toContain('9\u00a0ft\u00a010\u00a01/8\u00a0in over Walkway');
+  await expect(page.getByTestId('window-position')).toContainText(position);
+  await expect(page.getByTestId('window-position')).not.toContainText(/\d m\b/);
+  const advice = page.getByRole('list', { name: 'Window advice' }).getByRole('listitem');
+  await expect(advice).toHaveText(adviceWords(project, adviceFacts, words));
+  await expect(advice.first()).toContainText('lbf');
 });
 
 test('an inclined span: the straight line between the fixings is drawn and the sag is marked below it', async ({
