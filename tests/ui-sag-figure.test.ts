@@ -135,5 +135,9 @@ describe('the sag mark sits where sag is measured', () => {
     const texts = (imperial as Partial<Annotation>[]).map((n) => String(n.text));
     expect(texts.find((t) => t.startsWith('Largest sag'))).toMatch(/\d+\u00a0in/);
     expect(texts.find((t) => t.startsWith('Lowest point'))).toMatch(/\d+\u00a0ft\u00a0\d+/);
+    // Legend: 3.5 m / 0.0254 = 137.795 in = 11 ft 5 3/4 in; 3.7 m = 145.669 in = 12 ft 1 5/8 in.
+    const names = buildSagFigure(project, results, 'imperial').data.map((t) => String(t.name));
+    expect(names).toContain('Minimum clearance 11\u00a0ft\u00a05\u00a03/4\u00a0in');
+    expect(names).toContain('Driveway: needs 12\u00a0ft\u00a01\u00a05/8\u00a0in');
   });
 });
