@@ -83,7 +83,9 @@ test('the demo opens with the core results in the table and the plot', async ({ 
   const results = solveProject(demoProject());
   await expectRowsMatch(page, results);
   await expectPlotMatches(page, results);
-  await expect(page.getByText(/^Lowest point .* above the ground in /)).toBeVisible();
+  await expect(page.getByTestId('summary')).toContainText(
+    `All ${results.cases.length} cases pass every check.`,
+  );
   await expect(page.getByRole('complementary', { name: 'Cautions' })).toContainText('licensed');
 });
 
@@ -183,7 +185,13 @@ test('switching to imperial shows feet and pound-force, and back to SI restores 
   await expect(caseRow(page, 'Installation').getByRole('cell').nth(0)).toHaveText(
     newtons.format(installation.horizontalTension / 4.4482216152605),
   );
-  await expect(resultsTable(page).getByRole('columnheader', { name: 'Sag (ft)' })).toBeVisible();
+  // Lengths in feet and inches to the nearest eighth, as installers read them (1 in = 0.0254 m).
+  await expect(resultsTable(page).getByRole('columnheader', { name: 'Sag' })).toBeVisible();
+  const eighths = Math.round((installation.sag / 0.0254) * 8);
+  const inches = `${Math.floor((eighths % 96) / 8)}${['', '⅛', '¼', '⅜', '½', '⅝', '¾', '⅞'][eighths % 8]}″`;
+  await expect(caseRow(page, 'Installation').getByRole('cell').nth(4)).toHaveText(
+    eighths >= 96 ? `${Math.floor(eighths / 96)}′\u00a0${inches}` : inches,
+  );
 
   await page.getByLabel('Studio wall bracket Position (ft)').fill('75');
   const project = demoProject();

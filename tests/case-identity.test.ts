@@ -12,7 +12,7 @@ import { type Project, solveProject, validateProject } from '../src/core/index.t
 import { profilesCsv } from '../src/deliverables/csv.ts';
 import { caseTable } from '../src/deliverables/reportContent.ts';
 import { buildSagFigure } from '../src/ui/plot/sagFigure.ts';
-import { summaryText } from '../src/ui/results/summaryText.ts';
+import { summaryLineText, summaryText } from '../src/ui/results/summaryText.ts';
 
 function checked(input: unknown): Project {
   const result = validateProject(input);
@@ -79,7 +79,7 @@ describe('case identities in the results', () => {
   });
 
   it('names the governing case in the summary by identity', () => {
-    const text = summaryText(results, 'si');
+    const text = summaryLineText(summaryText(renamed, results, 'si'));
     const tension = results.cases.find((c) => c.id === results.governingIds.tension);
     expect(text).toContain(`${Math.round((tension?.utilisation ?? 0) * 100)}`);
   });

@@ -8,6 +8,7 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import { validateProject } from '../src/core/index.ts';
 import { demoProject } from '../src/state/demoProject.ts';
 import { carryDependants } from '../src/state/dependants.ts';
+import { fieldName, issueLine } from '../src/state/fieldNames.ts';
 import * as edits from '../src/state/projectEdits.ts';
 import { undo, useProjectStore } from '../src/state/projectStore.ts';
 import { localiseRule, tryEdit } from '../src/ui/fields/useDocumentEdit.ts';
@@ -87,8 +88,29 @@ describe('tryEdit', () => {
     const before = useProjectStore.getState().project;
     // Shortening the span to 10 m leaves the 11 m lantern and the 21.5 m cable end outside it.
     const reason = tryEdit('supports[1].x', edits.patchSupport(1, { x: 10 }), 'length', 'si');
-    expect(reason).toMatch(/^this would make loads\[\d\]\.\w+ invalid: it must be at most 10$/);
+    expect(reason).toBe('must be beyond the end of Festoon cable with lamps at 21.5 m');
     expect(useProjectStore.getState().project).toBe(before);
+  });
+
+  it('names the other field as the workbench shows it, in feet and inches for imperial', () => {
+    const { tryEdit } = fresh();
+    const reason = tryEdit('supports[1].x', edits.patchSupport(1, { x: 10 }), 'length', 'imperial');
+    // 21.5 m / 0.0254 = 846.457 in = 70 ft 6 1/2 in to the nearest eighth (846.5 in).
+    expect(reason).toBe(
+      'must be beyond the end of Festoon cable with lamps at 70\u00a0ft\u00a06\u00a01/2\u00a0in',
+    );
+    expect(reason).not.toMatch(/loads\[/);
+  });
+
+  it('words a refusal elsewhere without the internal path, the path kept in the details line', () => {
+    const project = useProjectStore.getState().project;
+    expect(fieldName(project, 'loads[0].to')).toBe('the end of Festoon cable with lamps');
+    expect(fieldName(project, 'supports[1].x')).toBe('Studio wall bracket position');
+    expect(fieldName(project, 'cases[0].windSpeed')).toBe('Hot summer wind speed');
+    expect(fieldName(project, 'limits.minClearance')).toBe('Minimum clearance above ground');
+    expect(issueLine(project, { path: 'loads[0].to', message: 'must be at most 10' }, 'si')).toBe(
+      'The end of Festoon cable with lamps: must be at most 10 m (loads[0].to)',
+    );
   });
 
   it('states the support-order rule at the field being typed', () => {

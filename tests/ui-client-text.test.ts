@@ -32,7 +32,9 @@ describe('one rule for forces', () => {
     expect(largest.maxTension).toBeGreaterThan(1000);
     const expected = `${(largest.maxTension / 1000).toFixed(2)} kN`;
     expect(summaryLine(project, results, 'si')).toContain(`largest tension ${expected}`);
-    expect(summaryText(results, 'si')).toContain(showForceShort(largest.maxTension, 'si'));
+    expect(summaryText(project, results, 'si').detail).toContain(
+      showForceShort(largest.maxTension, 'si'),
+    );
     expect(showForceShort(largest.maxTension, 'si').replace('\u00a0', ' ')).toBe(expected);
     const numbers = keyNumbers(project, results, 'si');
     expect(numbers.find((n) => n.label === 'Largest tension')?.value).toBe(expected);

@@ -23,17 +23,28 @@ function sketchOf(project: Project) {
 const base = checked(demo);
 const drawn = sketchOf(base);
 // Axis ranges as Plotly's autorange would give them: the data's extent padded a little.
-const range = (axis: 'x' | 'y') => {
-  const values = drawn.figure.data.flatMap(
+const rangeOf = (figure: typeof drawn.figure, axis: 'x' | 'y') => {
+  const values = figure.data.flatMap(
     (t) => ((t as Record<string, unknown>)[axis] ?? []) as number[],
   );
   const [low, high] = [Math.min(...values), Math.max(...values)];
   return [low - 0.05 * (high - low), high + 0.05 * (high - low)];
 };
+const range = (axis: 'x' | 'y') => rangeOf(drawn.figure, axis);
 const ranges = { x: range('x'), y: range('y') };
+// The demo's span is level; a fixing dragged up makes it inclined, which adds the straight line
+// between the fixings (a trace more: a full redraw, once). The drags below start on a span that
+// is already inclined: the near fixing 0.3 m lower.
+const inclinedBase = checked(demo);
+inclinedBase.supports[0].z -= 0.3;
+const drawnInclined = sketchOf(inclinedBase);
+const rangesInclined = {
+  x: rangeOf(drawnInclined.figure, 'x'),
+  y: rangeOf(drawnInclined.figure, 'y'),
+};
 
 describe('which edits can be sketched', () => {
-  it('sketches every line (wires, parabolas, clearance line), outline and marker when the installation temperature changes', () => {
+  it('sketches every line (wires, parabolas, clearance line, sag mark), outline and marker when the installation temperature changes', () => {
     const warmer = checked(demo);
     warmer.installation.temperature += 3;
     const lines = sketchTraces(drawn, sketchOf(warmer), ranges);
@@ -41,9 +52,11 @@ describe('which edits can be sketched', () => {
     const kind = (name: string) =>
       lines?.find((t) => drawn.figure.data[t.index].name === name)?.kind;
     const cases = 1 + demo.cases.length;
-    // Every case's wire and parabola, the clearance line, the ground, the zone and the fixings.
-    expect(lines).toHaveLength(2 * cases + 1 + 1 + demo.limits.zones.length + 1);
+    // Every case's wire and parabola, the clearance line, the sag mark, the ground, the zone and
+    // the fixings.
+    expect(lines).toHaveLength(2 * cases + 2 + 1 + demo.limits.zones.length + 1);
     expect(kind('Installation')).toBe('line');
+    expect(names).toContain('Largest sag, measured here');
     expect(names.filter((n) => n.startsWith('Minimum clearance'))).toHaveLength(1);
     expect(kind('Ground')).toBe('fill');
     expect(kind('Supports')).toBe('markers');
@@ -51,11 +64,11 @@ describe('which edits can be sketched', () => {
   });
 
   it('sketches a fixing dragged along and up (its marker moves with the wires)', () => {
-    const moved = checked(demo);
+    const moved = structuredClone(inclinedBase);
     moved.supports[1].x -= 0.4;
     moved.supports[1].z += 0.1;
     const next = sketchOf(moved);
-    const lines = sketchTraces(drawn, next, ranges);
+    const lines = sketchTraces(drawnInclined, next, rangesInclined);
     const supports = lines?.find((t) => t.kind === 'markers');
     expect(supports && (next.figure.data[supports.index] as { x: number[] }).x).toEqual([0, 21.6]);
     expect(supports && (next.figure.data[supports.index] as { y: number[] }).y[1]).toBeCloseTo(
@@ -71,23 +84,29 @@ describe('which edits can be sketched', () => {
   });
 
   it('sketches a fixing dragged past the axes while the drag holds them at the range on screen', () => {
-    const raised = checked(demo);
+    const raised = structuredClone(inclinedBase);
     raised.supports[1].z += 0.5;
     const next = sketchOf(raised);
     const held = (r: number[]) => ({ range: r as [number, number], autorange: false });
     const layout = {
       ...next.figure.layout,
-      xaxis: { ...next.figure.layout.xaxis, ...held(ranges.x) },
-      yaxis: { ...next.figure.layout.yaxis, ...held(ranges.y) },
+      xaxis: { ...next.figure.layout.xaxis, ...held(rangesInclined.x) },
+      yaxis: { ...next.figure.layout.yaxis, ...held(rangesInclined.y) },
     };
     const holding = {
       figure: { ...next.figure, layout },
       signature: figureSignature({ ...next.figure, layout }),
     };
-    expect(sketchTraces(drawn, holding, ranges)).not.toBeNull();
+    expect(sketchTraces(drawnInclined, holding, rangesInclined)).not.toBeNull();
     // Held at another range than the one on screen: only a full redraw shows it.
-    const shifted = { x: ranges.x, y: [ranges.y[0] - 1, ranges.y[1]] };
-    expect(sketchTraces(drawn, holding, shifted)).toBeNull();
+    const shifted = { x: rangesInclined.x, y: [rangesInclined.y[0] - 1, rangesInclined.y[1]] };
+    expect(sketchTraces(drawnInclined, holding, shifted)).toBeNull();
+  });
+
+  it('needs the full redraw when a level span becomes inclined (the straight line between the fixings appears)', () => {
+    const tilted = checked(demo);
+    tilted.supports[1].z -= 0.05;
+    expect(sketchTraces(drawn, sketchOf(tilted), ranges)).toBeNull();
   });
 
   it('needs the full redraw when a fixing is added (a marker more than drawn)', () => {

@@ -87,3 +87,57 @@ describe('sag and lowest-point labels do not cross', () => {
     });
   }
 });
+
+describe('the sag mark sits where sag is measured', () => {
+  // An inclined span under its own weight and a uniform cable only: for the parabola
+  // z = chord(x) − w x (L − x) / (2H) the drop below the chord is largest at mid-span whatever
+  // the incline (parabolic cable theory, Irvine, Cable Structures, 1981, §1.2), while the lowest
+  // point moves toward the lower fixing. The catenary differs from the parabola by far less than
+  // a profile step at this sag-to-span ratio.
+  const project = checked(inclined);
+  project.loads = [project.loads[0]];
+  const results = solveProject(project);
+  const figure = buildSagFigure(project, results, 'si');
+  const [a, b] = project.supports;
+  const notes = (figure.layout.annotations ?? []) as Partial<Annotation>[];
+  const sag = notes.find((n) => String(n.text).startsWith('Largest sag'));
+  const sagging = results.cases.reduce((p, q) => (q.sag > p.sag ? q : p));
+
+  it('puts the mark at mid-span on the inclined span, metres from the lowest point', () => {
+    const mid = (a.x + b.x) / 2;
+    const step = (b.x - a.x) / 100;
+    expect(Math.abs(Number(sag?.x) - mid)).toBeLessThanOrEqual(step);
+    expect(Math.abs(Number(sag?.x) - sagging.lowestPoint.x)).toBeGreaterThan(1);
+    expect(String(sag?.text)).toContain('below the line between fixings');
+  });
+
+  it('draws the straight line between the fixings and the sag from it down to the wire', () => {
+    const chord = traceNamed(figure.data, 'Straight line between fixings');
+    expect(chord?.x).toEqual([a.x, b.x]);
+    expect(chord?.y).toEqual([a.z, b.z]);
+    const mark = traceNamed(figure.data, 'Largest sag, measured here');
+    const x = Number(sag?.x);
+    expect(mark?.x).toEqual([x, x]);
+    const top = a.z + ((b.z - a.z) * (x - a.x)) / (b.x - a.x);
+    expect(mark?.y?.[0]).toBeCloseTo(top, 12);
+    // The drawn drop is the core's largest sag to within the profile's spacing.
+    expect((mark?.y?.[0] ?? 0) - (mark?.y?.[1] ?? 0)).toBeCloseTo(sagging.sag, 3);
+  });
+
+  it('draws no chord on a level span', () => {
+    const level = checked(demo);
+    const drawn = buildSagFigure(level, solveProject(level), 'si');
+    expect(traceNamed(drawn.data, 'Straight line between fixings')).toBeUndefined();
+  });
+
+  it('writes the sag and the lowest point in feet and inches for imperial', () => {
+    const imperial = buildSagFigure(project, results, 'imperial').layout.annotations ?? [];
+    const texts = (imperial as Partial<Annotation>[]).map((n) => String(n.text));
+    expect(texts.find((t) => t.startsWith('Largest sag'))).toMatch(/\d+\u00a0in/);
+    expect(texts.find((t) => t.startsWith('Lowest point'))).toMatch(/\d+\u00a0ft\u00a0\d+/);
+    // Legend: 3.5 m / 0.0254 = 137.795 in = 11 ft 5 3/4 in; 3.7 m = 145.669 in = 12 ft 1 5/8 in.
+    const names = buildSagFigure(project, results, 'imperial').data.map((t) => String(t.name));
+    expect(names).toContain('Minimum clearance 11\u00a0ft\u00a05\u00a03/4\u00a0in');
+    expect(names).toContain('Driveway: needs 12\u00a0ft\u00a01\u00a05/8\u00a0in');
+  });
+});

@@ -4,6 +4,7 @@
  * swing, support reactions (the wire's pull on each support), and a sampled profile.
  */
 
+import { clearanceMessage, tensionMessage, zoneMessage } from './checkMessages.ts';
 import type { HungDrops } from './loads.ts';
 import type {
   Attachment,
@@ -269,31 +270,16 @@ export function checkCase(input: CheckInput): CaseResult {
   const clearance = clearanceOver(spans, input.ground, -Infinity, Infinity, input.drops).value;
   const swing = Math.max(...spans.map((s) => Math.abs(largestSwing(s.span, s.tensionN).value)));
   const messages = [...input.messages];
-  const allowedN = capacityN / input.safetyFactor;
-  const reduced = efficiency < 1;
-  const percent = `${fmt(efficiency * 100, 0)} %`;
-  if (maxTension > input.breakingLoadN) {
-    messages.push(
-      `Largest tension ${fmt(maxTension, 0)} N exceeds the breaking load ${fmt(input.breakingLoadN, 0)} N: the wire would fail.`,
-    );
-  } else if (maxTension > capacityN) {
-    messages.push(
-      `Largest tension ${fmt(maxTension, 0)} N exceeds what the weaker end fitting holds, ${fmt(capacityN, 0)} N (${percent} of the breaking load): the termination would fail.`,
-    );
-  } else if (utilisation > 1) {
-    const basis = reduced
-      ? `breaking load × end fitting ${percent} / safety factor ${input.safetyFactor}`
-      : `breaking load / safety factor ${input.safetyFactor}`;
-    messages.push(
-      `Largest tension ${fmt(maxTension, 0)} N exceeds the working limit ${fmt(allowedN, 0)} N (${basis}).`,
-    );
-  }
+  const tensionWords = tensionMessage({
+    maxTension,
+    breakingLoadN: input.breakingLoadN,
+    efficiency,
+    safetyFactor: input.safetyFactor,
+  });
+  if (tensionWords) messages.push(tensionWords);
   if (input.theory === 'parabolic') messages.push(...parabolicNotes(spans, spanResults));
-  if (clearance < input.minClearance) {
-    messages.push(
-      `Clearance ${fmt(clearance)} m is below the required ${fmt(input.minClearance)} m.`,
-    );
-  }
+  const clearanceWords = clearanceMessage(clearance, input.minClearance);
+  if (clearanceWords) messages.push(clearanceWords);
   const strain = maxTension / input.axialStiffnessN;
   const beyondElastic = strain > input.strainLimit.strain;
   if (beyondElastic)
@@ -304,8 +290,8 @@ export function checkCase(input: CheckInput): CaseResult {
     const c = clearanceOver(spans, input.ground, zone.from, zone.to, input.drops).value;
     const label = zone.label ?? `Zone ${i + 1}`;
     const ok = c >= zone.height;
-    if (!ok)
-      messages.push(`${label}: clearance ${fmt(c)} m is below the required ${fmt(zone.height)} m.`);
+    const zoneWords = zoneMessage({ label, clearance: c, required: zone.height });
+    if (zoneWords) messages.push(zoneWords);
     return { label, clearance: c, required: zone.height, ok };
   });
   const ok =

@@ -16,9 +16,27 @@ export {
   cautionsFor,
   MOVING_LOAD_CAUTION,
 } from './cautions.ts';
+export {
+  clearanceMessage,
+  SI_WORDING,
+  type TensionFacts,
+  tensionMessage,
+  type Wording,
+  zoneMessage,
+} from './checkMessages.ts';
 export { type DaySetting, type SagPosition, settingAt } from './design/daySetting.ts';
-export { type TensionWindow, tensionWindow, type WindowEnd } from './design/tensionWindow.ts';
-export { windowTensionSpans, windowTensionWords } from './design/windowAdvice.ts';
+export {
+  type TensionWindow,
+  tensionWindow,
+  tensionWindowWithFacts,
+  type WindowEnd,
+} from './design/tensionWindow.ts';
+export {
+  type AdviceFact,
+  adviceWords,
+  windowTensionSpans,
+  windowTensionWords,
+} from './design/windowAdvice.ts';
 export { type WindowCurve, windowCurve, windowPosition } from './design/windowPosition.ts';
 export {
   chooseWires,
@@ -41,6 +59,7 @@ export {
   PROJECT_MIGRATIONS,
   type ProjectDocument,
 } from './migrateProject.ts';
+export { movingLoadFailures } from './movingLoads.ts';
 export * from './project.ts';
 export { INTERNAL_ERROR_MESSAGE } from './resultGuard.ts';
 export { type SolveOptions, solveProject } from './solveProject.ts';

@@ -4,7 +4,9 @@
  * tension T_max(x) and the lowest clearance c(x) over x. Method: a scan at 24 equal steps, then
  * Brent's bounded local minimiser on the two steps either side of the worst scanned position.
  */
+
 import { clearanceOver, largestStateTension } from './caseChecks.ts';
+import { SI_WORDING, type Wording } from './checkMessages.ts';
 import { hungDrops, loadStateOfCase } from './loads.ts';
 import { localMinimum } from './localMinimum.ts';
 import type { CaseResult, MovingLoad, MovingLoadResult, PointLoad, Project } from './project.ts';
@@ -163,21 +165,26 @@ function breakingLoadOf(ctx: MovingContext): number {
   return resolveWire(ctx.project.wire)?.breakingLoad ?? Number.NaN;
 }
 
-function failures(m: MovingLoadResult, project: Project): string[] {
-  const at = (x: number) => `with the load at ${x.toFixed(2)} m`;
+/** A moving load's failed checks in words (SI for the core's messages; any units via `w`). */
+export function movingLoadFailures(
+  m: MovingLoadResult,
+  project: Project,
+  w: Wording = SI_WORDING,
+): string[] {
+  const at = (x: number) => `with the load at ${w.length(x)}`;
   const out: string[] = [];
   if (m.utilisation > 1)
     out.push(
-      `${m.label}: largest tension ${m.maxTension.toFixed(0)} N ${at(m.maxTensionAt)} exceeds the working limit.`,
+      `${m.label}: largest tension ${w.force(m.maxTension)} ${at(m.maxTensionAt)} exceeds the working limit.`,
     );
   if (m.clearance < project.limits.minClearance)
     out.push(
-      `${m.label}: clearance ${m.clearance.toFixed(2)} m ${at(m.clearanceAt)} is below the required ${project.limits.minClearance.toFixed(2)} m.`,
+      `${m.label}: clearance ${w.length(m.clearance)} ${at(m.clearanceAt)} is below the required ${w.length(project.limits.minClearance)}.`,
     );
   for (const z of m.zoneClearances)
     if (!z.ok)
       out.push(
-        `${m.label}: ${z.label} clearance ${z.clearance.toFixed(2)} m ${at(z.at)} is below the required ${z.required.toFixed(2)} m.`,
+        `${m.label}: ${z.label} clearance ${w.length(z.clearance)} ${at(z.at)} is below the required ${w.length(z.required)}.`,
       );
   if (out.length === 0 && !m.ok) out.push(`${m.label}: some positions could not be solved.`);
   return out;
@@ -209,7 +216,7 @@ export function addMovingLoads(
     for (const m of r.movingLoads) {
       if (m.ok) continue;
       r.ok = false;
-      r.messages.push(...failures(m, project));
+      r.messages.push(...movingLoadFailures(m, project));
     }
   });
 }

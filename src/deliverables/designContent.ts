@@ -4,23 +4,27 @@
  * the day with where to measure the sag and whether the pulse and pluck checks hold.
  */
 import {
+  type AdviceFact,
+  adviceWords,
   type DaySetting,
   type Project,
   type ProjectResults,
   settingAt,
   type TensionWindow,
-  tensionWindow,
+  tensionWindowWithFacts,
   type WindowEnd,
   windowPosition,
   windowTensionWords,
 } from '../core/index.ts';
-import { formatQuantity as fq, type UnitSystem } from './displayUnits.ts';
+import { adviceWordingFor, formatQuantity as fq, type UnitSystem } from './displayUnits.ts';
 import { fixingName, spanName, temperatureText } from './setUpContent.ts';
 
 export const DESIGN_HEADING = "Tension window and today's setting";
 
 export interface DesignReport {
   window: TensionWindow;
+  /** The window's advice as numbers, worded in the report's units. */
+  adviceFacts: AdviceFact[];
   /** Installation horizontal tension of the design, N. */
   currentTension: number;
   setting: DaySetting | null;
@@ -33,8 +37,10 @@ export function designReport(
   temperatureNow: number | null,
 ): DesignReport {
   const refinement = results.mesh.refinement;
+  const { window, adviceFacts } = tensionWindowWithFacts(project, refinement);
   return {
-    window: tensionWindow(project, refinement),
+    window,
+    adviceFacts,
     currentTension: results.cases[0].horizontalTension,
     setting: temperatureNow === null ? null : settingAt(project, temperatureNow, refinement),
   };
@@ -85,9 +91,9 @@ export function windowParagraphs(
       `with the installation loads for which every case passes every check${moving}` +
       (window.empty ? ': none. ' : '. ') +
       `${endLine(project, window.low, 'Lowest', units)} ${endLine(project, window.high, 'Highest', units)}`,
-    `This design, ${fq(units, 'force', d.currentTension)}: ${windowPosition(project, window, d.currentTension)}`,
+    `This design, ${fq(units, 'force', d.currentTension)}: ${windowPosition(project, window, d.currentTension, adviceWordingFor(units))}`,
   ];
-  if (window.empty) lines.push(...window.advice);
+  if (window.empty) lines.push(...adviceWords(project, d.adviceFacts, adviceWordingFor(units)));
   return lines;
 }
 

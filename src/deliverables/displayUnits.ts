@@ -2,6 +2,7 @@
  * Number formatting for exports over the app's display units (src/core/units.ts): the value in
  * the chosen system with the digits a person expects for that quantity, and its symbol.
  */
+import { ADVICE_SI, type Wording } from '../core/checkMessages.ts';
 import { fromSi, type Quantity, unitSymbol as symbolOf, type UnitSystem } from '../core/units.ts';
 
 export type { Quantity, UnitSystem };
@@ -82,4 +83,41 @@ export function formatLength(system: UnitSystem, metres: number, compact = false
   const fraction = rest ? `\u00a0${rest / divisor}/${8 / divisor}` : '';
   const inchText = `${inches}${fraction}\u00a0in`;
   return feet === 0 ? `${sign}${inchText}` : `${sign}${feet}\u00a0ft\u00a0${inchText}`;
+}
+
+/**
+ * How a message words numbers in the chosen units: whole newtons or pounds force; lengths as the
+ * report gives them (metres to the millimetre, or feet and inches); masses to 0.1 kg or lb;
+ * temperatures without drift (formatTemperature).
+ */
+export function wordingFor(system: UnitSystem): Wording {
+  return {
+    force: (newtons) => formatQuantity(system, 'force', newtons),
+    length: (metres) => formatLength(system, metres),
+    mass: (kg) => formatQuantity(system, 'mass', kg, 1),
+    temperature: (celsius) => formatTemperature(system, celsius),
+  };
+}
+
+/**
+ * The tension window's advice and position words: in SI the core's own advice wording (so the
+ * workbench, report and CLI say the same), in imperial pounds force and feet and inches.
+ */
+export function adviceWordingFor(system: UnitSystem): Wording {
+  if (system === 'si') return ADVICE_SI;
+  return { ...wordingFor(system), force: (newtons) => formatForceShort(system, newtons) };
+}
+
+/**
+ * Digits for a temperature in the chosen units without drift: a whole number shown whole, else
+ * one decimal (15 °C → 59 °F, 7.5 °C → 45.5 °F, never a rounded 46 °F).
+ */
+export function temperatureDigits(system: UnitSystem, celsius: number): number {
+  const shown = fromSi(celsius, 'temperature', system);
+  return Math.abs(shown - Math.round(shown)) < 1e-9 ? 0 : 1;
+}
+
+/** A temperature in the chosen units without drift ("59°F", "45.5°F"). */
+export function formatTemperature(system: UnitSystem, celsius: number): string {
+  return formatQuantity(system, 'temperature', celsius, temperatureDigits(system, celsius));
 }

@@ -136,7 +136,8 @@ export function caseFailures(project: Project, c: CaseResult, units: UnitSystem)
     );
   }
   failures.push(...movingFailures(project, c, units));
-  // A case failed by a check not worded above (e.g. the wire's elastic range): its own messages.
+  // A case failed by a check not worded above (the wire's elastic range, a case not solved):
+  // its own messages, which carry no length or force to convert.
   if (failures.length === 0 && !c.ok) failures.push(...c.messages);
   return failures;
 }

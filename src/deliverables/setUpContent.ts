@@ -4,7 +4,7 @@
  * check, and the report's table. Values are SI in the results, shown in the chosen units.
  */
 import type { Project, ProjectResults, SetUpRow } from '../core/index.ts';
-import { formatQuantity as fq, toDisplay, type UnitSystem } from './displayUnits.ts';
+import { formatTemperature, formatQuantity as fq, type UnitSystem } from './displayUnits.ts';
 import type { Table } from './reportContent.ts';
 
 export const SET_UP_HEADING = 'Setting the wire on the day';
@@ -21,8 +21,7 @@ export function spanName(project: Project, spanIndex: number): string {
 
 /** Whole degrees unless the temperature has a fraction in the units shown (59.9°F). */
 export function temperatureText(units: UnitSystem, celsius: number): string {
-  const shown = toDisplay(units, 'temperature', celsius);
-  return fq(units, 'temperature', celsius, Math.abs(shown - Math.round(shown)) < 1e-9 ? 0 : 1);
+  return formatTemperature(units, celsius);
 }
 
 export function isInstallationRow(project: Project, row: SetUpRow): boolean {

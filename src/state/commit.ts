@@ -7,6 +7,7 @@
 import { type Project, type ValidationIssue, validateProject } from '../core/index.ts';
 import { fromSi, type UnitSystem, unitSymbol } from '../core/units.ts';
 import { carryDependants } from './dependants.ts';
+import { issueLine } from './fieldNames.ts';
 import { type ProjectStore, useProjectStore } from './projectStore.ts';
 import { type SessionStore, useSessionStore } from './sessionStore.ts';
 import { useUiStore } from './uiStore.ts';
@@ -98,7 +99,7 @@ export function commit(
 
 /**
  * Commit a button's edit (add, remove, duplicate). A refusal is told in the edit notice, in the
- * words of the rule, with the field path kept as a detail.
+ * words of the rule, naming the field as the workbench shows it, with the field path kept last.
  */
 export function commitAction(
   edit: Edit,
@@ -111,7 +112,9 @@ export function commitAction(
       editNotice: {
         kind: 'refused',
         text: `“${options.what ?? 'That change'}” was refused; your project is unchanged:`,
-        details: outcome.issues.map((i) => (i.path ? `${i.path}: ${i.message}` : i.message)),
+        details: outcome.issues.map((i) =>
+          issueLine(bench.store.getState().project, i, bench.unitSystem()),
+        ),
         undoable: false,
       },
     });

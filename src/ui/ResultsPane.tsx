@@ -15,15 +15,17 @@ import { ReactionsTable } from './results/ReactionsTable.tsx';
 import { ResultsTable } from './results/ResultsTable.tsx';
 import { SetUpChart } from './results/SetUpChart.tsx';
 import { SolverDetails } from './results/SolverDetails.tsx';
+import { Summary } from './results/Summary.tsx';
 import { summaryText } from './results/summaryText.ts';
 import { SagPlot } from './SagPlot.tsx';
-import { errorStatusText } from './statusText.ts';
+import { errorStatusText, upToDateStatus } from './statusText.ts';
 
 function Status() {
   const stale = useResultsStore((s) => s.stale);
   const error = useResultsStore((s) => s.error);
   const errorCause = useResultsStore((s) => s.errorCause);
-  const hasResults = useResultsStore((s) => s.results !== null);
+  const cases = useResultsStore((s) => s.results?.cases);
+  const hasResults = cases !== undefined;
   const invalid = Object.values(useDraftStore((s) => s.invalid));
   if (invalid.length > 0)
     return (
@@ -45,9 +47,16 @@ function Status() {
         {hasResults ? 'Solving the change…' : 'Solving…'}
       </p>
     );
+  if (!cases)
+    return (
+      <p className="status status-busy" role="status">
+        Solving…
+      </p>
+    );
+  const done = upToDateStatus(cases);
   return (
-    <p className="status status-ok" role="status">
-      Up to date.
+    <p className={`status status-${done.tone}`} role="status">
+      {done.text}
     </p>
   );
 }
@@ -65,11 +74,9 @@ export function ResultsPane() {
       <Status />
       {results && resultsProject ? (
         <div className={outOfDate ? 'out-of-date' : undefined}>
-          <p className="summary" data-testid="summary">
-            {summaryText(results, units)}
-          </p>
+          <Summary summary={summaryText(resultsProject, results, units)} />
           <SagPlot project={resultsProject} results={results} />
-          <ResultsTable results={results} />
+          <ResultsTable project={resultsProject} results={results} />
           <MovingLoadsTable results={results} />
           <SetUpChart project={resultsProject} results={results} />
           <AsBuiltPanel project={resultsProject} results={results} />

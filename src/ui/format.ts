@@ -4,7 +4,7 @@
  */
 
 import { fromSi, type Quantity, type UnitSystem, unitSymbol } from '../core/units.ts';
-import { formatForceShort } from '../deliverables/displayUnits.ts';
+import { formatForceShort, temperatureDigits } from '../deliverables/displayUnits.ts';
 
 // SI values are shown as typed (8 digits); converted imperial values are rounded to 6 digits so
 // a 22 m span reads 72.1785 ft, not 72.178478. The document keeps the exact SI value.
@@ -56,7 +56,8 @@ export function num(si: number, quantity: Quantity, units: UnitSystem, digits?: 
 /** An SI value shown with its unit, kept on one line, e.g. "3.750 m", "442 N". */
 export function show(si: number, quantity: Quantity, units: UnitSystem, digits?: number): string {
   const symbol = unitSymbol(quantity, units);
-  const text = num(si, quantity, units, digits);
+  const places = digits ?? (quantity === 'temperature' ? temperatureDigits(units, si) : undefined);
+  const text = num(si, quantity, units, places);
   return symbol ? `${text}\u00a0${symbol}` : text;
 }
 

@@ -14,3 +14,19 @@ export function errorStatusText(error: string, cause: 'design' | 'solver' | null
     'last design that could.'
   );
 }
+
+/**
+ * The status when the results shown are for the current design: plain "Up to date." when every
+ * case passes; over a failing design it says so, so a calm all-clear never sits over a failure.
+ */
+export function upToDateStatus(cases: readonly { ok: boolean }[]): {
+  text: string;
+  tone: 'ok' | 'fail';
+} {
+  const failing = cases.filter((c) => !c.ok).length;
+  if (failing === 0) return { text: 'Up to date.', tone: 'ok' };
+  return {
+    text: `Up to date: this design fails (${failing} of ${cases.length} ${cases.length === 1 ? 'case' : 'cases'}, see the summary).`,
+    tone: 'fail',
+  };
+}

@@ -5,13 +5,14 @@
  * document, so a new temperature only costs the setting.
  */
 import {
+  type AdviceFact,
   chooseWires,
   type DaySetting,
   type Project,
   type ProjectResults,
   settingAt,
   type TensionWindow,
-  tensionWindow,
+  tensionWindowWithFacts,
   type WindowCurve,
   type WireChoice,
   windowCurve,
@@ -28,6 +29,8 @@ export interface DesignQuestion {
 
 export interface DesignAnswers {
   window: TensionWindow;
+  /** The window's advice as numbers, for wording in the chosen units (adviceWords). */
+  adviceFacts: AdviceFact[];
   curve: WindowCurve;
   /** The installation horizontal tension of the current design (N) and where it sits. */
   currentTension: number;
@@ -61,11 +64,12 @@ function windowAndChoices(project: Project, results: ProjectResults, choose: boo
   const currentTension = results.cases[0]?.horizontalTension ?? Number.NaN;
   const start = performance.now();
   const refinement = results.mesh.refinement;
-  const window = tensionWindow(project, refinement);
+  const { window, adviceFacts } = tensionWindowWithFacts(project, refinement);
   const curve = windowCurve(project, window, currentTension, 40, refinement);
   const windowMs = performance.now() - start;
   let answers: Kept = {
     window,
+    adviceFacts,
     curve,
     currentTension,
     position: windowPosition(project, window, currentTension),

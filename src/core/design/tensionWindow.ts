@@ -6,7 +6,7 @@
 import type { Project } from '../project.ts';
 import { buildProjectModel } from '../projectModel.ts';
 import { solveProject } from '../solveProject.ts';
-import { windowAdvice } from './windowAdvice.ts';
+import { type AdviceFact, adviceWords, windowAdviceFacts } from './windowAdvice.ts';
 import { findWindowEnds, type WindowEnd } from './windowEnds.ts';
 
 export type { WindowEnd } from './windowEnds.ts';
@@ -31,12 +31,27 @@ export function tensionWindow(
   project: Project,
   refinement = meshRefinement(project),
 ): TensionWindow {
+  return tensionWindowWithFacts(project, refinement).window;
+}
+
+/**
+ * The window and its advice as numbers (windowAdvice.ts), so a reader can word the advice in
+ * its own units; `window.advice` is the same advice in SI words.
+ */
+export function tensionWindowWithFacts(
+  project: Project,
+  refinement = meshRefinement(project),
+): { window: TensionWindow; adviceFacts: AdviceFact[] } {
   const model = buildProjectModel(project, refinement);
   const ends = findWindowEnds(model);
+  const adviceFacts = windowAdviceFacts(model, ends, refinement);
   return {
-    low: ends.low,
-    high: ends.high,
-    empty: ends.empty,
-    advice: windowAdvice(model, ends, refinement),
+    window: {
+      low: ends.low,
+      high: ends.high,
+      empty: ends.empty,
+      advice: adviceWords(project, adviceFacts),
+    },
+    adviceFacts,
   };
 }

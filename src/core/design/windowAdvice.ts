@@ -4,7 +4,10 @@
  * shape below the chords does not change), so d = −m(H_high), m the worst clearance margin at the
  * highest tension allowed. A wire of the same weight and stretch opens it with a breaking load of
  * u(H_low) × B. Lighter hung loads (all scaled by k): the root in k of m(H_high(k)) = 0.
+ * The numbers are found once (windowAdviceFacts) and worded in any units (adviceWords): the CLI
+ * and the contract's `advice` in SI, the workbench in the chosen display units.
  */
+import { ADVICE_SI, type Wording } from '../checkMessages.ts';
 import type { Load, Project } from '../project.ts';
 import { buildProjectModel, type ProjectModel } from '../projectModel.ts';
 import { brent } from '../rootFind.ts';
@@ -12,15 +15,12 @@ import { solveInstallation } from '../states.ts';
 import { findWindowEnds, type WindowEnds } from './windowEnds.ts';
 import { CLEARANCE_CHECK, type WindowResponse } from './windowResponse.ts';
 
-const newtons = (n: number) => (n >= 10_000 ? `${(n / 1000).toFixed(1)} kN` : `${n.toFixed(0)} N`);
-const metres = (m: number) => `${m.toFixed(2)} m`;
-
 /** "4.50 m over Road", "2.40 m over the ground", "the tension limit": a check in words. */
-export function checkWords(project: Project, check: string): string {
-  if (check === CLEARANCE_CHECK) return `${metres(project.limits.minClearance)} over the ground`;
+export function checkWords(project: Project, check: string, w: Wording = ADVICE_SI): string {
+  if (check === CLEARANCE_CHECK) return `${w.length(project.limits.minClearance)} over the ground`;
   if (check === 'tension') return 'the tension limit';
   const zone = (project.limits.zones ?? []).find((z, i) => (z.label ?? `Zone ${i + 1}`) === check);
-  return zone ? `${metres(zone.height)} over ${check}` : check;
+  return zone ? `${w.length(zone.height)} over ${check}` : check;
 }
 
 /**
@@ -80,100 +80,177 @@ function marginWithLoadsScaled(project: Project, k: number, refinement: number):
   return ends.atHigh.clearanceMargin;
 }
 
-function lighterLoadsAdvice(model: ProjectModel, refinement: number): string | null {
+/** One piece of advice as numbers, worded by adviceWords. */
+export type AdviceFact =
+  | { kind: 'range'; fromN: number | null; toN: number | null; temperature: number; loads: string }
+  | { kind: 'lowEnd'; case: string; check: string }
+  | { kind: 'noLowEnd' }
+  | { kind: 'tensionSpans'; words: string }
+  | { kind: 'movingLoadsIncluded' }
+  | { kind: 'highEnd'; case: string; safetyFactor: number }
+  | { kind: 'tooStrongAtFloor'; case: string; utilisation: number }
+  | { kind: 'needsBreaking'; neededN: number }
+  | {
+      kind: 'overlap';
+      lowCheck: string;
+      lowCase: string;
+      lowN: number;
+      highCase: string;
+      highN: number;
+    }
+  | { kind: 'neverClears' }
+  | {
+      kind: 'raiseFixings';
+      raiseM: number;
+      shortM: number;
+      highN: number;
+      case: string;
+      check: string;
+    }
+  | { kind: 'strongerWire'; neededN: number; breakingN: number }
+  | { kind: 'lighterLoadsCannot' }
+  | { kind: 'lighterLoads'; mostKg: number; nowKg: number; lighterPercent: number };
+
+function lighterLoadsFact(model: ProjectModel, refinement: number): AdviceFact | null {
   const project = model.project;
   const mass = hungMass(project, model.env.gravity);
   if (!(mass > 0)) return null;
   const bare = marginWithLoadsScaled(project, 0, refinement);
-  if (bare < 0)
-    return 'Lighter hung loads alone do not open it: even with nothing hung on the wire some case fails.';
+  if (bare < 0) return { kind: 'lighterLoadsCannot' };
   const root = brent((k) => marginWithLoadsScaled(project, k, refinement), 0, 1, 1e-4, 40, {
     fa: bare,
     fb: marginWithLoadsScaled(project, 1, refinement),
   });
   if (!root.converged) return null;
   const k = Math.floor(root.x * 1000) / 1000;
-  return (
-    `Lighter hung loads would open it: at most ${(k * mass).toFixed(1)} kg hung in all instead of ` +
-    `${mass.toFixed(1)} kg (every hung load ${(100 * (1 - k)).toFixed(0)} % lighter).`
-  );
+  return { kind: 'lighterLoads', mostKg: k * mass, nowKg: mass, lighterPercent: 100 * (1 - k) };
 }
 
-function raiseFixingsAdvice(project: Project, atHigh: WindowResponse, highN: number): string {
+function raiseFixingsFact(atHigh: WindowResponse, highN: number): AdviceFact {
   const d = -atHigh.clearanceMargin;
-  return (
-    `Raising every fixing by at least ${metres(Math.ceil(d * 100) / 100)} would open it: at the highest ` +
-    `tension the limit allows (${newtons(highN)}), "${atHigh.clearanceCase}" misses ` +
-    `${checkWords(project, atHigh.clearanceCheck)} by ${metres(d)}.`
-  );
+  return {
+    kind: 'raiseFixings',
+    raiseM: Math.ceil(d * 100) / 100,
+    shortM: d,
+    highN,
+    case: atHigh.clearanceCase,
+    check: atHigh.clearanceCheck,
+  };
 }
 
-function strongerWireAdvice(model: ProjectModel, atLow: WindowResponse): string {
-  const needed = atLow.utilisation * model.wire.breakingLoad;
-  return (
-    `A wire of the same weight and stretch with a breaking load of at least ${newtons(Math.ceil(needed))} ` +
-    `(this one: ${newtons(model.wire.breakingLoad)}) would open it at the lowest tension that clears.`
-  );
-}
-
-function shutAdvice(model: ProjectModel, ends: WindowEnds, refinement: number): string[] {
-  const p = model.project;
-  const advice: string[] = [];
+function shutFacts(model: ProjectModel, ends: WindowEnds, refinement: number): AdviceFact[] {
+  const facts: AdviceFact[] = [];
   if (ends.reason === 'tension' && ends.atFloor) {
-    advice.push(
-      `No installation tension works: even pulled as slack as a sag of a quarter of the span, ` +
-        `"${ends.atFloor.tensionCase}" loads the wire to ${(100 * ends.atFloor.utilisation).toFixed(0)} % of its working limit.`,
-    );
-    advice.push(
-      `A wire of the same weight and stretch would need a breaking load of at least ${newtons(Math.ceil(ends.atFloor.utilisation * model.wire.breakingLoad))}.`,
-    );
+    facts.push({
+      kind: 'tooStrongAtFloor',
+      case: ends.atFloor.tensionCase,
+      utilisation: ends.atFloor.utilisation,
+    });
+    facts.push({
+      kind: 'needsBreaking',
+      neededN: Math.ceil(ends.atFloor.utilisation * model.wire.breakingLoad),
+    });
   } else if (ends.low && ends.high) {
-    advice.push(
-      `No installation tension works: clearing ${checkWords(p, ends.low.check)} in "${ends.low.case}" needs at least ` +
-        `${newtons(ends.low.horizontalTension)}, but the tension limit in "${ends.high.case}" allows at most ${newtons(ends.high.horizontalTension)}.`,
-    );
+    facts.push({
+      kind: 'overlap',
+      lowCheck: ends.low.check,
+      lowCase: ends.low.case,
+      lowN: ends.low.horizontalTension,
+      highCase: ends.high.case,
+      highN: ends.high.horizontalTension,
+    });
   } else if (ends.high) {
-    advice.push(
-      `No installation tension works: even at twice the wire's breaking load some case does not clear; a stronger wire alone cannot help.`,
-    );
+    facts.push({ kind: 'neverClears' });
   }
   if (ends.high && ends.atHigh)
-    advice.push(raiseFixingsAdvice(p, ends.atHigh, ends.high.horizontalTension));
-  if (ends.reason === 'overlap' && ends.atLow) advice.push(strongerWireAdvice(model, ends.atLow));
-  const lighter = lighterLoadsAdvice(model, refinement);
-  if (lighter) advice.push(lighter);
-  return advice;
+    facts.push(raiseFixingsFact(ends.atHigh, ends.high.horizontalTension));
+  if (ends.reason === 'overlap' && ends.atLow)
+    facts.push({
+      kind: 'strongerWire',
+      neededN: Math.ceil(ends.atLow.utilisation * model.wire.breakingLoad),
+      breakingN: model.wire.breakingLoad,
+    });
+  const lighter = lighterLoadsFact(model, refinement);
+  if (lighter) facts.push(lighter);
+  return facts;
 }
 
-/** Advice for a window: where its ends come from, or what would open it. */
-export function windowAdvice(model: ProjectModel, ends: WindowEnds, refinement = 1): string[] {
-  if (ends.empty) return shutAdvice(model, ends, refinement);
+/** The advice for a window as numbers: where its ends come from, or what would open it. */
+export function windowAdviceFacts(
+  model: ProjectModel,
+  ends: WindowEnds,
+  refinement = 1,
+): AdviceFact[] {
+  if (ends.empty) return shutFacts(model, ends, refinement);
   const p = model.project;
-  const advice: string[] = [];
-  const loads =
-    p.installation.withLoads && p.loads.length > 0 ? 'with the hung loads on' : 'bare wire';
-  const from = ends.low ? newtons(ends.low.horizontalTension) : 'any tension';
-  const to = ends.high ? newtons(ends.high.horizontalTension) : '';
-  advice.push(
-    `Every case passes for an installation horizontal tension from ${from} to ${to} at ${p.installation.temperature} °C (${loads}).`,
-  );
+  const facts: AdviceFact[] = [
+    {
+      kind: 'range',
+      fromN: ends.low?.horizontalTension ?? null,
+      toN: ends.high?.horizontalTension ?? null,
+      temperature: p.installation.temperature,
+      loads:
+        p.installation.withLoads && p.loads.length > 0 ? 'with the hung loads on' : 'bare wire',
+    },
+  ];
   if (model.installationJoints.some((joint) => joint === 'tension')) {
     const spans = solveInstallation(model, ends.floorN).spans.map((s) => s.tensionN);
-    advice.push(`The tensions are the horizontal tension ${windowTensionWords(p, spans)}.`);
+    facts.push({ kind: 'tensionSpans', words: windowTensionWords(p, spans) });
   }
-  if (p.loads.some((l) => l.type === 'moving'))
-    advice.push(
-      'Moving loads are in the window: each case that carries the hung loads is checked with every moving load at its worst position along its path.',
-    );
-  if (ends.low)
-    advice.push(
-      `The low end is where "${ends.low.case}" just clears ${checkWords(p, ends.low.check)}.`,
-    );
-  else
-    advice.push('No clearance check limits the slack side down to a sag of a quarter of the span.');
+  if (p.loads.some((l) => l.type === 'moving')) facts.push({ kind: 'movingLoadsIncluded' });
+  facts.push(
+    ends.low
+      ? { kind: 'lowEnd', case: ends.low.case, check: ends.low.check }
+      : { kind: 'noLowEnd' },
+  );
   if (ends.high)
-    advice.push(
-      `The high end is where "${ends.high.case}" reaches the tension limit (breaking load / ${p.limits.safetyFactor}).`,
-    );
-  return advice;
+    facts.push({ kind: 'highEnd', case: ends.high.case, safetyFactor: p.limits.safetyFactor });
+  return facts;
+}
+
+function factWords(project: Project, f: AdviceFact, w: Wording): string {
+  switch (f.kind) {
+    case 'range':
+      return `Every case passes for an installation horizontal tension from ${f.fromN === null ? 'any tension' : w.force(f.fromN)} to ${f.toN === null ? '' : w.force(f.toN)} at ${w.temperature(f.temperature)} (${f.loads}).`;
+    case 'lowEnd':
+      return `The low end is where "${f.case}" just clears ${checkWords(project, f.check, w)}.`;
+    case 'noLowEnd':
+      return 'No clearance check limits the slack side down to a sag of a quarter of the span.';
+    case 'tensionSpans':
+      return `The tensions are the horizontal tension ${f.words}.`;
+    case 'movingLoadsIncluded':
+      return 'Moving loads are in the window: each case that carries the hung loads is checked with every moving load at its worst position along its path.';
+    case 'highEnd':
+      return `The high end is where "${f.case}" reaches the tension limit (breaking load / ${f.safetyFactor}).`;
+    case 'tooStrongAtFloor':
+      return `No installation tension works: even pulled as slack as a sag of a quarter of the span, "${f.case}" loads the wire to ${(100 * f.utilisation).toFixed(0)} % of its working limit.`;
+    case 'needsBreaking':
+      return `A wire of the same weight and stretch would need a breaking load of at least ${w.force(f.neededN)}.`;
+    case 'overlap':
+      return `No installation tension works: clearing ${checkWords(project, f.lowCheck, w)} in "${f.lowCase}" needs at least ${w.force(f.lowN)}, but the tension limit in "${f.highCase}" allows at most ${w.force(f.highN)}.`;
+    case 'neverClears':
+      return "No installation tension works: even at twice the wire's breaking load some case does not clear; a stronger wire alone cannot help.";
+    case 'raiseFixings':
+      return `Raising every fixing by at least ${w.length(f.raiseM)} would open it: at the highest tension the limit allows (${w.force(f.highN)}), "${f.case}" misses ${checkWords(project, f.check, w)} by ${w.length(f.shortM)}.`;
+    case 'strongerWire':
+      return `A wire of the same weight and stretch with a breaking load of at least ${w.force(f.neededN)} (this one: ${w.force(f.breakingN)}) would open it at the lowest tension that clears.`;
+    case 'lighterLoadsCannot':
+      return 'Lighter hung loads alone do not open it: even with nothing hung on the wire some case fails.';
+    case 'lighterLoads':
+      return `Lighter hung loads would open it: at most ${w.mass(f.mostKg)} hung in all instead of ${w.mass(f.nowKg)} (every hung load ${f.lighterPercent.toFixed(0)} % lighter).`;
+  }
+}
+
+/** The advice in words, in the units of `w` (default: the contract's SI wording). */
+export function adviceWords(
+  project: Project,
+  facts: readonly AdviceFact[],
+  w: Wording = ADVICE_SI,
+): string[] {
+  return facts.map((f) => factWords(project, f, w));
+}
+
+/** Advice for a window: where its ends come from, or what would open it (SI words). */
+export function windowAdvice(model: ProjectModel, ends: WindowEnds, refinement = 1): string[] {
+  return adviceWords(model.project, windowAdviceFacts(model, ends, refinement));
 }

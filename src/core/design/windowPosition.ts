@@ -4,6 +4,8 @@
  * worst utilisation and worst clearance margin against H for a plot (sampled evenly in ln H —
  * a picture of the window, not how its ends are found).
  */
+
+import { ADVICE_SI, type Wording } from '../checkMessages.ts';
 import type { Project } from '../project.ts';
 import { buildProjectModel } from '../projectModel.ts';
 import { largestInstallationTension } from '../states.ts';
@@ -13,10 +15,15 @@ import { createWindowResponse } from './windowResponse.ts';
 
 const percent = (x: number) => `${Math.abs(100 * x).toFixed(0)} %`;
 
-export function windowPosition(project: Project, window: TensionWindow, tensionN: number): string {
+export function windowPosition(
+  project: Project,
+  window: TensionWindow,
+  tensionN: number,
+  w: Wording = ADVICE_SI,
+): string {
   const { low, high } = window;
   if (window.empty) return 'No installation tension passes every case (see the advice).';
-  const lowWords = low ? `the lowest tension that clears ${checkWords(project, low.check)}` : '';
+  const lowWords = low ? `the lowest tension that clears ${checkWords(project, low.check, w)}` : '';
   const highWords = high ? `the highest the tension limit allows ("${high.case}")` : '';
   if (low && tensionN < low.horizontalTension)
     return `${percent(1 - tensionN / low.horizontalTension)} below ${lowWords}: too slack, "${low.case}" fails.`;

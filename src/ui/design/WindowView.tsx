@@ -2,8 +2,15 @@
  * The tension window in the workbench: its ends (tension, case and check) in the chosen units,
  * where the current setting sits in words, the plot, and the advice when it is shut.
  */
-import type { Project, TensionWindow, WindowEnd } from '../../core/index.ts';
+import {
+  adviceWords,
+  type Project,
+  type TensionWindow,
+  type WindowEnd,
+  windowPosition,
+} from '../../core/index.ts';
 import type { UnitSystem } from '../../core/units.ts';
+import { adviceWordingFor } from '../../deliverables/displayUnits.ts';
 import type { DesignAnswers } from '../../worker/designAnswers.ts';
 import { show } from '../format.ts';
 import { WindowPlot } from './WindowPlot.tsx';
@@ -49,6 +56,10 @@ export function WindowView({
   units: UnitSystem;
 }) {
   const { window } = answers;
+  // Words in the chosen units from the worker's numbers (the contract's advice is in SI).
+  const words = adviceWordingFor(units);
+  const position = windowPosition(project, window, answers.currentTension, words);
+  const advice = adviceWords(project, answers.adviceFacts, words);
   return (
     <section className="design-block" aria-labelledby="window-heading">
       <h3 id="window-heading">Tension window</h3>
@@ -68,7 +79,7 @@ export function WindowView({
       </p>
       <Ends project={project} window={window} units={units} />
       <p data-testid="window-position">
-        Current setting, {show(answers.currentTension, 'force', units)}: {answers.position}
+        Current setting, {show(answers.currentTension, 'force', units)}: {position}
       </p>
       <WindowPlot
         curve={answers.curve}
@@ -77,7 +88,7 @@ export function WindowView({
         units={units}
       />
       <ul className="window-advice" aria-label="Window advice">
-        {window.advice.map((line) => (
+        {advice.map((line) => (
           <li key={line}>{line}</li>
         ))}
       </ul>

@@ -154,6 +154,7 @@ export async function saveReport(request: ReportRequest, units: UnitSystem): Pro
     aids.answers && aids.answersProject === project && !aids.stale
       ? {
           window: aids.answers.window,
+          adviceFacts: aids.answers.adviceFacts,
           currentTension: aids.answers.currentTension,
           setting: aids.answers.setting,
         }

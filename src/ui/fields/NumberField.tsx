@@ -3,7 +3,7 @@
  * Typed text stays in the field until it is valid; a refusal shows beside the field naming the
  * rule, and the results on screen are marked out of date meanwhile.
  */
-import { useEffect, useId, useRef, useState } from 'react';
+import { type ReactNode, useEffect, useId, useRef, useState } from 'react';
 import type { Quantity } from '../../core/units.ts';
 import { toSi, unitSymbol } from '../../core/units.ts';
 import { useDraftStore } from '../../state/draftStore.ts';
@@ -24,6 +24,8 @@ export interface NumberFieldProps {
   compact?: boolean;
   /** Words before the label that only a screen reader hears, e.g. the fixing's name. */
   context?: string;
+  /** A help mark after the label explaining a trade term (fields/Hint.tsx). */
+  hint?: ReactNode;
 }
 
 export function NumberField({
@@ -34,6 +36,7 @@ export function NumberField({
   edit,
   compact,
   context,
+  hint,
 }: NumberFieldProps) {
   const units = useUiStore((s) => s.unitSystem);
   const setInvalid = useDraftStore((s) => s.setInvalid);
@@ -90,6 +93,7 @@ export function NumberField({
         {context && <span className="visually-hidden">{context} </span>}
         {fullLabel}
       </label>
+      {hint}
       <input
         id={inputId}
         type="text"

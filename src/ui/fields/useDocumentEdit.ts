@@ -3,37 +3,42 @@
  * function (src/state/commit.ts): only a valid document is committed. A refusal comes back as a
  * message naming the rule (bounds shown in the field's display units).
  */
-import type { ValidationIssue } from '../../core/index.ts';
-import { fromSi, type Quantity, type UnitSystem, unitSymbol } from '../../core/units.ts';
+import type { Project, ValidationIssue } from '../../core/index.ts';
+import { type Quantity, type UnitSystem, unitSymbol } from '../../core/units.ts';
+import { formatLength } from '../../deliverables/displayUnits.ts';
 import { commit, type Edit } from '../../state/commit.ts';
+import { fieldName, localiseRule, quantityOfPath, valueAt } from '../../state/fieldNames.ts';
+import { useProjectStore } from '../../state/projectStore.ts';
+import { fieldText } from '../format.ts';
 
 export type { Edit };
+export { localiseRule };
 
-const NUMBER = '(-?\\d+(?:\\.\\d+)?(?:e[-+]?\\d+)?)';
-const BOUND = new RegExp(`(at least|at most|greater than|less than) ${NUMBER}`);
-/** "the range is 0 to 70 m/s": the core's SI range with its SI unit (or none). */
-const RANGE = new RegExp(`the range is ${NUMBER} to ${NUMBER}(?: [^\\s;,)]+)?`);
-
-/**
- * Rewrite an SI bound in a rule ("must be at most 0.2") and the range it states
- * ("the range is 0.0005 to 0.1 m") into display units.
- */
-export function localiseRule(message: string, quantity: Quantity, units: UnitSystem): string {
-  const symbol = unitSymbol(quantity, units);
-  const show = (si: string) => Number(fromSi(Number(si), quantity, units).toPrecision(6));
-  const unit = symbol ? ` ${symbol}` : '';
-  return message
-    .replace(BOUND, (_all, words: string, bound: string) => `${words} ${show(bound)}${unit}`)
-    .replace(
-      RANGE,
-      (_all, low: string, high: string) => `the range is ${show(low)} to ${show(high)}${unit}`,
-    );
+function lengthText(metres: number, units: UnitSystem): string {
+  return units === 'si'
+    ? `${fieldText(metres, 'length', units)} ${unitSymbol('length', units)}`
+    : formatLength(units, metres);
 }
 
-function describeElsewhere(issue: ValidationIssue): string {
-  return issue.path
-    ? `this would make ${issue.path} invalid: it ${issue.message}`
-    : `not changed: ${issue.message}`;
+/**
+ * The refusal when an edit breaks another field, in the workbench's words: a fixing moved
+ * inside a load or zone "must be beyond the end of Festoon cable at 21.5 m"; otherwise the other
+ * field is named and its rule given in display units.
+ */
+export function describeElsewhere(
+  project: Project,
+  ownPath: string,
+  issue: ValidationIssue,
+  units: UnitSystem,
+): string {
+  if (!issue.path) return `not changed: ${issue.message}`;
+  const other = fieldName(project, issue.path);
+  const quantity = quantityOfPath(issue.path);
+  const value = valueAt(project, issue.path);
+  const bound = /^must be (at most|at least) [-\d.e+]+$/.exec(issue.message);
+  if (/^supports\[\d+\]\.x$/.test(ownPath) && bound && quantity === 'length' && value !== undefined)
+    return `must be ${bound[1] === 'at most' ? 'beyond' : 'before'} ${other} at ${lengthText(value, units)}`;
+  return `would leave ${other} invalid: it ${localiseRule(issue.message, quantity, units)}`;
 }
 
 /**
@@ -46,9 +51,10 @@ export function tryEdit(
   quantity: Quantity,
   units: UnitSystem,
 ): string | null {
+  const before = useProjectStore.getState().project;
   const outcome = commit(edit, { mergeKey: path });
   if (outcome.ok) return null;
   const own = outcome.issues.find((issue) => issue.path === path);
   if (own) return localiseRule(own.message, quantity, units);
-  return describeElsewhere(outcome.issues[0]);
+  return describeElsewhere(before, path, outcome.issues[0], units);
 }

@@ -14,6 +14,7 @@ import * as edits from '../../state/projectEdits.ts';
 import { useProjectStore } from '../../state/projectStore.ts';
 import { useResultsStore } from '../../state/resultsStore.ts';
 import { CheckField, SelectField } from '../fields/ChoiceFields.tsx';
+import { Hint } from '../fields/Hint.tsx';
 import { NumberField } from '../fields/NumberField.tsx';
 
 type TargetKind = 'horizontalTension' | 'maxTension' | 'sag' | 'unstressedLength';
@@ -85,6 +86,17 @@ export function InstallationPanel() {
           quantity={quantity}
           value={target[kind] ?? 0}
           edit={(value) => edits.setTarget({ ...target, [kind]: value })}
+          hint={
+            kind === 'unstressedLength' ? (
+              <Hint term="cutLength" />
+            ) : kind === 'horizontalTension' ? (
+              <Hint term="horizontalTension" />
+            ) : kind === 'maxTension' ? (
+              <Hint term="largestTension" />
+            ) : (
+              <Hint term="sag" />
+            )
+          }
         />
         {kind !== 'unstressedLength' && (
           <SelectField

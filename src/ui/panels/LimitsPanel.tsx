@@ -3,6 +3,7 @@ import { DEFAULT_MODEL, type Theory } from '../../core/index.ts';
 import * as edits from '../../state/projectEdits.ts';
 import { useProjectStore } from '../../state/projectStore.ts';
 import { SelectField } from '../fields/ChoiceFields.tsx';
+import { Hint } from '../fields/Hint.tsx';
 import { NumberField } from '../fields/NumberField.tsx';
 
 const THEORIES: { value: Theory; label: string }[] = [
@@ -20,6 +21,10 @@ function ModelSettings() {
   return (
     <details className="model-settings">
       <summary>Model settings</summary>
+      <p className="muted hint-line">
+        Element settings <Hint term="elementSettings" />: the defaults suit ordinary spans; change
+        them only to compare.
+      </p>
       <div className="field-grid">
         <SelectField
           label="Theory"

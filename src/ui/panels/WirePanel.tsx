@@ -12,6 +12,7 @@ import { setWire } from '../../state/projectEdits.ts';
 import { useProjectStore } from '../../state/projectStore.ts';
 import { useUiStore } from '../../state/uiStore.ts';
 import { applyEdit } from '../fields/ChoiceFields.tsx';
+import { Hint } from '../fields/Hint.tsx';
 import { NumberField } from '../fields/NumberField.tsx';
 import { TextField } from '../fields/TextField.tsx';
 import { show } from '../format.ts';
@@ -97,6 +98,7 @@ function CustomValues({ wire }: { wire: CustomWire }) {
           quantity={quantity}
           value={wire[key]}
           edit={(value) => setWire({ ...wire, [key]: value })}
+          hint={key === 'axialStiffness' ? <Hint term="axialStiffness" /> : undefined}
         />
       ))}
     </div>
@@ -111,7 +113,15 @@ function WireFacts({ wire }: { wire: WireProperties }) {
     <dl className="facts">
       {shown.map(({ key, label, quantity, digits }) => (
         <div key={key} className="fact">
-          <dt>{label}</dt>
+          <dt>
+            {label}
+            {key === 'axialStiffness' && (
+              <>
+                {' '}
+                <Hint term="axialStiffness" />
+              </>
+            )}
+          </dt>
           <dd>{show(wire[key], quantity, units, digits)}</dd>
         </div>
       ))}

@@ -4,7 +4,8 @@
  */
 import type { Data } from 'plotly.js';
 import type { GroundPoint, Project } from '../../core/index.ts';
-import { fromSi, type UnitSystem, unitSymbol } from '../../core/units.ts';
+import { fromSi, type UnitSystem } from '../../core/units.ts';
+import { formatLength } from '../../deliverables/displayUnits.ts';
 import { GROUND_FILL, GROUND_LINE, ZONE_FILL, ZONE_LINE } from './colours.ts';
 import { plotlyText } from './plotlyText.ts';
 
@@ -52,7 +53,7 @@ export function groundTraces(project: Project, units: UnitSystem): Data[] {
   const clearanceLine: Data = {
     type: 'scatter',
     mode: 'lines',
-    name: `Minimum clearance ${len(minClearance).toFixed(2)} ${unitSymbol('length', units)}`,
+    name: `Minimum clearance ${formatLength(units, minClearance)}`,
     x: g.map((p) => len(p.x)),
     y: g.map((p) => len(p.z + minClearance)),
     line: { color: GROUND_LINE, width: 1, dash: 'dot' },
@@ -63,7 +64,6 @@ export function groundTraces(project: Project, units: UnitSystem): Data[] {
 
 export function zoneTraces(project: Project, units: UnitSystem): Data[] {
   const len = (m: number) => fromSi(m, 'length', units);
-  const lu = unitSymbol('length', units);
   return (project.limits.zones ?? []).map((zone, i) => {
     const inside = groundLine(project)
       .map((p) => p.x)
@@ -74,7 +74,7 @@ export function zoneTraces(project: Project, units: UnitSystem): Data[] {
     return {
       type: 'scatter',
       mode: 'lines',
-      name: `${label}: needs ${len(zone.height).toFixed(2)} ${lu}`,
+      name: `${label}: needs ${formatLength(units, zone.height)}`,
       x: [...xs, ...[...xs].reverse()].map(len),
       y: [...base.map((z) => z + zone.height), ...[...base].reverse()].map(len),
       fill: 'toself',

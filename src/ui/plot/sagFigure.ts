@@ -2,13 +2,16 @@
  * The sag plot as a pure Plotly figure spec (no DOM), so the workbench and exports draw the
  * same thing: each case's wire (solid) with its closed-form parabola (dashed), the ground
  * filled, clearance zones shaded at their required heights, supports, the lowest point and the
- * largest sag annotated, and the band a moving load sweeps (movingBand.ts). Values are
+ * largest sag annotated (sag drawn where it is measured: down from the straight line between the
+ * fixings, dash-dotted on inclined spans, at the point where that drop is largest), and the band a moving load sweeps (movingBand.ts). Values are
  * converted to the chosen display units. The plan view (options.view 'plan', planFigure.ts)
  * shows the sideways swing in wind instead.
  */
 import type { Annotation, Data, Layout } from 'plotly.js';
 import type { CaseResult, Project, ProjectResults } from '../../core/index.ts';
 import { fromSi, type UnitSystem, unitSymbol } from '../../core/units.ts';
+import { formatLength } from '../../deliverables/displayUnits.ts';
+import { sagPosition } from '../../deliverables/reportSetting.ts';
 import { caseColour } from './colours.ts';
 import { groundHeightAt, groundTraces, supportTrace, zoneTraces } from './figureParts.ts';
 import { movingLoadBands } from './movingBand.ts';
@@ -90,18 +93,95 @@ function caseTraces(
   return { traces: [wire, closedForm], differenceM: largestDifference(profile.z, parabola) };
 }
 
-function annotations(results: ProjectResults, units: UnitSystem): Partial<Annotation>[] {
+/** Where the largest sag is measured: the case, its span, the point and the chord above it. */
+interface SagPoint {
+  result: CaseResult;
+  span: number;
+  x: number;
+  chordZ: number;
+  wireZ: number;
+}
+
+/**
+ * The largest sag over the solved cases, at the point where it is measured: below the straight
+ * line between the span's fixings (the chord), where the drop from it is largest — on an
+ * inclined span that is not the lowest point.
+ */
+export function largestSagPoint(project: Project, results: ProjectResults): SagPoint | null {
+  const solved = results.cases.filter((c) => c.solved && c.spans.length > 0 && c.profile);
+  if (solved.length === 0) return null;
+  const result = solved.reduce((a, b) => (b.sag > a.sag ? b : a));
+  const span = result.spans.reduce((best, s, j) => (s.sag > result.spans[best].sag ? j : best), 0);
+  const x = sagPosition(project, result, span);
+  const profile = result.profile;
+  if (x === undefined || !profile) return null;
+  const a = project.supports[span];
+  const b = project.supports[span + 1];
+  const i = profile.x.indexOf(x);
+  return {
+    result,
+    span,
+    x,
+    chordZ: a.z + ((b.z - a.z) * (x - a.x)) / (b.x - a.x),
+    wireZ: profile.z[i],
+  };
+}
+
+const CHORD_NAME = 'Straight line between fixings (sag is measured down from it)';
+
+/**
+ * The chord of each inclined span (dash-dotted), and the largest sag drawn as a short line from the
+ * chord straight down to the wire where it is measured.
+ */
+function sagTraces(project: Project, point: SagPoint | null, units: UnitSystem): Data[] {
+  const len = (m: number) => fromSi(m, 'length', units);
+  const traces: Data[] = [];
+  project.supports.slice(1).forEach((b, j) => {
+    const a = project.supports[j];
+    if (Math.abs(b.z - a.z) < 1e-6) return;
+    traces.push({
+      type: 'scatter',
+      mode: 'lines',
+      name: CHORD_NAME,
+      legendgroup: 'chord',
+      showlegend: traces.length === 0,
+      x: [len(a.x), len(b.x)],
+      y: [len(a.z), len(b.z)],
+      line: { color: '#1f2328', width: 1.2, dash: 'dashdot' },
+      hoverinfo: 'skip',
+    });
+  });
+  if (point)
+    traces.push({
+      type: 'scatter',
+      mode: 'lines',
+      name: 'Largest sag, measured here',
+      showlegend: false,
+      x: [len(point.x), len(point.x)],
+      y: [len(point.chordZ), len(point.wireZ)],
+      line: { color: '#1f2328', width: 2 },
+      // No numbers in the hover text: only x and y change with an edit, so the quick redraw
+      // (figureUpdate.ts) can move this line with the wires.
+      hovertemplate:
+        'Largest sag: measured straight down from the line between fixings<extra></extra>',
+    });
+  return traces;
+}
+
+function annotations(
+  results: ProjectResults,
+  point: SagPoint | null,
+  units: UnitSystem,
+): Partial<Annotation>[] {
   const solved = results.cases.filter((c) => c.solved);
   if (solved.length === 0) return [];
   const len = (m: number) => fromSi(m, 'length', units);
-  const lu = unitSymbol('length', units);
   const lowest = solved.reduce((a, b) => (b.lowestPoint.z < a.lowestPoint.z ? b : a));
-  const sagging = solved.reduce((a, b) => (b.sag > a.sag ? b : a));
   const notes: Partial<Annotation>[] = [
     {
       x: len(lowest.lowestPoint.x),
       y: len(lowest.lowestPoint.z),
-      text: `Lowest point ${len(lowest.lowestPoint.z).toFixed(2)} ${lu} (${plotlyText(lowest.name)})`,
+      text: `Lowest point ${formatLength(units, lowest.lowestPoint.z)} (${plotlyText(lowest.name)})`,
       showarrow: true,
       arrowhead: 2,
       // Label and arrow wholly below-right of the point (anchored at the label's top-left corner).
@@ -112,15 +192,11 @@ function annotations(results: ProjectResults, units: UnitSystem): Partial<Annota
       bgcolor: 'rgba(255,255,255,0.85)',
     },
   ];
-  const sagX = sagging.spans.length === 1 ? sagging.lowestPoint.x : undefined;
-  if (sagX !== undefined) {
-    const profile = sagging.profile;
-    const i = profile ? profile.x.findIndex((x) => x >= sagX) : -1;
-    const z = profile && i >= 0 ? profile.z[i] : sagging.lowestPoint.z;
+  if (point)
     notes.push({
-      x: len(sagX),
-      y: len(z),
-      text: `Largest sag ${len(sagging.sag).toFixed(3)} ${lu} (${plotlyText(sagging.name)})`,
+      x: len(point.x),
+      y: len(point.wireZ),
+      text: `Largest sag ${formatLength(units, point.result.sag)} below the line between fixings (${plotlyText(point.result.name)})`,
       showarrow: true,
       arrowhead: 2,
       // Label straight above the point, arrow pointing down: it stays above every wire point
@@ -131,7 +207,6 @@ function annotations(results: ProjectResults, units: UnitSystem): Partial<Annota
       yanchor: 'bottom',
       bgcolor: 'rgba(255,255,255,0.85)',
     });
-  }
   return notes;
 }
 
@@ -162,6 +237,8 @@ export function buildSagFigure(
     if (drawn.traces.length > 1 && (!parabola || drawn.differenceM > parabola.differenceM))
       parabola = { caseId: result.id, caseName: result.name, differenceM: drawn.differenceM };
   });
+  const sagPoint = largestSagPoint(project, results);
+  data.push(...sagTraces(project, sagPoint, unitSystem));
   data.push(supportTrace(project, unitSystem));
   const layout: Partial<Layout> = {
     margin: { l: 64, r: 16, t: 16, b: 48 },
@@ -173,7 +250,7 @@ export function buildSagFigure(
     },
     legend: { orientation: 'h', y: -0.18, x: 0 },
     hovermode: 'closest',
-    annotations: annotations(results, unitSystem),
+    annotations: annotations(results, sagPoint, unitSystem),
     paper_bgcolor: '#ffffff',
     plot_bgcolor: '#ffffff',
   };

@@ -15,6 +15,7 @@ import {
 import { unitSymbol } from '../../core/units.ts';
 import { useAsBuiltStore } from '../../state/asBuiltStore.ts';
 import { useUiStore } from '../../state/uiStore.ts';
+import { Hint } from '../fields/Hint.tsx';
 import './asBuilt.css';
 import { fieldText, num, percent, show } from '../format.ts';
 import {
@@ -58,7 +59,7 @@ function Outcome({ asBuilt, design }: { asBuilt: AsBuiltResult; design: ProjectR
   return (
     <div data-testid="as-built-outcome">
       <p>
-        Cut length as built:{' '}
+        Cut length <Hint term="cutLength" /> as built:{' '}
         <strong data-testid="as-built-length">
           {show(asBuilt.unstressedLength, 'length', units, 3)}
         </strong>

@@ -1,7 +1,10 @@
 /** Results by case: tension, utilisation with pass/fail in words, sag, lowest point, clearance, swing. */
-import type { CaseResult, ProjectResults } from '../../core/index.ts';
+import type { CaseResult, Project, ProjectResults } from '../../core/index.ts';
 import { unitSymbol } from '../../core/units.ts';
+import { caseMessages } from '../../deliverables/caseMessages.ts';
+import { formatLength } from '../../deliverables/displayUnits.ts';
 import { useUiStore } from '../../state/uiStore.ts';
+import { Hint } from '../fields/Hint.tsx';
 import { num, percent, show } from '../format.ts';
 import { TableScroll } from './TableScroll.tsx';
 
@@ -30,9 +33,13 @@ export function utilisationBasis(results: ProjectResults): string {
   return `Utilisation = largest tension × safety factor / (breaking load × ${percent(f.efficiency)}): the weaker end fitting is ${weaker.label.toLowerCase()} at the ${f.governing === 'start' ? 'first' : 'last'} fixing.`;
 }
 
-export function ResultsTable({ results }: { results: ProjectResults }) {
+export function ResultsTable({ project, results }: { project: Project; results: ProjectResults }) {
   const units = useUiStore((s) => s.unitSystem);
-  const lu = unitSymbol('length', units);
+  // Lengths as installers read them: metres (unit in the heading), or feet and inches per cell.
+  const si = units === 'si';
+  const lu = si ? ` (${unitSymbol('length', units)})` : '';
+  const length = (m: number) => (si ? num(m, 'length', units) : formatLength(units, m, true));
+  const position = (m: number) => (si ? show(m, 'length', units, 2) : formatLength(units, m));
   const fu = unitSymbol('force', units);
   return (
     <TableScroll>
@@ -41,23 +48,32 @@ export function ResultsTable({ results }: { results: ProjectResults }) {
         <thead>
           <tr>
             <th scope="col">Case</th>
-            <th scope="col">Horizontal tension ({fu})</th>
-            <th scope="col">Largest tension ({fu})</th>
-            <th scope="col">Utilisation</th>
+            <th scope="col">
+              Horizontal tension ({fu}) <Hint term="horizontalTension" />
+            </th>
+            <th scope="col">
+              Largest tension ({fu}) <Hint term="largestTension" />
+            </th>
+            <th scope="col">
+              Utilisation <Hint term="utilisation" />
+            </th>
             <th scope="col">Check</th>
-            <th scope="col">Sag ({lu})</th>
-            <th scope="col">Lowest point ({lu})</th>
-            <th scope="col">Clearance ({lu})</th>
-            <th scope="col">Swing ({lu})</th>
+            <th scope="col">
+              Sag{lu} <Hint term="sag" />
+            </th>
+            <th scope="col">Lowest point{lu}</th>
+            <th scope="col">Clearance{lu}</th>
+            <th scope="col">Swing{lu}</th>
           </tr>
         </thead>
         <tbody>
           {results.cases.map((result) => {
             const marks = governs(result, results);
+            const messages = caseMessages(project, results, result, units);
             const zones = result.zoneClearances
               .map(
                 (z) =>
-                  `${z.label}: ${show(z.clearance, 'length', units, 2)}${z.ok ? '' : ` — too low, needs ${show(z.required, 'length', units, 2)}`}`,
+                  `${z.label}: ${formatLength(units, z.clearance)}${z.ok ? '' : ` — too low, needs ${formatLength(units, z.required)}`}`,
               )
               .join('; ');
             return (
@@ -74,22 +90,18 @@ export function ResultsTable({ results }: { results: ProjectResults }) {
                 <td>{percent(result.utilisation)}</td>
                 <td>
                   <Verdict result={result} />
-                  {result.messages.length > 0 && (
-                    <span className="case-meta">{result.messages.join(' ')}</span>
-                  )}
+                  {messages.length > 0 && <span className="case-meta">{messages.join(' ')}</span>}
                 </td>
-                <td>{num(result.sag, 'length', units)}</td>
+                <td>{length(result.sag)}</td>
                 <td>
-                  {num(result.lowestPoint.z, 'length', units)}
-                  <span className="case-meta">
-                    at {show(result.lowestPoint.x, 'length', units, 2)}
-                  </span>
+                  {length(result.lowestPoint.z)}
+                  <span className="case-meta">at {position(result.lowestPoint.x)}</span>
                 </td>
                 <td>
-                  {num(result.clearance, 'length', units)}
+                  {length(result.clearance)}
                   {zones && <span className="case-meta">{zones}</span>}
                 </td>
-                <td>{num(result.swing, 'length', units)}</td>
+                <td>{length(result.swing)}</td>
               </tr>
             );
           })}
