@@ -6,7 +6,7 @@
  * tab that opened last edits; the others show its changes as they are saved and offer to take
  * over, and a tab that has lost the document never overwrites it. A refused write is told at
  * once, the document stays in memory, and leaving the page asks first. Solving goes through the
- * solver link.
+ * solver link; the design aids' worker is started and stopped with the session too.
  */
 import { type Project, validateProject } from '../core/index.ts';
 import {
@@ -51,6 +51,11 @@ export interface SessionOptions {
   fallback: Project;
   channel?: ChannelLike;
   solver?: SolverPort;
+  /**
+   * Starts the design aids (the second worker that answers the tension window and the chooser)
+   * once the document is open; returns its stop function, called on dispose.
+   */
+  designAids?: () => () => void;
   tabId?: string;
   unloadTarget?: UnloadGuardTarget;
 }
@@ -197,6 +202,7 @@ export function createSession(options: SessionOptions) {
         session.setState({ save: { kind: 'paused' } });
       } else hold();
       if (options.solver) stops.push(linkSolver(store, options.results, options.solver));
+      if (options.designAids) stops.push(options.designAids());
     },
     /** Stop writing the autosave (a shared project is on screen); the stored work stays. */
     pause() {
