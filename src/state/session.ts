@@ -13,9 +13,11 @@ import {
   claim,
   type KeyValueStorage,
   openAutosave,
+  readKept,
   readOwner,
   type WriteOutcome,
   writeAutosave,
+  writeKept,
 } from './autosave.ts';
 import type { ProjectStore } from './projectStore.ts';
 import type { ResultsStore } from './resultsStore.ts';
@@ -93,8 +95,19 @@ export function createSession(options: SessionOptions) {
     else options.unloadTarget.removeEventListener('beforeunload', warnBeforeUnload);
   }
 
+  /** Store whether the document on screen is the one last kept, beside the autosave. */
+  function storeKept() {
+    writeKept(storage, store.getState().project === session.getState().kept);
+  }
+
+  /** A document shown from storage is kept as far as the stored flag says. */
+  function keptFromStorage(project: Project) {
+    session.setState({ kept: readKept(storage) ? project : null });
+  }
+
   function record(outcome: WriteOutcome) {
     if (outcome.ok) {
+      storeKept();
       session.setState({ save: { kind: 'saved' }, unsavedEdits: false });
       setGuard(false);
       channel?.postMessage({ type: 'saved', tab, project: store.getState().project });
@@ -130,6 +143,7 @@ export function createSession(options: SessionOptions) {
     quiet = true;
     try {
       store.getState().resetProject(project);
+      keptFromStorage(project);
     } finally {
       quiet = false;
     }
@@ -150,6 +164,7 @@ export function createSession(options: SessionOptions) {
     quiet = true;
     try {
       store.getState().resetProject(opened.project);
+      keptFromStorage(opened.project);
     } finally {
       quiet = false;
     }
@@ -187,11 +202,22 @@ export function createSession(options: SessionOptions) {
       const opened = openAutosave(storage, options.fallback);
       quiet = true;
       store.getState().resetProject(opened.project);
+      // Nothing stored: the fallback is as good as kept. A repaired document never is.
+      if (opened.project === options.fallback) session.setState({ kept: opened.project });
+      else if (opened.recovery) session.setState({ kept: null });
+      else keptFromStorage(opened.project);
       quiet = false;
       if (opened.recovery) session.setState({ recovery: opened.recovery });
       if (opened.formatNotes) session.setState({ formatNotes: opened.formatNotes });
       stops.push(
         store.subscribe((s, previous) => s.project !== previous.project && save(s.project)),
+      );
+      // Kept elsewhere (saved, exported, opened): the stored flag follows while this tab writes.
+      stops.push(
+        session.subscribe((s, previous) => {
+          if (s.kept === previous.kept || quiet || paused || s.otherTabEditing) return;
+          if (s.save.kind === 'saved') storeKept();
+        }),
       );
       if (channel) {
         channel.onmessage = (event) => receive(event.data);

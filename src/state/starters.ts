@@ -4,11 +4,17 @@
  * core's project validator like any file a person opens; a starter that does not validate is a
  * build fault and throws at load.
  */
-import blankSpan from '../../examples/starters/blank-span.json';
-import courtyardStringLights from '../../examples/starters/courtyard-string-lights.json';
-import gardenClothesline from '../../examples/starters/garden-clothesline.json';
-import trellisOverPosts from '../../examples/starters/trellis-over-posts.json';
-import yardSign from '../../examples/starters/yard-sign.json';
+import blankSpan from '../../examples/starters/blank-span.json' with { type: 'json' };
+import courtyardStringLights from '../../examples/starters/courtyard-string-lights.json' with {
+  type: 'json',
+};
+import gardenClothesline from '../../examples/starters/garden-clothesline.json' with {
+  type: 'json',
+};
+import trellisOverPosts from '../../examples/starters/trellis-over-posts.json' with {
+  type: 'json',
+};
+import yardSign from '../../examples/starters/yard-sign.json' with { type: 'json' };
 import { type Project, validateProject } from '../core/index.ts';
 
 export interface Starter {

@@ -1,15 +1,18 @@
 /**
- * The header's file and export menu: save and open project files, share link, projects in this
- * browser, PDF report, plot images, CSV and the client view; plus the shared-project banner.
- * Refused files list the field paths and leave the open project as it was.
+ * The header's file and export menu: a new project (blank or a starter), save and open project
+ * files, share link, projects in this browser, PDF report, plot images, CSV and the client view;
+ * plus the shared-project banner. Refused files list the field paths and leave the open project
+ * as it was. Opening anything over edits not kept (hasUnkeptEdits) asks first.
  */
 import { lazy, Suspense, useEffect, useMemo, useRef, useState } from 'react';
 import './export.css';
 import type { Project, ProjectResults } from '../../core/index.ts';
 import { type OpenResult, PROJECT_FILE_EXTENSION } from '../../deliverables/projectFile.ts';
-import { commit, commitOpened } from '../../state/commit.ts';
+import { commit, commitOpened, hasUnkeptEdits, markKept } from '../../state/commit.ts';
 import { useProjectStore } from '../../state/projectStore.ts';
+import type { Starter } from '../../state/starters.ts';
 import { useUiStore } from '../../state/uiStore.ts';
+import { ConfirmReplaceDialog, type ReplaceQuestion } from './ConfirmReplaceDialog.tsx';
 import { ExportNotice, type Notice, SharedBanner } from './ExportNotices.tsx';
 import { useSharedProject } from './useSharedProject.ts';
 
@@ -23,8 +26,11 @@ const LibraryDialog = lazy(() =>
 const ReportDialog = lazy(() =>
   import('./ReportDialog.tsx').then((m) => ({ default: m.ReportDialog })),
 );
+const NewProjectDialog = lazy(() =>
+  import('./NewProjectDialog.tsx').then((m) => ({ default: m.NewProjectDialog })),
+);
 
-type Dialog = 'none' | 'report' | 'library' | 'client';
+type Dialog = 'none' | 'new' | 'report' | 'library' | 'client';
 
 /** The report dialog's record goes into the document (one undo step) before the report is made. */
 function saveRecord(withRecord: Project) {
@@ -90,6 +96,7 @@ export function ExportMenu() {
   const [dialog, setDialog] = useState<Dialog>('none');
   const [busy, setBusy] = useState(false);
   const [notice, setNotice] = useState<Notice>(null);
+  const [question, setQuestion] = useState<ReplaceQuestion | null>(null);
   const fileInput = useRef<HTMLInputElement>(null);
   const menuButton = useRef<HTMLButtonElement>(null);
   const root = useRef<HTMLDivElement>(null);
@@ -102,24 +109,30 @@ export function ExportMenu() {
     if (open) void loadActions();
   }, [open]);
 
-  /** `what` names the file made, e.g. "The plot SVG". */
-  const run = (what: string, work: () => unknown) => async () => {
-    setOpen(false);
-    menuButton.current?.focus();
-    setBusy(true);
-    try {
-      await work();
-      setNotice({ kind: 'status', text: `${what} was saved.` });
-    } catch (error) {
-      setNotice({
-        kind: 'refused',
-        title: `${what} could not be made`,
-        issues: [{ path: '', message: error instanceof Error ? error.message : String(error) }],
-      });
-    } finally {
-      setBusy(false);
-    }
-  };
+  /**
+   * `what` names the file made, e.g. "The plot SVG"; once it is made, `exported` (the document
+   * written into it) counts as kept.
+   */
+  const run =
+    (what: string, work: () => unknown, exported: Project = project) =>
+    async () => {
+      setOpen(false);
+      menuButton.current?.focus();
+      setBusy(true);
+      try {
+        await work();
+        markKept(exported);
+        setNotice({ kind: 'status', text: `${what} was saved.` });
+      } catch (error) {
+        setNotice({
+          kind: 'refused',
+          title: `${what} could not be made`,
+          issues: [{ path: '', message: error instanceof Error ? error.message : String(error) }],
+        });
+      } finally {
+        setBusy(false);
+      }
+    };
   const show = (next: Dialog) => () => {
     setOpen(false);
     setDialog(next);
@@ -145,18 +158,28 @@ export function ExportMenu() {
       });
       return;
     }
-    const committed = commitOpened(result.project, undefined, result.notes);
-    if (!committed.ok) {
-      setNotice({
-        kind: 'refused',
-        title: `${source} was not opened; your project is unchanged`,
-        issues: committed.issues,
-      });
-      return;
-    }
-    setDialog('none');
-    setNotice({ kind: 'status', text: `Opened “${result.project.title}”.` });
+    const opened = result.project;
+    whenReplaceable(`“${opened.title}”`, () => {
+      const committed = commitOpened(opened, undefined, result.notes);
+      if (!committed.ok) {
+        setNotice({
+          kind: 'refused',
+          title: `${source} was not opened; your project is unchanged`,
+          issues: committed.issues,
+        });
+        return;
+      }
+      setDialog('none');
+      setNotice({ kind: 'status', text: `Opened “${opened.title}”.` });
+    });
   };
+  /** Open now, or ask first when the project on screen has edits not kept anywhere. */
+  const whenReplaceable = (what: string, open: () => void) => {
+    if (hasUnkeptEdits()) setQuestion({ what, proceed: open });
+    else open();
+  };
+  const startFrom = (starter: Starter) =>
+    applyOpened({ ok: true, project: starter.project, notes: [] }, `“${starter.name}”`);
   const onFile = async (event: React.ChangeEvent<HTMLInputElement>) => {
     const file = event.target.files?.[0];
     event.target.value = '';
@@ -164,6 +187,7 @@ export function ExportMenu() {
   };
 
   const items: [string, () => void][] = [
+    ['New project…', show('new')],
     [
       'Save file',
       run('The project file', async () => (await loadActions()).saveProjectFile(project)),
@@ -259,8 +283,11 @@ export function ExportMenu() {
                 });
                 return;
               }
-              run('The PDF report', async () =>
-                (await loadActions()).saveReport({ ...request, project: saved.project }, units),
+              run(
+                'The PDF report',
+                async () =>
+                  (await loadActions()).saveReport({ ...request, project: saved.project }, units),
+                saved.project,
               )().then(closeDialog);
             }}
           />
@@ -273,6 +300,9 @@ export function ExportMenu() {
             onClose={closeDialog}
           />
         )}
+        {dialog === 'new' && (
+          <NewProjectDialog returnFocus={menuButton} onChoose={startFrom} onClose={closeDialog} />
+        )}
         {dialog === 'client' && clientResults && (
           <ClientView
             project={project}
@@ -283,6 +313,13 @@ export function ExportMenu() {
           />
         )}
       </Suspense>
+      {question && (
+        <ConfirmReplaceDialog
+          question={question}
+          current={project.title}
+          onClose={() => setQuestion(null)}
+        />
+      )}
     </div>
   );
 }
