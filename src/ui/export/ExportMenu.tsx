@@ -118,6 +118,7 @@ export function ExportMenu() {
     async () => {
       setOpen(false);
       menuButton.current?.focus();
+      setNotice(null); // "Working…" takes the notice's place under the button
       setBusy(true);
       try {
         await work();
@@ -258,7 +259,11 @@ export function ExportMenu() {
           ))}
         </ul>
       )}
-      {busy && <p role="status">Working…</p>}
+      {busy && (
+        <p role="status" className="export-notice">
+          Working…
+        </p>
+      )}
       <ExportNotice notice={notice} onDismiss={() => setNotice(null)} />
       <SharedBanner
         state={shared.state}

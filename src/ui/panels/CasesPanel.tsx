@@ -13,7 +13,7 @@ export function CasesPanel() {
   return (
     <section className="panel" aria-labelledby="cases-heading">
       <h2 id="cases-heading">Weather cases</h2>
-      <table className="edit-table" aria-labelledby="cases-heading">
+      <table className="edit-table cases-table" aria-labelledby="cases-heading">
         <thead>
           <tr>
             <th scope="col">Name</th>
