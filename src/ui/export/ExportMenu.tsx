@@ -30,6 +30,9 @@ const NewProjectDialog = lazy(() =>
   import('./NewProjectDialog.tsx').then((m) => ({ default: m.NewProjectDialog })),
 );
 
+/** How long a plain status from the menu stays on screen. */
+const STATUS_MS = 12_000;
+
 type Dialog = 'none' | 'new' | 'report' | 'library' | 'client';
 
 /** The report dialog's record goes into the document (one undo step) before the report is made. */
@@ -108,6 +111,13 @@ export function ExportMenu() {
   useEffect(() => {
     if (open) void loadActions();
   }, [open]);
+  // A plain status ("The plot PNG was saved.") floats over the page's edge: it goes by itself
+  // after a while. Refusals and a link to copy stay until dismissed.
+  useEffect(() => {
+    if (notice?.kind !== 'status') return;
+    const timer = setTimeout(() => setNotice((now) => (now === notice ? null : now)), STATUS_MS);
+    return () => clearTimeout(timer);
+  }, [notice]);
 
   /**
    * `what` names the file made, e.g. "The plot SVG"; once it is made, `exported` (the document

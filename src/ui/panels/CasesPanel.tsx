@@ -17,7 +17,10 @@ export function CasesPanel() {
         <thead>
           <tr>
             <th scope="col">Name</th>
-            <th scope="col">Temperature ({unitSymbol('temperature', units)})</th>
+            {/* A soft hyphen lets the long word break, so the table fits a laptop's panel. */}
+            <th scope="col">
+              Temper{'\u00AD'}ature ({unitSymbol('temperature', units)})
+            </th>
             <th scope="col">Ice ({unitSymbol('diameter', units)})</th>
             <th scope="col">Wind ({unitSymbol('speed', units)})</th>
             <th scope="col">Loads on</th>
