@@ -74,6 +74,11 @@ test('Save file then Open file through the file chooser gives back the same docu
     mimeType: 'application/json',
     buffer: Buffer.from(saved.text),
   });
+  // The edits since saving are not kept anywhere: opening asks first.
+  await page
+    .getByRole('alertdialog', { name: 'Replace the project on screen?' })
+    .getByRole('button', { name: 'Open “Round trip yard”' })
+    .click();
   await expect(
     page.getByRole('status').filter({ hasText: 'Opened “Round trip yard”.' }),
   ).toBeVisible();
@@ -381,6 +386,11 @@ test.describe('projects in this browser', () => {
     await menuItem(page, 'Projects in this browser…');
     await expect(items).toHaveCount(2);
     await dialog.getByRole('button', { name: 'Open Terrace span, option B' }).click();
+    // The edit since the reload is not kept anywhere: opening asks first.
+    await page
+      .getByRole('alertdialog', { name: 'Replace the project on screen?' })
+      .getByRole('button', { name: 'Open “Terrace span, option B”' })
+      .click();
     await expect(dialog).toBeHidden();
     await expect(menuButton).toBeFocused();
     await expect(page.getByLabel('Project title')).toHaveValue('Terrace span, option B');

@@ -169,3 +169,72 @@ test('on a wide screen every input section shows and the section buttons do not'
     ).toBeAttached();
   await expect(page.getByRole('heading', { name: 'Weather cases' })).toBeVisible();
 });
+
+test.describe('laptop 1366×768: tables fit, the header stays put', () => {
+  test.use({ viewport: { width: 1366, height: 768 } });
+
+  /** How far a box's content reaches past its own width (0 when nothing is hidden sideways). */
+  const overflow = (page: Page, selector: string) =>
+    page
+      .locator(selector)
+      .evaluate((element) => element.scrollWidth - element.clientWidth)
+      .then((px) => Math.max(0, px));
+
+  test('the weather-case table fits its panel: Copy and Delete need no sideways scroll', async ({
+    page,
+  }) => {
+    test.setTimeout(120_000);
+    await open(page);
+    const panel = page.locator('section.panel', {
+      has: page.getByRole('heading', { name: 'Weather cases' }),
+    });
+    const table = panel.getByRole('table');
+    expect(await table.evaluate((t) => t.scrollWidth)).toBeLessThanOrEqual(
+      await panel.evaluate((p) => p.clientWidth),
+    );
+    const panelBox = await panel.boundingBox();
+    for (const name of ['Duplicate Hot summer', 'Delete Hot summer']) {
+      const box = await panel.getByRole('button', { name }).boundingBox();
+      expect(box && panelBox && box.x + box.width).toBeLessThanOrEqual(
+        (panelBox?.x ?? 0) + (panelBox?.width ?? 0),
+      );
+    }
+    expect(await overflow(page, 'section.inputs')).toBe(0);
+  });
+
+  test("the fixing table's last column shows without a sideways scroll", async ({ page }) => {
+    test.setTimeout(120_000);
+    await open(page);
+    for (const units of ['Metric (SI)', 'Imperial']) {
+      await page.getByRole('radio', { name: units }).check();
+      const table = page.getByRole('table', { name: 'Pull on the fixings' });
+      await expect(table.getByRole('columnheader', { name: 'End fitting' })).toBeAttached();
+      const scroll = page.locator('.table-scroll', { has: table });
+      expect(
+        await scroll.evaluate((s) => s.scrollWidth - s.clientWidth),
+        units,
+      ).toBeLessThanOrEqual(0);
+    }
+  });
+
+  test('a status message from the file menu does not move the header or what is below it', async ({
+    page,
+  }) => {
+    test.setTimeout(120_000);
+    await open(page);
+    const header = page.locator('header.app-header');
+    const before = await header.boundingBox();
+    const cautionsTop = await top(page, '[aria-label="Cautions"]');
+    const downloaded = page.waitForEvent('download');
+    await page.getByRole('button', { name: 'File and export' }).click();
+    await page.getByRole('button', { name: 'Save file', exact: true }).click();
+    await downloaded;
+    const saved = page.getByRole('status').filter({ hasText: 'The project file was saved.' });
+    await expect(saved).toBeVisible();
+    expect(await header.boundingBox()).toEqual(before);
+    expect(await top(page, '[aria-label="Cautions"]')).toBe(cautionsTop);
+    // Shown in full, under the menu button, inside the window.
+    const box = await saved.boundingBox();
+    expect(box && box.x >= 0 && box.x + box.width <= 1366).toBe(true);
+  });
+});

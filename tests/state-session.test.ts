@@ -9,7 +9,13 @@ import { describe, expect, it } from 'vitest';
 import type { Project } from '../src/core/index.ts';
 import { openProjectText } from '../src/deliverables/projectFile.ts';
 import { AUTOSAVE_KEY, REJECTED_KEY } from '../src/state/autosave.ts';
-import { commit, commitOpened, type Workbench } from '../src/state/commit.ts';
+import {
+  commit,
+  commitOpened,
+  hasUnkeptEdits,
+  markKept,
+  type Workbench,
+} from '../src/state/commit.ts';
 import { demoProject } from '../src/state/demoProject.ts';
 import * as edits from '../src/state/projectEdits.ts';
 import { createProjectStore } from '../src/state/projectStore.ts';
@@ -208,5 +214,88 @@ describe('a stored document in format version 1', () => {
     expect(tab.session.getState().formatNotes).toHaveLength(1);
     expect(commitOpened(demoProject, bench).ok).toBe(true);
     expect(tab.session.getState().formatNotes).toEqual([]);
+  });
+});
+
+describe('opening a project and edits not kept', () => {
+  const benchOf = (tab: ReturnType<typeof openTab>): Workbench => ({
+    store: tab.store,
+    session: tab.session,
+    unitSystem: () => 'si',
+  });
+  const other: Project = { ...demoProject, title: 'Opened from a file' };
+
+  it('opening starts a fresh undo history: nothing to undo right after opening', () => {
+    const tab = openTab(new MemoryStorage());
+    const bench = benchOf(tab);
+    expect(tab.store.temporal.getState().pastStates).toHaveLength(0);
+    expect(commitOpened(other, bench).ok).toBe(true);
+    expect(tab.store.getState().project).toBe(other);
+    expect(tab.store.temporal.getState().pastStates).toHaveLength(0);
+    // Also after edits: opening replaces the history with the opened project's own.
+    expect(tab.edit(edits.setTitle('Edited')).ok).toBe(true);
+    expect(tab.store.temporal.getState().pastStates).toHaveLength(1);
+    expect(commitOpened(demoProject, bench).ok).toBe(true);
+    expect(tab.store.temporal.getState().pastStates).toHaveLength(0);
+    expect(tab.store.temporal.getState().futureStates).toHaveLength(0);
+  });
+
+  it('a shared project viewed with writing paused leaves nothing to undo and the autosave alone', () => {
+    const storage = new MemoryStorage();
+    const tab = openTab(storage);
+    expect(tab.edit(edits.setTitle('My own work')).ok).toBe(true);
+    const mine = tab.store.getState().project;
+    tab.running.pause();
+    expect(commitOpened(other, benchOf(tab)).ok).toBe(true);
+    expect(tab.store.temporal.getState().pastStates).toHaveLength(0);
+    expect(stored(storage).title).toBe('My own work');
+    tab.running.restoreStored(mine);
+    expect(tab.store.getState().project.title).toBe('My own work');
+    // The person's own work was never kept anywhere but the autosave: still not kept.
+    expect(hasUnkeptEdits(benchOf(tab))).toBe(true);
+  });
+
+  it('edits since the last open, save or export are not kept; undo back to it is', () => {
+    const tab = openTab(new MemoryStorage());
+    const bench = benchOf(tab);
+    // A first visit shows the demo: nothing of the person's to lose.
+    expect(hasUnkeptEdits(bench)).toBe(false);
+    expect(tab.edit(edits.setTitle('Edited')).ok).toBe(true);
+    expect(hasUnkeptEdits(bench)).toBe(true);
+    tab.store.undo();
+    expect(hasUnkeptEdits(bench)).toBe(false);
+    tab.store.redo();
+    expect(hasUnkeptEdits(bench)).toBe(true);
+    markKept(tab.store.getState().project, bench);
+    expect(hasUnkeptEdits(bench)).toBe(false);
+    expect(tab.edit(edits.setTitle('Edited again')).ok).toBe(true);
+    expect(hasUnkeptEdits(bench)).toBe(true);
+    expect(commitOpened(other, bench).ok).toBe(true);
+    expect(hasUnkeptEdits(bench)).toBe(false);
+  });
+
+  it('whether the stored work was kept survives a reload', () => {
+    const storage = new MemoryStorage();
+    const first = openTab(storage);
+    expect(first.edit(edits.setTitle('Edited, not saved')).ok).toBe(true);
+    first.running.dispose();
+    const second = openTab(storage);
+    expect(second.store.getState().project.title).toBe('Edited, not saved');
+    expect(hasUnkeptEdits(benchOf(second))).toBe(true);
+    markKept(second.store.getState().project, benchOf(second));
+    second.running.dispose();
+    const third = openTab(storage);
+    expect(hasUnkeptEdits(benchOf(third))).toBe(false);
+    expect(third.edit(edits.setTitle('Edited once more')).ok).toBe(true);
+    third.running.dispose();
+    expect(hasUnkeptEdits(benchOf(openTab(storage)))).toBe(true);
+  });
+
+  it('an autosave stored without the flag is taken as not kept', () => {
+    const storage = new MemoryStorage();
+    storage.setItem(AUTOSAVE_KEY, JSON.stringify({ ...demoProject, title: 'Older autosave' }));
+    const tab = openTab(storage);
+    expect(tab.store.getState().project.title).toBe('Older autosave');
+    expect(hasUnkeptEdits(benchOf(tab))).toBe(true);
   });
 });

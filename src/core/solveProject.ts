@@ -95,8 +95,9 @@ function windlessItemNotes(project: Project, weather: WeatherCase): string[] {
     load.type === 'point' && load.windArea === undefined ? [load.label || `load ${i + 1}`] : [],
   );
   if (names.length === 0) return [];
+  // Short: it sits under the verdict in every windy case's row.
   return [
-    `Wind on hung items: ${names.join(', ')} ${names.length === 1 ? 'states' : 'state'} no wind area, so no wind on ${names.length === 1 ? 'it is' : 'them is'} included (enter the projected area, or 0 where there is none).`,
+    `No wind area given for ${names.join(', ')}: no wind on ${names.length === 1 ? 'it' : 'them'}.`,
   ];
 }
 

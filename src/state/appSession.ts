@@ -1,8 +1,10 @@
 /**
  * The browser workbench's one session over the app's stores, started once by the entry point
- * with the browser's storage, a BroadcastChannel between tabs and the solver worker.
+ * with the browser's storage, a BroadcastChannel between tabs, the solver worker and the design
+ * aids' worker (started here, not by a component, so a remount never starts a second one).
  */
 
+import { connectDesign } from '../worker/connectDesign.ts';
 import type { WorkerLike } from '../worker/protocol.ts';
 import { SolverClient } from '../worker/solverClient.ts';
 import { browserStorage } from './autosave.ts';
@@ -27,7 +29,11 @@ function tabChannel(): ChannelLike | undefined {
   }
 }
 
-export function startAppSession(createWorker: () => WorkerLike, paused: boolean): Session {
+export function startAppSession(
+  createWorker: () => WorkerLike,
+  paused: boolean,
+  createDesignWorker?: () => WorkerLike,
+): Session {
   current?.dispose();
   const solver = new SolverClient({
     createWorker,
@@ -41,6 +47,7 @@ export function startAppSession(createWorker: () => WorkerLike, paused: boolean)
     fallback: demoProject,
     channel: tabChannel(),
     solver,
+    designAids: createDesignWorker ? () => connectDesign(createDesignWorker) : undefined,
     unloadTarget: typeof window === 'undefined' ? undefined : window,
   });
   current.start({ paused });

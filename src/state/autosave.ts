@@ -11,6 +11,28 @@ import { salvageProject } from './salvage.ts';
 export const AUTOSAVE_KEY = 'sagwright:autosave';
 export const OWNER_KEY = 'sagwright:autosave-owner';
 export const REJECTED_KEY = 'sagwright:autosave-rejected';
+/**
+ * Whether the stored document is the one last kept (opened, saved as a file or in the browser's
+ * projects, or exported): "kept", or "edited" when it has edits since. Absent in stores written
+ * before it existed: read as edited, so nothing unkept is replaced without asking.
+ */
+export const KEPT_KEY = 'sagwright:autosave-kept';
+
+export function readKept(storage: KeyValueStorage | undefined): boolean {
+  try {
+    return storage?.getItem(KEPT_KEY) === 'kept';
+  } catch {
+    return false;
+  }
+}
+
+export function writeKept(storage: KeyValueStorage | undefined, kept: boolean): void {
+  try {
+    storage?.setItem(KEPT_KEY, kept ? 'kept' : 'edited');
+  } catch {
+    // storage full or blocked: the autosave's own write reports that
+  }
+}
 
 export type KeyValueStorage = Pick<Storage, 'getItem' | 'setItem' | 'removeItem'>;
 

@@ -121,19 +121,43 @@ export function commitAction(
   return outcome;
 }
 
-/** Replace the whole document with one opened from a file, a stored project or a link. */
 /**
- * Open a whole project in one step; `formatNotes` says what reading an older file format
- * changed (shown until dismissed or another project is opened).
+ * Open a whole project (a file, a stored project, a share link, a new or starter project) in one
+ * step. Opening is not an edit: the undo history starts afresh with it (there is nothing to undo
+ * right after opening, and undo never brings back what was on screen before: the UI asks before
+ * opening over edits not kept, see hasUnkeptEdits). The opened document counts as kept.
+ * `formatNotes` says what reading an older file format changed (shown until dismissed or
+ * another project is opened).
  */
 export function commitOpened(
   project: Project,
   bench: Workbench = appWorkbench,
   formatNotes: readonly string[] = [],
 ): CommitOutcome {
-  const outcome = commit(() => project, {}, bench);
-  if (outcome.ok) bench.session.setState({ formatNotes: [...formatNotes] });
-  return outcome;
+  if (bench.session.getState().otherTabEditing)
+    return { ok: false, reason: 'otherTab', issues: [{ path: '', message: OTHER_TAB_RULE }] };
+  const checked = validateProject(project);
+  if (!checked.ok) return { ok: false, reason: 'invalid', issues: checked.issues };
+  bench.session.setState({ kept: project, formatNotes: [...formatNotes], editNotice: null });
+  bench.store.getState().resetProject(project);
+  return { ok: true, project, changes: [] };
+}
+
+/**
+ * The document was kept where the person can get it back (saved as a file or in this
+ * browser's projects, or exported): opening another project over it need not ask.
+ */
+export function markKept(project: Project, bench: Workbench = appWorkbench): void {
+  bench.session.setState({ kept: project });
+}
+
+/**
+ * True when the document on screen has edits since it was last opened, saved or exported:
+ * opening another project over it asks first. Undoing back to the kept document counts as no
+ * edits (the store keeps the very same object).
+ */
+export function hasUnkeptEdits(bench: Workbench = appWorkbench): boolean {
+  return bench.store.getState().project !== bench.session.getState().kept;
 }
 
 export function dismissFormatNotes(bench: Workbench = appWorkbench): void {

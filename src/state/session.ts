@@ -6,16 +6,18 @@
  * tab that opened last edits; the others show its changes as they are saved and offer to take
  * over, and a tab that has lost the document never overwrites it. A refused write is told at
  * once, the document stays in memory, and leaving the page asks first. Solving goes through the
- * solver link.
+ * solver link; the design aids' worker is started and stopped with the session too.
  */
 import { type Project, validateProject } from '../core/index.ts';
 import {
   claim,
   type KeyValueStorage,
   openAutosave,
+  readKept,
   readOwner,
   type WriteOutcome,
   writeAutosave,
+  writeKept,
 } from './autosave.ts';
 import type { ProjectStore } from './projectStore.ts';
 import type { ResultsStore } from './resultsStore.ts';
@@ -51,6 +53,11 @@ export interface SessionOptions {
   fallback: Project;
   channel?: ChannelLike;
   solver?: SolverPort;
+  /**
+   * Starts the design aids (the second worker that answers the tension window and the chooser)
+   * once the document is open; returns its stop function, called on dispose.
+   */
+  designAids?: () => () => void;
   tabId?: string;
   unloadTarget?: UnloadGuardTarget;
 }
@@ -88,8 +95,19 @@ export function createSession(options: SessionOptions) {
     else options.unloadTarget.removeEventListener('beforeunload', warnBeforeUnload);
   }
 
+  /** Store whether the document on screen is the one last kept, beside the autosave. */
+  function storeKept() {
+    writeKept(storage, store.getState().project === session.getState().kept);
+  }
+
+  /** A document shown from storage is kept as far as the stored flag says. */
+  function keptFromStorage(project: Project) {
+    session.setState({ kept: readKept(storage) ? project : null });
+  }
+
   function record(outcome: WriteOutcome) {
     if (outcome.ok) {
+      storeKept();
       session.setState({ save: { kind: 'saved' }, unsavedEdits: false });
       setGuard(false);
       channel?.postMessage({ type: 'saved', tab, project: store.getState().project });
@@ -125,6 +143,7 @@ export function createSession(options: SessionOptions) {
     quiet = true;
     try {
       store.getState().resetProject(project);
+      keptFromStorage(project);
     } finally {
       quiet = false;
     }
@@ -145,6 +164,7 @@ export function createSession(options: SessionOptions) {
     quiet = true;
     try {
       store.getState().resetProject(opened.project);
+      keptFromStorage(opened.project);
     } finally {
       quiet = false;
     }
@@ -182,11 +202,22 @@ export function createSession(options: SessionOptions) {
       const opened = openAutosave(storage, options.fallback);
       quiet = true;
       store.getState().resetProject(opened.project);
+      // Nothing stored: the fallback is as good as kept. A repaired document never is.
+      if (opened.project === options.fallback) session.setState({ kept: opened.project });
+      else if (opened.recovery) session.setState({ kept: null });
+      else keptFromStorage(opened.project);
       quiet = false;
       if (opened.recovery) session.setState({ recovery: opened.recovery });
       if (opened.formatNotes) session.setState({ formatNotes: opened.formatNotes });
       stops.push(
         store.subscribe((s, previous) => s.project !== previous.project && save(s.project)),
+      );
+      // Kept elsewhere (saved, exported, opened): the stored flag follows while this tab writes.
+      stops.push(
+        session.subscribe((s, previous) => {
+          if (s.kept === previous.kept || quiet || paused || s.otherTabEditing) return;
+          if (s.save.kind === 'saved') storeKept();
+        }),
       );
       if (channel) {
         channel.onmessage = (event) => receive(event.data);
@@ -197,6 +228,7 @@ export function createSession(options: SessionOptions) {
         session.setState({ save: { kind: 'paused' } });
       } else hold();
       if (options.solver) stops.push(linkSolver(store, options.results, options.solver));
+      if (options.designAids) stops.push(options.designAids());
     },
     /** Stop writing the autosave (a shared project is on screen); the stored work stays. */
     pause() {

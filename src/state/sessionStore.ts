@@ -5,7 +5,7 @@
  * Written by the session (session.ts) and the commit function (commit.ts); read by the UI.
  */
 import { create } from 'zustand';
-import type { ValidationIssue } from '../core/index.ts';
+import type { Project, ValidationIssue } from '../core/index.ts';
 
 export type SaveState =
   /** The document on screen is the one stored. */
@@ -44,6 +44,13 @@ export interface SessionState {
   editNotice: EditNotice | null;
   /** The project on screen was read from an older file format: what that changed, in words. */
   formatNotes: string[];
+  /**
+   * The document as it was last kept somewhere the person can get it back from: opened (a file,
+   * a stored project, a share link, a new or starter project), saved as a file or in this
+   * browser's projects, or exported (PDF, CSV, plot image). The document on screen differs from
+   * it when there are edits a new opening would lose (see hasUnkeptEdits in commit.ts).
+   */
+  kept: Project | null;
 }
 
 export const initialSessionState: SessionState = {
@@ -53,6 +60,7 @@ export const initialSessionState: SessionState = {
   recovery: null,
   editNotice: null,
   formatNotes: [],
+  kept: null,
 };
 
 export function createSessionStore() {

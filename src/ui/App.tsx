@@ -9,7 +9,6 @@ import { appSession } from '../state/appSession.ts';
 import { setTitle } from '../state/projectEdits.ts';
 import { useProjectStore } from '../state/projectStore.ts';
 import { useSessionStore } from '../state/sessionStore.ts';
-import { connectDesign } from '../worker/connectDesign.ts';
 import { CautionsStrip } from './CautionsStrip.tsx';
 import { ExportMenu } from './export/ExportMenu.tsx';
 import { TextField } from './fields/TextField.tsx';
@@ -41,7 +40,6 @@ function useOwnerCheck() {
 }
 
 export function App() {
-  useEffect(() => connectDesign(), []);
   useOwnerCheck();
   const title = useProjectStore((s) => s.project.title);
   const locked = useSessionStore((s) => s.otherTabEditing);

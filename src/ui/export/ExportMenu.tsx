@@ -1,15 +1,18 @@
 /**
- * The header's file and export menu: save and open project files, share link, projects in this
- * browser, PDF report, plot images, CSV and the client view; plus the shared-project banner.
- * Refused files list the field paths and leave the open project as it was.
+ * The header's file and export menu: a new project (blank or a starter), save and open project
+ * files, share link, projects in this browser, PDF report, plot images, CSV and the client view;
+ * plus the shared-project banner. Refused files list the field paths and leave the open project
+ * as it was. Opening anything over edits not kept (hasUnkeptEdits) asks first.
  */
 import { lazy, Suspense, useEffect, useMemo, useRef, useState } from 'react';
 import './export.css';
 import type { Project, ProjectResults } from '../../core/index.ts';
 import { type OpenResult, PROJECT_FILE_EXTENSION } from '../../deliverables/projectFile.ts';
-import { commit, commitOpened } from '../../state/commit.ts';
+import { commit, commitOpened, hasUnkeptEdits, markKept } from '../../state/commit.ts';
 import { useProjectStore } from '../../state/projectStore.ts';
+import type { Starter } from '../../state/starters.ts';
 import { useUiStore } from '../../state/uiStore.ts';
+import { ConfirmReplaceDialog, type ReplaceQuestion } from './ConfirmReplaceDialog.tsx';
 import { ExportNotice, type Notice, SharedBanner } from './ExportNotices.tsx';
 import { useSharedProject } from './useSharedProject.ts';
 
@@ -23,8 +26,14 @@ const LibraryDialog = lazy(() =>
 const ReportDialog = lazy(() =>
   import('./ReportDialog.tsx').then((m) => ({ default: m.ReportDialog })),
 );
+const NewProjectDialog = lazy(() =>
+  import('./NewProjectDialog.tsx').then((m) => ({ default: m.NewProjectDialog })),
+);
 
-type Dialog = 'none' | 'report' | 'library' | 'client';
+/** How long a plain status from the menu stays on screen. */
+const STATUS_MS = 12_000;
+
+type Dialog = 'none' | 'new' | 'report' | 'library' | 'client';
 
 /** The report dialog's record goes into the document (one undo step) before the report is made. */
 function saveRecord(withRecord: Project) {
@@ -90,6 +99,7 @@ export function ExportMenu() {
   const [dialog, setDialog] = useState<Dialog>('none');
   const [busy, setBusy] = useState(false);
   const [notice, setNotice] = useState<Notice>(null);
+  const [question, setQuestion] = useState<ReplaceQuestion | null>(null);
   const fileInput = useRef<HTMLInputElement>(null);
   const menuButton = useRef<HTMLButtonElement>(null);
   const root = useRef<HTMLDivElement>(null);
@@ -101,25 +111,39 @@ export function ExportMenu() {
   useEffect(() => {
     if (open) void loadActions();
   }, [open]);
+  // A plain status ("The plot PNG was saved.") floats over the page's edge: it goes by itself
+  // after a while. Refusals and a link to copy stay until dismissed.
+  useEffect(() => {
+    if (notice?.kind !== 'status') return;
+    const timer = setTimeout(() => setNotice((now) => (now === notice ? null : now)), STATUS_MS);
+    return () => clearTimeout(timer);
+  }, [notice]);
 
-  /** `what` names the file made, e.g. "The plot SVG". */
-  const run = (what: string, work: () => unknown) => async () => {
-    setOpen(false);
-    menuButton.current?.focus();
-    setBusy(true);
-    try {
-      await work();
-      setNotice({ kind: 'status', text: `${what} was saved.` });
-    } catch (error) {
-      setNotice({
-        kind: 'refused',
-        title: `${what} could not be made`,
-        issues: [{ path: '', message: error instanceof Error ? error.message : String(error) }],
-      });
-    } finally {
-      setBusy(false);
-    }
-  };
+  /**
+   * `what` names the file made, e.g. "The plot SVG"; once it is made, `exported` (the document
+   * written into it) counts as kept.
+   */
+  const run =
+    (what: string, work: () => unknown, exported: Project = project) =>
+    async () => {
+      setOpen(false);
+      menuButton.current?.focus();
+      setNotice(null); // "Working…" takes the notice's place under the button
+      setBusy(true);
+      try {
+        await work();
+        markKept(exported);
+        setNotice({ kind: 'status', text: `${what} was saved.` });
+      } catch (error) {
+        setNotice({
+          kind: 'refused',
+          title: `${what} could not be made`,
+          issues: [{ path: '', message: error instanceof Error ? error.message : String(error) }],
+        });
+      } finally {
+        setBusy(false);
+      }
+    };
   const show = (next: Dialog) => () => {
     setOpen(false);
     setDialog(next);
@@ -145,18 +169,28 @@ export function ExportMenu() {
       });
       return;
     }
-    const committed = commitOpened(result.project, undefined, result.notes);
-    if (!committed.ok) {
-      setNotice({
-        kind: 'refused',
-        title: `${source} was not opened; your project is unchanged`,
-        issues: committed.issues,
-      });
-      return;
-    }
-    setDialog('none');
-    setNotice({ kind: 'status', text: `Opened “${result.project.title}”.` });
+    const opened = result.project;
+    whenReplaceable(`“${opened.title}”`, () => {
+      const committed = commitOpened(opened, undefined, result.notes);
+      if (!committed.ok) {
+        setNotice({
+          kind: 'refused',
+          title: `${source} was not opened; your project is unchanged`,
+          issues: committed.issues,
+        });
+        return;
+      }
+      setDialog('none');
+      setNotice({ kind: 'status', text: `Opened “${opened.title}”.` });
+    });
   };
+  /** Open now, or ask first when the project on screen has edits not kept anywhere. */
+  const whenReplaceable = (what: string, open: () => void) => {
+    if (hasUnkeptEdits()) setQuestion({ what, proceed: open });
+    else open();
+  };
+  const startFrom = (starter: Starter) =>
+    applyOpened({ ok: true, project: starter.project, notes: [] }, `“${starter.name}”`);
   const onFile = async (event: React.ChangeEvent<HTMLInputElement>) => {
     const file = event.target.files?.[0];
     event.target.value = '';
@@ -164,6 +198,7 @@ export function ExportMenu() {
   };
 
   const items: [string, () => void][] = [
+    ['New project…', show('new')],
     [
       'Save file',
       run('The project file', async () => (await loadActions()).saveProjectFile(project)),
@@ -234,7 +269,11 @@ export function ExportMenu() {
           ))}
         </ul>
       )}
-      {busy && <p role="status">Working…</p>}
+      {busy && (
+        <p role="status" className="export-notice">
+          Working…
+        </p>
+      )}
       <ExportNotice notice={notice} onDismiss={() => setNotice(null)} />
       <SharedBanner
         state={shared.state}
@@ -259,8 +298,11 @@ export function ExportMenu() {
                 });
                 return;
               }
-              run('The PDF report', async () =>
-                (await loadActions()).saveReport({ ...request, project: saved.project }, units),
+              run(
+                'The PDF report',
+                async () =>
+                  (await loadActions()).saveReport({ ...request, project: saved.project }, units),
+                saved.project,
               )().then(closeDialog);
             }}
           />
@@ -273,6 +315,9 @@ export function ExportMenu() {
             onClose={closeDialog}
           />
         )}
+        {dialog === 'new' && (
+          <NewProjectDialog returnFocus={menuButton} onChoose={startFrom} onClose={closeDialog} />
+        )}
         {dialog === 'client' && clientResults && (
           <ClientView
             project={project}
@@ -283,6 +328,13 @@ export function ExportMenu() {
           />
         )}
       </Suspense>
+      {question && (
+        <ConfirmReplaceDialog
+          question={question}
+          current={project.title}
+          onClose={() => setQuestion(null)}
+        />
+      )}
     </div>
   );
 }

@@ -12,6 +12,7 @@ import {
   ProjectLibrary,
   TITLE_MAX_CHARS,
 } from '../../deliverables/projectLibrary.ts';
+import { markKept } from '../../state/commit.ts';
 import { useModal } from './useModal.ts';
 
 const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
@@ -131,6 +132,7 @@ export function LibraryDialog({
         onClick={act(async () => {
           setDeleted(null);
           setDone(`Saved “${(await library.save(project)).title}”.`);
+          markKept(project);
         })}
       >
         Save the open project here

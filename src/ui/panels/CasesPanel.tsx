@@ -13,11 +13,14 @@ export function CasesPanel() {
   return (
     <section className="panel" aria-labelledby="cases-heading">
       <h2 id="cases-heading">Weather cases</h2>
-      <table className="edit-table" aria-labelledby="cases-heading">
+      <table className="edit-table cases-table" aria-labelledby="cases-heading">
         <thead>
           <tr>
             <th scope="col">Name</th>
-            <th scope="col">Temperature ({unitSymbol('temperature', units)})</th>
+            {/* A soft hyphen lets the long word break, so the table fits a laptop's panel. */}
+            <th scope="col">
+              Temper{'\u00AD'}ature ({unitSymbol('temperature', units)})
+            </th>
             <th scope="col">Ice ({unitSymbol('diameter', units)})</th>
             <th scope="col">Wind ({unitSymbol('speed', units)})</th>
             <th scope="col">Loads on</th>
