@@ -8,6 +8,7 @@
 import { largestSag, largestStateTension } from './caseChecks.ts';
 import { loadStateOfCase } from './loads.ts';
 import { buildProjectModel, type ProjectModel } from './projectModel.ts';
+import type { SpanModel } from './spanModel.ts';
 import { type StateSolution, solveChangeOfState, solveInstallation } from './states.ts';
 
 /** The relative error the automatic refinement aims below. */
@@ -35,6 +36,17 @@ export interface StateSummary {
   lengths?: SpanLengths[];
 }
 
+/** Each span's element lengths as they are now (copied): a later solve's warm start. */
+export function spanLengths(spans: readonly SpanModel[]): SpanLengths[] {
+  return spans.map((span) => ({
+    tensionN: span.storedTensionN,
+    unstressed: span.unstressedElement.slice(),
+    unstressedSlope: span.unstressedElementSlope.slice(),
+    arc: span.hungAlong ? span.arcElement.slice() : null,
+    arcSlope: span.hungAlong ? span.arcElementSlope.slice() : null,
+  }));
+}
+
 /** A state's summary; with `keepLengths`, also its spans' element lengths (copied). */
 export function summarise(state: StateSolution, keepLengths = false): StateSummary {
   return {
@@ -42,23 +54,13 @@ export function summarise(state: StateSolution, keepLengths = false): StateSumma
     spanTensions: state.spans.map((s) => s.tensionN),
     maxTension: largestStateTension(state.spans),
     sag: largestSag(state.spans),
-    ...(keepLengths
-      ? {
-          lengths: state.spans.map(({ span }) => ({
-            tensionN: span.storedTensionN,
-            unstressed: span.unstressedElement.slice(),
-            unstressedSlope: span.unstressedElementSlope.slice(),
-            arc: span.hungAlong ? span.arcElement.slice() : null,
-            arcSlope: span.hungAlong ? span.arcElementSlope.slice() : null,
-          })),
-        }
-      : {}),
+    ...(keepLengths ? { lengths: spanLengths(state.spans.map((s) => s.span)) } : {}),
   };
 }
 
 /**
- * Start the nested mesh's spans (every element split in `split`) from a coarser state's element
- * lengths: each piece takes its share. Only the catenary loads' starting values change, so the
+ * Start the spans of a mesh (every element split in `split`, 1 for the same mesh) from a state's
+ * element lengths on the coarser one: each piece takes its share. Only the catenary loads' starting values change, so the
  * state solved afterwards is the same; it is reached in fewer iterations.
  */
 export function seedLengths(model: ProjectModel, lengths: readonly SpanLengths[], split: number) {

@@ -6,6 +6,7 @@
  * margin = clearance − required (m) over the whole span and each zone (passes at ≥ 0).
  */
 import { clearanceOver, largestSag, largestStateTension, type SolvedSpan } from '../caseChecks.ts';
+import { type SpanLengths, seedLengths, spanLengths } from '../discretisation.ts';
 import { resolveEndFittings } from '../endFittings.ts';
 import { hungDrops, loadStateOfCase } from '../loads.ts';
 import type { ProjectModel } from '../projectModel.ts';
@@ -84,15 +85,24 @@ export type CaseSubset = ReadonlySet<number> | undefined;
  * `visit` with each solved state's index (−1 the installation), name, spans and checks.
  */
 export function createCheckEvaluator(model: ProjectModel) {
-  // Each case's span tensions from its last solve (a warm start), none before the first.
+  // Each case's span tensions from its last solve (a warm start), none before the first; and
+  // each state's element lengths (its catenary loads), so every state starts from its own.
   const guesses: (number[] | undefined)[] = model.project.cases.map(() => undefined);
+  const lengths = new Map<number, SpanLengths[]>();
+  const warm = (index: number) => {
+    const last = lengths.get(index);
+    if (last) seedLengths(model, last, 1);
+  };
+  const keep = (index: number) => lengths.set(index, spanLengths(model.spans));
   return (
     tensionN: number,
     visit: (index: number, name: string, spans: SolvedSpan[], checks: CheckValue[]) => void,
     only?: CaseSubset,
   ): boolean => {
+    warm(-1);
     const installed = solveInstallation(model, tensionN);
     if (!installed.solved) return false;
+    keep(-1);
     visit(
       -1,
       model.installation.name,
@@ -102,6 +112,7 @@ export function createCheckEvaluator(model: ProjectModel) {
     for (const [i, weather] of model.project.cases.entries()) {
       if (only && !only.has(i)) continue;
       const guess = guesses[i] ?? installed.spans.map((s) => s.tensionN);
+      warm(i);
       const state = solveChangeOfState(
         model,
         { ...loadStateOfCase(weather), name: weather.name },
@@ -109,6 +120,7 @@ export function createCheckEvaluator(model: ProjectModel) {
         guess,
       );
       if (!state.solved) return false;
+      keep(i);
       guesses[i] = state.spans.map((s) => s.tensionN);
       visit(
         i,
