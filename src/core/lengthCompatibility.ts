@@ -141,13 +141,18 @@ export function solveSectionForLength(
   unstressedLengthM: number,
   tensionGuessN: number,
   joints: readonly JointKind[] = equalHorizontalJoints(spans.length),
+  keepShape = false,
 ): SectionSolution {
   const exact = wire.theory === 'exact';
   const now = createSpanTensions(spans.length);
   const next = createSpanTensions(spans.length);
   let H = tensionGuessN > 0 && Number.isFinite(tensionGuessN) ? tensionGuessN : 1;
-  updateLoads(spans, wire, exact ? predictedTensions(spans, H) : undefined, true);
-  solveShapes(spans, true);
+  // `keepShape`: the spans hold a neighbouring state with the same loads but the temperature
+  // (a set-up row): its shape and loads are the first step's, the first update corrects them.
+  if (!(keepShape && exact)) {
+    updateLoads(spans, wire, exact ? predictedTensions(spans, H) : undefined, true);
+    solveShapes(spans, true);
+  }
   let previousLoadChange = Number.POSITIVE_INFINITY;
   let lengthSlope = Number.NaN;
   for (let k = 1; k <= JOINT_ITERATIONS; k++) {

@@ -44,13 +44,15 @@ export interface SetUpState {
 /**
  * The wire of cut lengths `unstressedSpans` (m, at t₀) pulled through as at installation at
  * `temperature` (°C), installation loads, no ice or wind: pulleys keep the tension equal, every
- * other support the horizontal tension. Leaves the span models in that state.
+ * other support the horizontal tension. Leaves the span models in that state. `afterRow`: the
+ * span models hold another set-up row (same loads), whose shape is the first iteration's.
  */
 export function solveSetUpState(
   model: ProjectModel,
   unstressedSpans: readonly number[],
   temperature: number,
   tensionGuessN: number,
+  afterRow = false,
 ): SetUpState {
   const total = unstressedSpans.reduce((a, b) => a + b, 0);
   const wire = prepareState(model, { ...model.installation, temperature });
@@ -61,6 +63,7 @@ export function solveSetUpState(
     lengthM,
     tensionGuessN,
     model.installationJoints,
+    afterRow,
   );
   const spans = model.spans.map((span, j) => ({ span, tensionN: solution.spanTensionsN[j] }));
   return {
@@ -145,7 +148,8 @@ export function setUpChart(
       lengthM,
       solved[solved.length - 1]?.tensionN ?? installationTensionN,
     );
-    const state = solveSetUpState(model, unstressedSpans, temperature, guess);
+    // After the first row the spans hold another row: the same loads, another temperature.
+    const state = solveSetUpState(model, unstressedSpans, temperature, guess, i !== start);
     solved.push(state);
     rows[i] = {
       temperature,
