@@ -189,9 +189,9 @@ describe('the set-up predictor', () => {
   });
 
   it('extrapolates a quadratic H(L₀) exactly from three rows', () => {
-    const H = (L: number) => 500 + 3000 * (L - 30) - 20000 * (L - 30) ** 2;
-    const rows = [30, 30.001, 30.002].map((L) => state(H(L), L));
-    expect(neighbourGuess(rows, 30.003, 1)).toBeCloseTo(H(30.003), 9);
+    const tension = (L: number) => 500 + 3000 * (L - 30) - 20000 * (L - 30) ** 2;
+    const rows = [30, 30.001, 30.002].map((L) => state(tension(L), L));
+    expect(neighbourGuess(rows, 30.003, 1)).toBeCloseTo(tension(30.003), 9);
   });
 
   it('takes one Newton step from a single row and falls back without a slope', () => {
