@@ -15,7 +15,11 @@ import {
 
 type Timer = (call: () => void, runMs?: number) => number;
 
-export function designRows(timeCall: Timer, files: readonly string[]): string[] {
+export function designRows(
+  timeCall: Timer,
+  files: readonly string[],
+): { rows: string[]; chooserMs: Record<string, number> } {
+  const chooserMs: Record<string, number> = {};
   const rows = [
     '| design aid (µs per call) | project | time (µs) | × solveProject |',
     '|---|---|---:|---:|',
@@ -29,14 +33,13 @@ export function designRows(timeCall: Timer, files: readonly string[]): string[] 
       'tension window (both ends + advice)',
       timeCall(() => tensionWindow(project), 400),
     );
-    row(
-      `wire chooser (${WIRE_CATALOG.length} catalogue wires)`,
-      timeCall(() => chooseWires(project), 1500),
-    );
+    const chooser = timeCall(() => chooseWires(project), 1500);
+    chooserMs[file] = chooser / 1000;
+    row(`wire chooser (${WIRE_CATALOG.length} catalogue wires)`, chooser);
     row(
       "today's setting at 8 °C",
       timeCall(() => settingAt(project, 8), 400),
     );
   }
-  return rows;
+  return { rows, chooserMs };
 }

@@ -8,7 +8,8 @@
 /** A factorised symmetric band matrix; solve() overwrites and returns its argument. */
 export interface BandFactor {
   readonly size: number;
-  solve(rhs: Float64Array): Float64Array;
+  /** Overwrites `rhs` with the solution; with `source`, the right-hand side is read from there. */
+  solve(rhs: Float64Array, source?: Float64Array): Float64Array;
 }
 
 /**
@@ -28,8 +29,11 @@ export function factorTridiagonal(diag: Float64Array, off: Float64Array): BandFa
   }
   return {
     size: n,
-    solve(rhs: Float64Array): Float64Array {
-      for (let i = 1; i < n; i++) rhs[i] -= l[i - 1] * rhs[i - 1];
+    solve(rhs: Float64Array, source?: Float64Array): Float64Array {
+      if (source) {
+        if (n > 0) rhs[0] = source[0];
+        for (let i = 1; i < n; i++) rhs[i] = source[i] - l[i - 1] * rhs[i - 1];
+      } else for (let i = 1; i < n; i++) rhs[i] -= l[i - 1] * rhs[i - 1];
       for (let i = 0; i < n; i++) rhs[i] /= d[i];
       for (let i = n - 2; i >= 0; i--) rhs[i] -= l[i] * rhs[i + 1];
       return rhs;
@@ -65,7 +69,8 @@ export function factorPentadiagonal(
   }
   return {
     size: n,
-    solve(rhs: Float64Array): Float64Array {
+    solve(rhs: Float64Array, source?: Float64Array): Float64Array {
+      if (source) rhs.set(source.subarray(0, n));
       for (let i = 1; i < n; i++) {
         rhs[i] -= l1[i - 1] * rhs[i - 1];
         if (i >= 2) rhs[i] -= l2[i - 2] * rhs[i - 2];

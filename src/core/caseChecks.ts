@@ -141,13 +141,14 @@ function spanResult({ span, tensionN }: SolvedSpan): SpanResult {
 }
 
 /** Sag of one solved span, m. */
-export function largestSpanSag(span: SolvedSpan): number {
-  return spanResult(span).sag;
+export function largestSpanSag({ span, tensionN }: SolvedSpan): number {
+  return -minimumAboveLine(span, tensionN, span.x0, span.x1, span.x0, span.z0, span.chordSlope)
+    .value;
 }
 
 /** Largest sag over the spans of a solved state, m. */
 export function largestSag(spans: readonly SolvedSpan[]): number {
-  return Math.max(...spans.map((s) => spanResult(s).sag));
+  return Math.max(...spans.map(largestSpanSag));
 }
 
 /** Largest tension over the spans of a solved state, N. */

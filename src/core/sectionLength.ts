@@ -18,7 +18,12 @@ export interface WireLoading {
   windNPerM: number;
 }
 
-/** Unstressed length of one span at H (m) and dL₀/dH (m/N); optionally stored per element. */
+/**
+ * Unstressed length of one span at H (m) and dL₀/dH (m/N); optionally stored per element with
+ * d/dH of the element's unstressed and arc lengths (the shape held fixed). Per Gauss point, with
+ * a = v₁' and b = y₁' at unit tension: z' = c − a/H, y' = b/H, r = √(1 + z'² + y'²),
+ * r' = (z' a − y' b)/(H² r), T = H r, f = r/(1 + T/EA), f' = (r' − f T'/EA)/(1 + T/EA).
+ */
 export function spanUnstressedLength(
   span: SpanModel,
   tensionN: number,
@@ -26,44 +31,59 @@ export function spanUnstressedLength(
   storeElements: boolean,
 ): { value: number; slope: number } {
   const H = tensionN;
-  const invH2 = 1 / (H * H);
+  const invH = 1 / H;
+  const invH2 = invH * invH;
+  const invEA = 1 / axialStiffness;
   const c = span.chordSlope;
+  const lengths = span.elementLength;
+  const qv = span.qVertical;
+  const qy = span.qLateral;
+  const mv = span.slopeV1;
+  const my = span.slopeY1;
+  const s0 = span.unstressedElement;
+  const s1 = span.unstressedElementSlope;
+  const a0 = span.arcElement;
+  const a1 = span.arcElementSlope;
+  const arcs = storeElements && span.hungAlong;
   let value = 0;
   let slope = 0;
-  for (let e = 0; e < span.elementLength.length; e++) {
-    const L = span.elementLength[e];
-    const curvV = 0.5 * span.qVertical[e] * L * GAUSS2;
-    const curvY = 0.5 * span.qLateral[e] * L * GAUSS2;
+  for (let e = 0; e < lengths.length; e++) {
+    const L = lengths[e];
+    const curvV = 0.5 * qv[e] * L * GAUSS2;
+    const curvY = 0.5 * qy[e] * L * GAUSS2;
     let element = 0;
     let elementSlope = 0;
     let arc = 0;
     let arcSlope = 0;
     for (let g = -1; g <= 1; g += 2) {
-      const av = span.slopeV1[e] - g * curvV;
-      const ay = span.slopeY1[e] - g * curvY;
-      const sz = c - av / H;
-      const sy = ay / H;
+      const av = mv[e] - g * curvV;
+      const ay = my[e] - g * curvY;
+      const sz = c - av * invH;
+      const sy = ay * invH;
       const r = Math.sqrt(1 + sz * sz + sy * sy);
-      const stretch = 1 + (H * r) / axialStiffness;
-      const f = r / stretch;
-      const drdH = ((sz * av - sy * ay) * invH2) / r;
-      const dTdH = r + H * drdH;
+      const invS = 1 / (1 + H * r * invEA);
+      const f = r * invS;
+      const dr = ((sz * av - sy * ay) * invH2) / r;
       element += f;
-      elementSlope += (drdH - (f * dTdH) / axialStiffness) / stretch;
+      elementSlope += (dr - f * (r + H * dr) * invEA) * invS;
       arc += r;
-      arcSlope += drdH;
+      arcSlope += dr;
     }
-    element *= 0.5 * L;
-    elementSlope *= 0.5 * L;
+    const half = 0.5 * L;
+    element *= half;
+    elementSlope *= half;
     if (storeElements) {
-      span.unstressedElement[e] = element;
-      span.unstressedElementSlope[e] = elementSlope;
-      span.arcElement[e] = arc * 0.5 * L;
-      span.arcElementSlope[e] = arcSlope * 0.5 * L;
+      s0[e] = element;
+      s1[e] = elementSlope;
+      if (arcs) {
+        a0[e] = arc * half;
+        a1[e] = arcSlope * half;
+      }
     }
     value += element;
     slope += elementSlope;
   }
+  if (storeElements) span.storedTensionN = H;
   return { value, slope };
 }
 
@@ -87,45 +107,100 @@ export function sectionUnstressedLength(
 /**
  * Set element loads from the wire loading and return the largest relative change. The exact
  * theory scales the wire's load by ds₀/dx and the ice and wind on hung cables by ds/dx, both of
- * the last solved state moved to first order by the span's tension shift (N) when given (a warm
- * start across states and trial tensions; before any state ds₀/dx = 1 and ds/dx = √(1 + c²)).
+ * the last solved state moved to first order in H to the span tensions given (a warm start
+ * across states and trial tensions; before any state ds₀/dx = 1 and ds/dx = √(1 + c²)).
  * The parabolic theory keeps the wire's load per horizontal metre and turns the hung cables' ice
  * and wind into per horizontal metre with the chord's ds/dx = √(1 + c²).
  */
 export function updateLoads(
   spans: readonly SpanModel[],
   wire: WireLoading,
-  tensionShiftN?: Float64Array,
+  tensionsN?: ArrayLike<number>,
+  assemble = false,
 ): number {
   const useGeometry = wire.theory === 'exact';
   let change = 0;
   let scale = 0;
-  spans.forEach((span, j) => {
-    const shift = tensionShiftN ? tensionShiftN[j] : 0;
+  for (let j = 0; j < spans.length; j++) {
+    const span = spans[j];
+    const stored = span.storedTensionN;
+    const d = tensionsN && Number.isFinite(stored) ? tensionsN[j] - stored : 0;
     let lateral = false;
     for (const force of span.pointLateral) if (force !== 0) lateral = true;
     const chordArcRatio = Math.sqrt(1 + span.chordSlope * span.chordSlope);
-    for (let e = 0; e < span.elementLength.length; e++) {
-      const L = span.elementLength[e];
-      const unstressed = span.unstressedElement[e] + span.unstressedElementSlope[e] * shift;
-      const ratio = useGeometry && unstressed > 0 ? unstressed / L : 1;
-      const arc = span.arcElement[e] + span.arcElementSlope[e] * shift;
-      const arcRatio = useGeometry && arc > 0 ? arc / L : chordArcRatio;
-      const q = wire.weightNPerM * ratio + span.hungVertical[e] + span.hungIceAlong[e] * arcRatio;
-      const p = wire.windNPerM * ratio + span.hungWindAlong[e] * arcRatio;
-      change = Math.max(change, Math.abs(q - span.qVertical[e]), Math.abs(p - span.qLateral[e]));
-      scale = Math.max(scale, Math.abs(q), Math.abs(p));
-      span.qVertical[e] = q;
-      span.qLateral[e] = p;
+    const lengths = span.elementLength;
+    const s0 = span.unstressedElement;
+    const s1 = span.unstressedElementSlope;
+    const a0 = span.arcElement;
+    const a1 = span.arcElementSlope;
+    const hungV = span.hungVertical;
+    const iceA = span.hungIceAlong;
+    const windA = span.hungWindAlong;
+    const qv = span.qVertical;
+    const qy = span.qLateral;
+    const w = wire.weightNPerM;
+    const wind = wire.windNPerM;
+    // With `assemble`, the consistent nodal loads go into loadV and loadY (see
+    // addElementLoads): linear elements qL/2 to each end, quadratic qL/6 · (1, 4, 1).
+    const v = span.loadV;
+    const y = span.loadY;
+    const order = span.mesh.order;
+    if (assemble) {
+      v.fill(0);
+      y.fill(0);
+    }
+    const inverse = span.inverseLength;
+    const arcs = span.hungAlong;
+    for (let e = 0; e < lengths.length; e++) {
+      const invL = inverse[e];
+      let ratio = 1;
+      let arcRatio = chordArcRatio;
+      if (useGeometry) {
+        const unstressed = s0[e] + s1[e] * d;
+        if (unstressed > 0) ratio = unstressed * invL;
+        if (arcs) {
+          const arc = a0[e] + a1[e] * d;
+          if (arc > 0) arcRatio = arc * invL;
+        }
+      }
+      const q = w * ratio + hungV[e] + iceA[e] * arcRatio;
+      const p = wind * ratio + windA[e] * arcRatio;
+      const dq = Math.abs(q - qv[e]);
+      const dp = Math.abs(p - qy[e]);
+      if (dq > change) change = dq;
+      if (dp > change) change = dp;
+      const aq = Math.abs(q);
+      const ap = Math.abs(p);
+      if (aq > scale) scale = aq;
+      if (ap > scale) scale = ap;
+      qv[e] = q;
+      qy[e] = p;
       if (p !== 0) lateral = true;
+      if (!assemble) continue;
+      if (order === 1) {
+        const h = 0.5 * lengths[e];
+        v[e] += q * h;
+        v[e + 1] += q * h;
+        y[e] += p * h;
+        y[e + 1] += p * h;
+      } else {
+        const h = lengths[e] / 6;
+        v[2 * e] += q * h;
+        v[2 * e + 1] += 4 * q * h;
+        v[2 * e + 2] += q * h;
+        y[2 * e] += p * h;
+        y[2 * e + 1] += 4 * p * h;
+        y[2 * e + 2] += p * h;
+      }
     }
     span.lateralLoaded = lateral;
-  });
+  }
   return scale > 0 ? change / scale : 0;
 }
 
-export function solveShapes(spans: readonly SpanModel[]): void {
-  for (const span of spans) solveUnitShapes(span);
+/** Solve every span's unit shapes; `assembled` when updateLoads assembled their loads. */
+export function solveShapes(spans: readonly SpanModel[], assembled = false): void {
+  for (const span of spans) solveUnitShapes(span, assembled);
 }
 
 /**

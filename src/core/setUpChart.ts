@@ -36,27 +36,34 @@ export interface SetUpState {
   /** The largest span horizontal tension, N (every span's when no pulley makes them differ). */
   largestTensionN: number;
   solved: boolean;
+  /** The wire's unstressed length in this state (m) and dL₀/dH₁ there (m/N; NaN if unknown). */
+  lengthM: number;
+  lengthSlope: number;
 }
 
 /**
  * The wire of cut lengths `unstressedSpans` (m, at t₀) pulled through as at installation at
  * `temperature` (°C), installation loads, no ice or wind: pulleys keep the tension equal, every
- * other support the horizontal tension. Leaves the span models in that state.
+ * other support the horizontal tension. Leaves the span models in that state. `afterRow`: the
+ * span models hold another set-up row (same loads), whose shape is the first iteration's.
  */
 export function solveSetUpState(
   model: ProjectModel,
   unstressedSpans: readonly number[],
   temperature: number,
   tensionGuessN: number,
+  afterRow = false,
 ): SetUpState {
   const total = unstressedSpans.reduce((a, b) => a + b, 0);
   const wire = prepareState(model, { ...model.installation, temperature });
+  const lengthM = total * thermalFactor(model, temperature);
   const solution = solveSectionForLength(
     model.spans,
     wire,
-    total * thermalFactor(model, temperature),
+    lengthM,
     tensionGuessN,
     model.installationJoints,
+    afterRow,
   );
   const spans = model.spans.map((span, j) => ({ span, tensionN: solution.spanTensionsN[j] }));
   return {
@@ -64,6 +71,8 @@ export function solveSetUpState(
     tensionN: solution.tensionN,
     largestTensionN: Math.max(...solution.spanTensionsN),
     solved: solution.converged,
+    lengthM,
+    lengthSlope: solution.lengthSlope ?? Number.NaN,
   };
 }
 
@@ -83,17 +92,66 @@ export function setUpReturnTime(
   });
 }
 
+/**
+ * A row's starting tension from the rows solved before it, nearest last: through the last three
+ * (L₀, H₁) pairs the quadratic in L₀, through the last two the line; after one row, one Newton
+ * step on its length L₀(H₁) with its slope: H₁ + (L₀,row − L₀) / (dL₀/dH₁). Kept within a
+ * factor 2 of the nearest row's H₁; its H₁ when the step is not defined, the fallback before any.
+ */
+export function neighbourGuess(
+  solved: readonly SetUpState[],
+  lengthM: number,
+  fallbackN: number,
+): number {
+  const n = solved.length;
+  if (n === 0) return fallbackN;
+  const a = solved[n - 1];
+  const H = a.tensionN;
+  let guess = Number.NaN;
+  if (n >= 3) {
+    const b = solved[n - 2];
+    const c = solved[n - 3];
+    // Newton's divided differences of H₁ over L₀.
+    const ab = (a.tensionN - b.tensionN) / (a.lengthM - b.lengthM);
+    const bc = (b.tensionN - c.tensionN) / (b.lengthM - c.lengthM);
+    const abc = (ab - bc) / (a.lengthM - c.lengthM);
+    guess = H + (lengthM - a.lengthM) * (ab + abc * (lengthM - b.lengthM));
+  } else if (n === 2) {
+    const b = solved[0];
+    guess = H + ((lengthM - a.lengthM) * (a.tensionN - b.tensionN)) / (a.lengthM - b.lengthM);
+  } else {
+    guess = H + (lengthM - a.lengthM) / a.lengthSlope;
+  }
+  return guess > H / 2 && guess < 2 * H ? guess : H;
+}
+
+/**
+ * The set-up rows, solved outwards from the installation temperature (its row starts from the
+ * installation tension), each row started from the rows solved just before it on its side.
+ */
 export function setUpChart(
   model: ProjectModel,
   unstressedSpans: readonly number[],
   sagSpanIndex: number,
   installationTensionN: number,
 ): SetUpRow[] {
-  let guess = installationTensionN;
-  return setUpTemperatures(model).map((temperature) => {
-    const state = solveSetUpState(model, unstressedSpans, temperature, guess);
-    guess = state.tensionN;
-    return {
+  const total = unstressedSpans.reduce((a, b) => a + b, 0);
+  const temperatures = setUpTemperatures(model);
+  const start = Math.max(0, temperatures.indexOf(model.installation.temperature));
+  const rows: SetUpRow[] = new Array(temperatures.length);
+  // Each row is read off as soon as it is solved: the span models hold one state at a time.
+  const solveRow = (i: number, solved: SetUpState[]) => {
+    const temperature = temperatures[i];
+    const lengthM = total * thermalFactor(model, temperature);
+    const guess = neighbourGuess(
+      solved.filter((s) => s.solved),
+      lengthM,
+      solved[solved.length - 1]?.tensionN ?? installationTensionN,
+    );
+    // After the first row the spans hold another row: the same loads, another temperature.
+    const state = solveSetUpState(model, unstressedSpans, temperature, guess, i !== start);
+    solved.push(state);
+    rows[i] = {
       temperature,
       solved: state.solved,
       horizontalTension: state.largestTensionN,
@@ -101,5 +159,10 @@ export function setUpChart(
       sag: largestSpanSag(state.spans[sagSpanIndex]),
       returnTime: setUpReturnTime(model, state, sagSpanIndex, temperature),
     };
-  });
+  };
+  const up: SetUpState[] = [];
+  for (let i = start; i < temperatures.length; i++) solveRow(i, up);
+  const down = up.slice(0, 1);
+  for (let i = start - 1; i >= 0; i--) solveRow(i, down);
+  return rows;
 }

@@ -115,7 +115,7 @@ function solveOnMesh(project: Project, refinement: number, fittings: EndFittings
     s: StateSolution,
   ) => checkState(model, fittings, id, name, temperature, withLoads, s);
   const results = [finish(INSTALLATION_ID, inst.name, inst.temperature, inst.withLoads, installed)];
-  const summaries = [summarise(installed)];
+  const summaries = [summarise(installed, true)];
   for (const [i, weather] of project.cases.entries()) {
     const state = solveChangeOfState(
       model,
@@ -132,7 +132,7 @@ function solveOnMesh(project: Project, refinement: number, fittings: EndFittings
     );
     result.messages.push(...windlessItemNotes(project, weather));
     results.push(result);
-    summaries.push(summarise(state));
+    summaries.push(summarise(state, true));
   }
   results[0].iterations += target.evaluations;
   if (!target.ok) {

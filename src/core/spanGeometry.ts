@@ -96,8 +96,20 @@ export function minimumAboveLine(
   if (!(b >= a)) return best;
   const first = elementAt(span.mesh, a);
   const last = elementAt(span.mesh, b);
+  // heightIn − line, written out over local arrays: this runs over every element of every state.
+  const vertexX = span.mesh.vertexX;
+  const order = span.mesh.order;
+  const v1 = span.v1;
+  const slopes = span.slopeV1;
+  const loads = span.qVertical;
+  const lengths = span.elementLength;
+  const { z0, x0, chordSlope: c } = span;
   const consider = (e: number, x: number) => {
-    const value = heightIn(span, H, e, x) - (lineZ + lineSlope * (x - lineX));
+    const xa = vertexX[e];
+    const xb = vertexX[e + 1];
+    const linear = v1[e * order] + slopes[e] * (x - xa);
+    const deflection = (linear + 0.5 * loads[e] * (x - xa) * (xb - x)) / H;
+    const value = z0 + c * (x - x0) - deflection - (lineZ + lineSlope * (x - lineX));
     if (value < best.value) {
       best.value = value;
       best.x = x;
@@ -105,14 +117,15 @@ export function minimumAboveLine(
   };
   consider(first, a);
   consider(last, b);
+  const drop = (c - lineSlope) * H;
   for (let e = first; e <= last; e++) {
-    const xa = span.mesh.vertexX[e];
-    const L = span.elementLength[e];
+    const xa = vertexX[e];
+    const L = lengths[e];
     if (e > first) consider(e, xa);
-    const q = span.qVertical[e];
+    const q = loads[e];
     if (q <= 0) continue;
     // z' = lineSlope  ⇔  v' = c − lineSlope  ⇔  ξ = 2 (m_e − (c − s) H) / (q L)
-    const xi = (2 * (span.slopeV1[e] - (span.chordSlope - lineSlope) * H)) / (q * L);
+    const xi = (2 * (slopes[e] - drop)) / (q * L);
     const x = xa + 0.5 * L * (1 + xi);
     if (xi > -1 && xi < 1 && x > a && x < b) consider(e, x);
   }
@@ -143,11 +156,27 @@ export function largestSwing(span: SpanModel, H: number): ShapePoint {
   return best;
 }
 
-/** Largest tension along the span (N): tension is extreme at element ends. */
+/**
+ * Largest tension along the span (N): tension is extreme at element ends. T = H √(1 + z'² + y'²)
+ * rises with 1 + z'² + y'², so the largest of those is found first and one root taken.
+ */
 export function largestTension(span: SpanModel, H: number): number {
-  let largest = H;
-  for (let e = 0; e < span.elementLength.length; e++) {
-    largest = Math.max(largest, tensionAt(span, H, e, -1), tensionAt(span, H, e, 1));
+  const lengths = span.elementLength;
+  const mv = span.slopeV1;
+  const my = span.slopeY1;
+  const qv = span.qVertical;
+  const qy = span.qLateral;
+  const c = span.chordSlope;
+  let largest = 1;
+  for (let e = 0; e < lengths.length; e++) {
+    const L = lengths[e];
+    for (let xi = -1; xi <= 1; xi += 2) {
+      const dz = c - (mv[e] - 0.5 * qv[e] * L * xi) / H;
+      const dy = (my[e] - 0.5 * qy[e] * L * xi) / H;
+      const s = 1 + dz * dz + dy * dy;
+      if (s > largest) largest = s;
+      else if (Number.isNaN(s)) return Number.NaN;
+    }
   }
-  return largest;
+  return Math.max(H, H * Math.sqrt(largest));
 }

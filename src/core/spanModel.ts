@@ -22,11 +22,17 @@ export interface SpanModel {
   readonly mesh: StringMesh;
   readonly system: StringSystem;
   readonly elementLength: Float64Array;
+  /** 1 / elementLength. */
+  readonly inverseLength: Float64Array;
   /** Hung loads' own weight in the current case per element, N per horizontal metre. */
   readonly hungVertical: Float64Array;
   /** Ice and wind on hung cables per element, N per metre of cable along the wire. */
   readonly hungIceAlong: Float64Array;
   readonly hungWindAlong: Float64Array;
+  /** True when a hung cable carries ice or wind here (then its load follows the arc length). */
+  hungAlong: boolean;
+  /** The uniform hung loads last spread over the elements (applyHungLoads skips a repeat). */
+  spreadLoads: string;
   /** Point loads of the current case: node index → downward force N and sideways wind N. */
   pointNodes: number[];
   pointForces: number[];
@@ -36,6 +42,9 @@ export interface SpanModel {
   readonly qLateral: Float64Array;
   /** True when any element carries a sideways load (else y₁ = 0 and its solve is skipped). */
   lateralLoaded: boolean;
+  /** Consistent nodal loads of the element loads, assembled by updateLoads (N). */
+  readonly loadV: Float64Array;
+  readonly loadY: Float64Array;
   /** Unit-tension nodal solutions v₁, y₁ (N·m). */
   readonly v1: Float64Array;
   readonly y1: Float64Array;
@@ -45,9 +54,18 @@ export interface SpanModel {
   /** Unstressed length of each element at the last evaluated state, m, and its d/dH (m/N). */
   readonly unstressedElement: Float64Array;
   readonly unstressedElementSlope: Float64Array;
-  /** Arc length of each element at the last evaluated state, m, and its d/dH (m/N). */
+  /** Arc length of each element at the last evaluated state, m, and its d/dH (m/N); kept only
+   * while a hung cable carries ice or wind (hungAlong). */
   readonly arcElement: Float64Array;
   readonly arcElementSlope: Float64Array;
+  /** The horizontal tension (N) at which the element lengths above were stored; NaN before. */
+  storedTensionN: number;
+}
+
+function inverseOf(values: Float64Array): Float64Array {
+  const out = new Float64Array(values.length);
+  for (let i = 0; i < values.length; i++) out[i] = 1 / values[i];
+  return out;
 }
 
 export function createSpanModel(
@@ -74,15 +92,20 @@ export function createSpanModel(
     mesh,
     system: createStringSystem(mesh),
     elementLength,
+    inverseLength: inverseOf(elementLength),
     hungVertical: new Float64Array(ne),
     hungIceAlong: new Float64Array(ne),
     hungWindAlong: new Float64Array(ne),
+    hungAlong: false,
+    spreadLoads: '',
     pointNodes: [],
     pointForces: [],
     pointLateral: [],
     qVertical: new Float64Array(ne),
     qLateral: new Float64Array(ne),
     lateralLoaded: false,
+    loadV: new Float64Array(nodes),
+    loadY: new Float64Array(nodes),
     v1: new Float64Array(nodes),
     y1: new Float64Array(nodes),
     slopeV1: new Float64Array(ne),
@@ -91,6 +114,7 @@ export function createSpanModel(
     unstressedElementSlope: new Float64Array(ne),
     arcElement: new Float64Array(ne),
     arcElementSlope: new Float64Array(ne),
+    storedTensionN: Number.NaN,
   };
 }
 
@@ -100,18 +124,24 @@ export function createSpanModel(
  */
 export function applyHungLoads(span: SpanModel, loads: CaseLoads): void {
   const { mesh, hungVertical, hungIceAlong, hungWindAlong } = span;
-  hungVertical.fill(0);
-  hungIceAlong.fill(0);
-  hungWindAlong.fill(0);
-  for (const u of loads.uniform) {
-    for (let e = 0; e < mesh.elementCount; e++) {
-      const mid = 0.5 * (mesh.vertexX[e] + mesh.vertexX[e + 1]);
-      if (mid > u.from && mid < u.to) {
-        hungVertical[e] += u.verticalNPerM;
-        hungIceAlong[e] += u.iceNPerM;
-        hungWindAlong[e] += u.windNPerM;
+  // The same uniform loads as last time (every set-up row, most cases): nothing to spread.
+  const key = JSON.stringify(loads.uniform);
+  if (key !== span.spreadLoads) {
+    span.spreadLoads = key;
+    hungVertical.fill(0);
+    hungIceAlong.fill(0);
+    hungWindAlong.fill(0);
+    for (const u of loads.uniform) {
+      for (let e = 0; e < mesh.elementCount; e++) {
+        const mid = 0.5 * (mesh.vertexX[e] + mesh.vertexX[e + 1]);
+        if (mid > u.from && mid < u.to) {
+          hungVertical[e] += u.verticalNPerM;
+          hungIceAlong[e] += u.iceNPerM;
+          hungWindAlong[e] += u.windNPerM;
+        }
       }
     }
+    span.hungAlong = hungIceAlong.some((q) => q !== 0) || hungWindAlong.some((q) => q !== 0);
   }
   span.pointNodes = [];
   span.pointForces = [];
@@ -125,30 +155,48 @@ export function applyHungLoads(span: SpanModel, loads: CaseLoads): void {
   }
 }
 
-/** Solve the unit-tension shapes v₁ and y₁ for the current element loads (two O(n) solves). */
-export function solveUnitShapes(span: SpanModel): void {
+/**
+ * Solve the unit-tension shapes v₁ and y₁ for the current element loads (two O(n) solves).
+ * With `assembled` the element loads' consistent nodal loads are already in loadV and loadY
+ * (updateLoads puts them there in the same pass as it sets the loads).
+ */
+export function solveUnitShapes(span: SpanModel, assembled = false): void {
   const { mesh, v1, y1 } = span;
   const last = v1.length - 1;
-  v1.fill(0);
-  addElementLoads(mesh, span.qVertical, v1);
-  for (let i = 0; i < span.pointNodes.length; i++) v1[span.pointNodes[i]] += span.pointForces[i];
-  y1.fill(0);
-  if (span.lateralLoaded) {
-    addElementLoads(mesh, span.qLateral, y1);
-    for (let i = 0; i < span.pointNodes.length; i++) y1[span.pointNodes[i]] += span.pointLateral[i];
+  const R = span.loadV;
+  const Ry = span.loadY;
+  if (!assembled) {
+    R.fill(0);
+    addElementLoads(mesh, span.qVertical, R);
+    Ry.fill(0);
+    if (span.lateralLoaded) addElementLoads(mesh, span.qLateral, Ry);
   }
+  for (let i = 0; i < span.pointNodes.length; i++) R[span.pointNodes[i]] += span.pointForces[i];
+  if (span.lateralLoaded)
+    for (let i = 0; i < span.pointNodes.length; i++) Ry[span.pointNodes[i]] += span.pointLateral[i];
   if (last > 1) {
-    span.system.factor.solve(v1.subarray(1, last));
-    if (span.lateralLoaded) span.system.factor.solve(y1.subarray(1, last));
+    span.system.factor.solve(v1.subarray(1, last), R.subarray(1, last));
+    if (span.lateralLoaded) span.system.factor.solve(y1.subarray(1, last), Ry.subarray(1, last));
+    else y1.fill(0);
   }
   v1[0] = 0;
   v1[last] = 0;
   y1[0] = 0;
   y1[last] = 0;
   const p = mesh.order;
+  const lengths = span.elementLength;
+  const mv = span.slopeV1;
+  const my = span.slopeY1;
+  if (!span.lateralLoaded) {
+    // y₁ = 0 (its solve was skipped): only its slopes need clearing.
+    const inverse = span.inverseLength;
+    for (let e = 0; e < mesh.elementCount; e++) mv[e] = (v1[(e + 1) * p] - v1[e * p]) * inverse[e];
+    my.fill(0);
+    return;
+  }
   for (let e = 0; e < mesh.elementCount; e++) {
-    const L = span.elementLength[e];
-    span.slopeV1[e] = (v1[(e + 1) * p] - v1[e * p]) / L;
-    span.slopeY1[e] = (y1[(e + 1) * p] - y1[e * p]) / L;
+    const L = lengths[e];
+    mv[e] = (v1[(e + 1) * p] - v1[e * p]) / L;
+    my[e] = (y1[(e + 1) * p] - y1[e * p]) / L;
   }
 }

@@ -55,6 +55,11 @@ export interface WindowOptions {
   stopWhenEmpty?: boolean;
   /** Where to start looking for the low end (N), e.g. a similar wire's low end. */
   lowGuessN?: number;
+  /**
+   * Where to start looking for the high end, as a fraction of the tension the wire is allowed
+   * (breaking load over the safety factor), e.g. a similar wire's; default one half.
+   */
+  highFraction?: number;
 }
 
 /** Slackest tension searched: the parabola's H for a sag of a quarter of each span, H = q l / 2. */
@@ -150,7 +155,10 @@ export function findWindowEnds(model: ProjectModel, options: WindowOptions = {})
   };
   const count = { evaluations: 0 };
   const moving = model.project.loads.some((l) => l.type === 'moving');
-  const allowed = model.wire.breakingLoad / model.project.limits.safetyFactor / 2;
+  const fraction = options.highFraction;
+  const allowed =
+    (model.wire.breakingLoad / model.project.limits.safetyFactor) *
+    (fraction !== undefined && fraction > 0 && fraction < 10 ? fraction : 0.5);
   const start = Math.min(range[1], Math.max(range[0], Math.log(allowed)));
   const high = worstRoot(ends, 'tension', start, range, tolerance, count, moving);
   if (high.status === 'root' && high.full) {

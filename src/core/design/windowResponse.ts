@@ -12,6 +12,7 @@
  * with the full envelope again.
  */
 import { clearanceOver, largestSag, largestStateTension, type SolvedSpan } from '../caseChecks.ts';
+import { type SpanLengths, seedLengths, spanLengths } from '../discretisation.ts';
 import { resolveEndFittings } from '../endFittings.ts';
 import { hungDrops, loadStateOfCase } from '../loads.ts';
 import { type MovingContext, movingLoadEnvelope, solveMovingLoadAt } from '../movingLoads.ts';
@@ -171,7 +172,8 @@ function movingChecks(
  * parked at the worst positions of the last full envelope.
  */
 export function createCheckEvaluator(model: ProjectModel) {
-  // Each case's span tensions from its last solve (a warm start), none before the first.
+  // Each case's span tensions from its last solve (a warm start), none before the first; and
+  // each state's element lengths (its catenary loads), so every state starts from its own.
   const guesses: (number[] | undefined)[] = model.project.cases.map(() => undefined);
   const hasMoving = model.project.loads.some((l) => l.type === 'moving');
   // Worst positions of each moving load in each state (index + 1; 0 the installation).
@@ -197,14 +199,22 @@ export function createCheckEvaluator(model: ProjectModel) {
     );
     return [...checks, ...m.checks];
   };
+  const lengths = new Map<number, SpanLengths[]>();
+  const warm = (index: number) => {
+    const last = lengths.get(index);
+    if (last) seedLengths(model, last, 1);
+  };
+  const keep = (index: number) => lengths.set(index, spanLengths(model.spans));
   return (
     tensionN: number,
     visit: (index: number, name: string, spans: SolvedSpan[], checks: CheckValue[]) => void,
     only?: CaseSubset,
   ): boolean => {
     const full = only === undefined;
+    warm(-1);
     const installed = solveInstallation(model, tensionN);
     if (!installed.solved) return false;
+    keep(-1);
     const base = model.installation;
     visit(
       -1,
@@ -223,8 +233,10 @@ export function createCheckEvaluator(model: ProjectModel) {
       if (only && !only.has(i)) continue;
       const guess = guesses[i] ?? installed.spans.map((s) => s.tensionN);
       const named = { ...loadStateOfCase(weather), name: weather.name };
+      warm(i);
       const state = solveChangeOfState(model, named, installed.unstressed, guess);
       if (!state.solved) return false;
+      keep(i);
       guesses[i] = state.spans.map((s) => s.tensionN);
       visit(
         i,

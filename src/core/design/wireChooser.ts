@@ -47,7 +47,8 @@ function candidates(project: Project): { spec: WireSpec; wire: WireProperties }[
 /**
  * The window of one wire for this project, or null when it is shut. The ends are found to
  * 1e-9 relative; `lowGuessN` starts the low-end search (a similar wire's low end: the slack
- * limit depends mostly on the hung loads, not on the wire).
+ * limit depends mostly on the hung loads, not on the wire), `highFraction` the high-end search
+ * (a similar wire's high end over its allowed tension).
  */
 export function chooseWire(
   project: Project,
@@ -55,9 +56,15 @@ export function chooseWire(
   wire: WireProperties,
   lowGuessN?: number,
   refinement = 1,
+  highFraction?: number,
 ): WireChoice | null {
   const model = buildProjectModel({ ...project, wire: spec }, refinement);
-  const ends = findWindowEnds(model, { stopWhenEmpty: true, tolerance: 1e-9, lowGuessN });
+  const ends = findWindowEnds(model, {
+    stopWhenEmpty: true,
+    tolerance: 1e-9,
+    lowGuessN,
+    highFraction,
+  });
   if (ends.empty || !ends.high) return null;
   const high = ends.high.horizontalTension;
   const low = ends.low?.horizontalTension ?? null;
@@ -86,11 +93,14 @@ export function chooseWires(
 ): WireChoice[] {
   const choices: WireChoice[] = [];
   let lowGuessN: number | undefined;
+  let highFraction: number | undefined;
   for (const { spec, wire } of candidates(project)) {
     if (families && !families.includes(wireFamily(wire.kind))) continue;
-    const choice = chooseWire(project, spec, wire, lowGuessN, refinement);
+    const choice = chooseWire(project, spec, wire, lowGuessN, refinement, highFraction);
     if (choice) choices.push(choice);
     if (choice?.low) lowGuessN = choice.low;
+    // The high end sits at a similar fraction of the allowed tension from wire to wire.
+    if (choice) highFraction = choice.high / (wire.breakingLoad / project.limits.safetyFactor);
   }
   return choices.sort(
     (a, b) => a.massPerLength - b.massPerLength || a.label.localeCompare(b.label),
