@@ -70,6 +70,26 @@ interface PlotAxis {
 }
 type PlotDiv = HTMLDivElement & { _fullLayout?: { xaxis?: PlotAxis; yaxis?: PlotAxis } };
 
+/**
+ * Lets the printed page scale the drawing to the paper. Plotly draws at the size on screen and a
+ * browser's print does not redraw it, so without this a plot wider than the printed column is cut
+ * off at its right and bottom. Each of Plotly's stacked SVG layers gets a viewBox equal to its
+ * drawn size (no change on screen), and the container its aspect ratio; the print style sheet
+ * (export.css) then sizes them to the column's width. Run after every Plotly drawing.
+ */
+export function fitForPrint(container: HTMLElement): void {
+  let width = 0;
+  let height = 0;
+  for (const svg of container.querySelectorAll('svg.main-svg')) {
+    const w = Number(svg.getAttribute('width'));
+    const h = Number(svg.getAttribute('height'));
+    if (!(w > 0 && h > 0)) continue;
+    svg.setAttribute('viewBox', `0 0 ${w} ${h}`);
+    [width, height] = [w, h];
+  }
+  if (width > 0) container.style.setProperty('--plot-aspect', `${width} / ${height}`);
+}
+
 function axes(container: PlotDiv) {
   return { x: container._fullLayout?.xaxis, y: container._fullLayout?.yaxis };
 }
@@ -195,8 +215,20 @@ export function usePlotlyDraw(
       measure(start, figure, 'full');
       full.current = next;
       firstUndrawnAt.current = null;
+      const events = container as PlotDiv & {
+        on?: (event: string, handler: () => void) => void;
+        dataset: DOMStringMap;
+      };
+      if (events.on && events.dataset.printFit === undefined) {
+        // Every later drawing (a resize included) keeps the print scaling in step.
+        events.on('plotly_afterplot', () => fitForPrint(container));
+        events.dataset.printFit = 'on';
+      }
       done.then(
-        () => setState('drawn'),
+        () => {
+          fitForPrint(container);
+          setState('drawn');
+        },
         () => setState('failed'),
       );
     };
