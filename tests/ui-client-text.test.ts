@@ -9,7 +9,6 @@ import demo from '../examples/courtyard-lights.json' with { type: 'json' };
 import { solveProject, validateProject } from '../src/core/index.ts';
 import { formatForceShort } from '../src/deliverables/displayUnits.ts';
 import { keyNumbers, summaryLine } from '../src/deliverables/reportContent.ts';
-import { showForceShort } from '../src/ui/format.ts';
 import { summaryText } from '../src/ui/results/summaryText.ts';
 
 const checked = validateProject(demo);
@@ -33,9 +32,11 @@ describe('one rule for forces', () => {
     const expected = `${(largest.maxTension / 1000).toFixed(2)} kN`;
     expect(summaryLine(project, results, 'si')).toContain(`largest tension ${expected}`);
     expect(summaryText(project, results, 'si').detail).toContain(
-      showForceShort(largest.maxTension, 'si'),
+      formatForceShort('si', largest.maxTension, '\u00a0'),
     );
-    expect(showForceShort(largest.maxTension, 'si').replace('\u00a0', ' ')).toBe(expected);
+    expect(formatForceShort('si', largest.maxTension, '\u00a0').replace('\u00a0', ' ')).toBe(
+      expected,
+    );
     const numbers = keyNumbers(project, results, 'si');
     expect(numbers.find((n) => n.label === 'Largest tension')?.value).toBe(expected);
     expect(numbers.find((n) => n.label === 'Largest fixing load')?.value).toMatch(/^\d\.\d\d kN$/);

@@ -19,11 +19,11 @@ import {
 import { caseMessages } from '../src/deliverables/caseMessages.ts';
 import {
   adviceWordingFor,
+  formatCell,
   formatLength,
   formatTemperature,
 } from '../src/deliverables/displayUnits.ts';
 import { keyNumbers, summaryLine } from '../src/deliverables/reportContent.ts';
-import { show } from '../src/ui/format.ts';
 import { summaryLineText, summaryText } from '../src/ui/results/summaryText.ts';
 import { upToDateStatus } from '../src/ui/statusText.ts';
 import { roadSquare } from './helpers/designProjects.ts';
@@ -184,8 +184,8 @@ describe('the tension window in the chosen units', () => {
     // 7.5 °C = 45.5 °F exactly; 15 °C = 59 °F.
     expect(formatTemperature('imperial', 7.5)).toBe('45.5°F');
     expect(formatTemperature('imperial', 15)).toBe('59°F');
-    expect(show(7.5, 'temperature', 'imperial')).toBe('45.5\u00a0°F');
-    expect(show(-10, 'temperature', 'si')).toBe('-10\u00a0°C');
+    expect(formatCell('imperial', 'temperature', 7.5)).toBe('45.5\u00a0°F');
+    expect(formatCell('si', 'temperature', -10)).toBe('-10\u00a0°C');
   });
 });
 

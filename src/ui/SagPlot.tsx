@@ -6,10 +6,10 @@
 import { type RefObject, useEffect, useId, useMemo, useRef, useState } from 'react';
 import type { Project, ProjectResults } from '../core/index.ts';
 import { type UnitSystem, unitSymbol } from '../core/units.ts';
+import { formatCell } from '../deliverables/displayUnits.ts';
 import { useResultsStore } from '../state/resultsStore.ts';
 import { documentRevision } from '../state/revision.ts';
 import { useUiStore } from '../state/uiStore.ts';
-import { show } from './format.ts';
 import { COMPACT_WIDTH_PX, compactFigure, compactTitles } from './plot/compactFigure.ts';
 import { DragHandles } from './plot/DragHandles.tsx';
 import { PlotKey } from './plot/PlotKey.tsx';
@@ -94,7 +94,7 @@ function Caption({ id, figure, view, units }: CaptionProps) {
       Solid: the wire by finite elements for each case. Dashed: the closed-form parabola at the same
       horizontal tension
       {figure.parabola
-        ? ` — largest difference ${show(figure.parabola.differenceM, 'length', units, 4)} (${figure.parabola.caseName}).`
+        ? ` — largest difference ${formatCell(units, 'length', figure.parabola.differenceM, 4)} (${figure.parabola.caseName}).`
         : '.'}{' '}
       Shaded: ground and clearance zones at their required heights. Sag is measured straight down
       from the straight line between the fixings (drawn dash-dotted where they are at different

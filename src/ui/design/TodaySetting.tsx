@@ -6,9 +6,9 @@
 import { useId, useState } from 'react';
 import type { DaySetting, Project } from '../../core/index.ts';
 import { toSi, type UnitSystem, unitSymbol } from '../../core/units.ts';
+import { fieldText, formatCell, parseNumber } from '../../deliverables/displayUnits.ts';
 import { fixingName, spanName } from '../../deliverables/setUpContent.ts';
 import { useDesignStore } from '../../state/designStore.ts';
-import { fieldText, parseNumber, show } from '../format.ts';
 import { TODAYS_SETTING_ID } from '../sectionIds.ts';
 
 const RANGE_C = [-80, 80] as const;
@@ -32,14 +32,14 @@ function TemperatureInput({ units }: { units: UnitSystem }) {
     if (si === undefined) setMessage('must be a number');
     else if (si < RANGE_C[0] || si > RANGE_C[1])
       setMessage(
-        `must be between ${show(RANGE_C[0], 'temperature', units)} and ${show(RANGE_C[1], 'temperature', units)}`,
+        `must be between ${formatCell(units, 'temperature', RANGE_C[0])} and ${formatCell(units, 'temperature', RANGE_C[1])}`,
       );
     else {
       setMessage(null);
       setTemperature(si);
     }
   }
-  const text = draft ?? (temperature === null ? '' : fieldText(temperature, 'temperature', units));
+  const text = draft ?? (temperature === null ? '' : fieldText(units, 'temperature', temperature));
   return (
     <div className={`field${message ? ' field-invalid' : ''}`}>
       <label htmlFor={id}>Temperature now ({symbol})</label>
@@ -68,7 +68,7 @@ function whereToMeasure(project: Project, s: DaySetting, units: UnitSystem): str
   const x0 = project.supports[s.span].x;
   const l = project.supports[s.span + 1].x - x0;
   const level = project.supports[s.span].z === project.supports[s.span + 1].z;
-  const len = (m: number) => show(m, 'length', units);
+  const len = (m: number) => formatCell(units, 'length', m);
   if (level && Math.abs(s.sagAt.distance - l / 2) <= 0.01 * l)
     return `Level span ${span}: measure the sag at mid-span, ${len(l / 2)} from ${a}: ${len(s.midSpanSag)} below a string line between the fixings.`;
   return (
@@ -98,17 +98,17 @@ function SettingView({
   return (
     <dl className="facts" data-testid="today-setting">
       <dt>Horizontal tension</dt>
-      <dd>{show(s.horizontalTension, 'force', units)}</dd>
+      <dd>{formatCell(units, 'force', s.horizontalTension)}</dd>
       <dt>Largest tension</dt>
-      <dd>{show(s.maxTension, 'force', units)}</dd>
+      <dd>{formatCell(units, 'force', s.maxTension)}</dd>
       <dt>Sag</dt>
-      <dd>{show(s.sag, 'length', units)}</dd>
+      <dd>{formatCell(units, 'length', s.sag)}</dd>
       <dt>Where to measure</dt>
       <dd>{whereToMeasure(project, s, units)}</dd>
       <dt>Lowest point</dt>
       <dd>
-        {show(s.lowestPoint.z, 'length', units)} above the ground datum,{' '}
-        {show(s.lowestPoint.x - project.supports[s.span].x, 'length', units)} from{' '}
+        {formatCell(units, 'length', s.lowestPoint.z)} above the ground datum,{' '}
+        {formatCell(units, 'length', s.lowestPoint.x - project.supports[s.span].x)} from{' '}
         {fixingName(project, s.span)}
       </dd>
       <dt>Field checks</dt>

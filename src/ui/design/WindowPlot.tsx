@@ -1,7 +1,7 @@
 /** The tension-window plot as SVG: worst utilisation and worst clearance margin against tension. */
 import type { TensionWindow, WindowCurve } from '../../core/index.ts';
 import { type UnitSystem, unitSymbol } from '../../core/units.ts';
-import { num, show } from '../format.ts';
+import { formatCell, formatNumber } from '../../deliverables/displayUnits.ts';
 import { type PanelGeometry, PLOT, windowPlotGeometry } from './windowPlot.ts';
 
 interface Props {
@@ -42,7 +42,7 @@ function Panel({ g, title, stroke }: { g: PanelGeometry; title: string; stroke: 
 
 export function WindowPlot({ curve, window, currentN, units }: Props) {
   if (curve.tension.length < 2) return null;
-  const g = windowPlotGeometry(curve, window, currentN, (m) => show(m, 'length', units, 2));
+  const g = windowPlotGeometry(curve, window, currentN, (m) => formatCell(units, 'length', m, 2));
   const bottom = PLOT.height - PLOT.bottom;
   return (
     <svg
@@ -70,7 +70,7 @@ export function WindowPlot({ curve, window, currentN, units }: Props) {
           textAnchor="middle"
           className="window-plot-tick"
         >
-          {num(t.tensionN, 'force', units)}
+          {formatNumber(units, 'force', t.tensionN)}
         </text>
       ))}
       <text

@@ -10,9 +10,8 @@ import {
   windowPosition,
 } from '../../core/index.ts';
 import type { UnitSystem } from '../../core/units.ts';
-import { adviceWordingFor } from '../../deliverables/displayUnits.ts';
+import { adviceWordingFor, formatCell } from '../../deliverables/displayUnits.ts';
 import type { DesignAnswers } from '../../worker/designAnswers.ts';
-import { show } from '../format.ts';
 import { WindowPlot } from './WindowPlot.tsx';
 
 function endText(project: Project, end: WindowEnd | null, units: UnitSystem, what: string): string {
@@ -24,9 +23,9 @@ function endText(project: Project, end: WindowEnd | null, units: UnitSystem, wha
         ? 'clearance over the ground'
         : `clearance over ${end.check}`;
   const moving = end.movingLoad
-    ? `, ${end.movingLoad.label} at ${show(end.movingLoad.at - project.supports[0].x, 'length', units)} from the first fixing`
+    ? `, ${end.movingLoad.label} at ${formatCell(units, 'length', end.movingLoad.at - project.supports[0].x)} from the first fixing`
     : '';
-  return `${what}: ${show(end.horizontalTension, 'force', units)} (${check}, ${end.case}${moving})`;
+  return `${what}: ${formatCell(units, 'force', end.horizontalTension)} (${check}, ${end.case}${moving})`;
 }
 
 function Ends({
@@ -66,8 +65,8 @@ export function WindowView({
       <p className="setup-note" data-testid="window-quantity">
         The installation horizontal tension
         {answers.tensionWords ? ` (${answers.tensionWords})` : ''}, at{' '}
-        {show(project.installation.temperature, 'temperature', units)} with the installation loads,
-        for which every case passes every check
+        {formatCell(units, 'temperature', project.installation.temperature)} with the installation
+        loads, for which every case passes every check
         {project.loads.some((l) => l.type === 'moving')
           ? ', every moving load included at its worst position.'
           : '.'}
@@ -79,7 +78,7 @@ export function WindowView({
       </p>
       <Ends project={project} window={window} units={units} />
       <p data-testid="window-position">
-        Current setting, {show(answers.currentTension, 'force', units)}: {position}
+        Current setting, {formatCell(units, 'force', answers.currentTension)}: {position}
       </p>
       <WindowPlot
         curve={answers.curve}

@@ -12,9 +12,9 @@ import {
   type WireFamily,
 } from '../../core/index.ts';
 import { type UnitSystem, unitSymbol } from '../../core/units.ts';
+import { formatCell, formatNumber } from '../../deliverables/displayUnits.ts';
 import { useDesignStore } from '../../state/designStore.ts';
 import { useProjectStore } from '../../state/projectStore.ts';
-import { num, show } from '../format.ts';
 import { TableScroll } from '../results/TableScroll.tsx';
 
 const FAMILIES: { value: WireFamily | 'all'; label: string }[] = [
@@ -53,17 +53,17 @@ function Row({
   units: UnitSystem;
   current: boolean;
 }) {
-  const suggested = show(choice.suggestedHorizontalTension, 'force', units);
+  const suggested = formatCell(units, 'force', choice.suggestedHorizontalTension);
   return (
     <tr className={current ? 'setup-installation' : undefined}>
       <th scope="row">
         {choice.label}
         {current && <span className="badge">current wire</span>}
       </th>
-      <td>{num(choice.massPerLength, 'massPerLength', units, 3)}</td>
-      <td>{choice.low === null ? '—' : num(choice.low, 'force', units)}</td>
-      <td>{num(choice.high, 'force', units)}</td>
-      <td>{num(choice.suggestedHorizontalTension, 'force', units)}</td>
+      <td>{formatNumber(units, 'massPerLength', choice.massPerLength, 3)}</td>
+      <td>{choice.low === null ? '—' : formatNumber(units, 'force', choice.low)}</td>
+      <td>{formatNumber(units, 'force', choice.high)}</td>
+      <td>{formatNumber(units, 'force', choice.suggestedHorizontalTension)}</td>
       <td>
         <button
           type="button"

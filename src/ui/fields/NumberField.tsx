@@ -6,9 +6,9 @@
 import { type ReactNode, useEffect, useId, useRef, useState } from 'react';
 import type { Quantity } from '../../core/units.ts';
 import { toSi, unitSymbol } from '../../core/units.ts';
+import { fieldText, parseNumber } from '../../deliverables/displayUnits.ts';
 import { useDraftStore } from '../../state/draftStore.ts';
 import { useUiStore } from '../../state/uiStore.ts';
-import { fieldText, parseNumber } from '../format.ts';
 import { type Edit, tryEdit } from './useDocumentEdit.ts';
 
 export interface NumberFieldProps {
@@ -64,7 +64,7 @@ export function NumberField({
     shownUnits.current = units;
     const typedSi = refusedSi.current;
     if (before === units || draft === null || message === null || typedSi === undefined) return;
-    change(fieldText(typedSi, quantity, units));
+    change(fieldText(units, quantity, typedSi));
     refusedSi.current = typedSi; // the value as first typed, not its rounded display
   });
 
@@ -85,7 +85,7 @@ export function NumberField({
     setInvalid(path, reason === null ? null : `${context ? `${context} ` : ''}${label}: ${reason}`);
   }
 
-  const text = draft ?? fieldText(value, quantity, units);
+  const text = draft ?? fieldText(units, quantity, value);
   const fullLabel = symbol ? `${label} (${symbol})` : label;
   return (
     <div className={`field${message ? ' field-invalid' : ''}`}>

@@ -5,18 +5,17 @@
  */
 import type { Project, ValidationIssue } from '../../core/index.ts';
 import { type Quantity, type UnitSystem, unitSymbol } from '../../core/units.ts';
-import { formatLength } from '../../deliverables/displayUnits.ts';
+import { fieldText, formatLength } from '../../deliverables/displayUnits.ts';
 import { commit, type Edit } from '../../state/commit.ts';
 import { fieldName, localiseRule, quantityOfPath, valueAt } from '../../state/fieldNames.ts';
 import { useProjectStore } from '../../state/projectStore.ts';
-import { fieldText } from '../format.ts';
 
 export type { Edit };
 export { localiseRule };
 
 function lengthText(metres: number, units: UnitSystem): string {
   return units === 'si'
-    ? `${fieldText(metres, 'length', units)} ${unitSymbol('length', units)}`
+    ? `${fieldText(units, 'length', metres)} ${unitSymbol('length', units)}`
     : formatLength(units, metres);
 }
 

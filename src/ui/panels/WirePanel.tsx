@@ -8,6 +8,7 @@ import {
   type WireProperties,
 } from '../../core/index.ts';
 import type { Quantity } from '../../core/units.ts';
+import { formatCell } from '../../deliverables/displayUnits.ts';
 import { setWire } from '../../state/projectEdits.ts';
 import { useProjectStore } from '../../state/projectStore.ts';
 import { useUiStore } from '../../state/uiStore.ts';
@@ -15,7 +16,6 @@ import { applyEdit } from '../fields/ChoiceFields.tsx';
 import { Hint } from '../fields/Hint.tsx';
 import { NumberField } from '../fields/NumberField.tsx';
 import { TextField } from '../fields/TextField.tsx';
-import { show } from '../format.ts';
 import { EndFittingsFields } from './EndFittingsFields.tsx';
 
 function matches(wire: WireProperties, query: string): boolean {
@@ -122,7 +122,7 @@ function WireFacts({ wire }: { wire: WireProperties }) {
               </>
             )}
           </dt>
-          <dd>{show(wire[key], quantity, units, digits)}</dd>
+          <dd>{formatCell(units, quantity, wire[key], digits)}</dd>
         </div>
       ))}
     </dl>

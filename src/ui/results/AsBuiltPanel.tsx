@@ -17,7 +17,12 @@ import { useAsBuiltStore } from '../../state/asBuiltStore.ts';
 import { useUiStore } from '../../state/uiStore.ts';
 import { Hint } from '../fields/Hint.tsx';
 import './asBuilt.css';
-import { fieldText, num, percent, show } from '../format.ts';
+import {
+  fieldText,
+  formatCell,
+  formatNumber,
+  formatPercent,
+} from '../../deliverables/displayUnits.ts';
 import {
   type AsBuiltForm,
   KIND_LABELS,
@@ -40,9 +45,9 @@ function lengthChangeText(
 ) {
   const mm = a.lengthDifference * 1000;
   // Millimetres (or inches): the differences a site tape measures.
-  const size = show(Math.abs(a.lengthDifference), 'diameter', units, 1);
+  const size = formatCell(units, 'diameter', Math.abs(a.lengthDifference), 1);
   if (Math.abs(mm) < 0.05) return 'the same as the design';
-  return `${size} ${mm > 0 ? 'longer' : 'shorter'} than the design's ${show(a.designUnstressedLength, 'length', units, 3)}`;
+  return `${size} ${mm > 0 ? 'longer' : 'shorter'} than the design's ${formatCell(units, 'length', a.designUnstressedLength, 3)}`;
 }
 
 function Outcome({ asBuilt, design }: { asBuilt: AsBuiltResult; design: ProjectResults }) {
@@ -61,11 +66,11 @@ function Outcome({ asBuilt, design }: { asBuilt: AsBuiltResult; design: ProjectR
       <p>
         Cut length <Hint term="cutLength" /> as built:{' '}
         <strong data-testid="as-built-length">
-          {show(asBuilt.unstressedLength, 'length', units, 3)}
+          {formatCell(units, 'length', asBuilt.unstressedLength, 3)}
         </strong>
         , {lengthChangeText(asBuilt, units)}. The measurement means a horizontal tension of{' '}
-        {show(asBuilt.measurement.horizontalTension, 'force', units)} at{' '}
-        {show(asBuilt.measurement.temperature, 'temperature', units)}.
+        {formatCell(units, 'force', asBuilt.measurement.horizontalTension)} at{' '}
+        {formatCell(units, 'temperature', asBuilt.measurement.temperature)}.
       </p>
       <p data-testid="as-built-verdict">
         {failing.length === 0
@@ -98,9 +103,9 @@ function Outcome({ asBuilt, design }: { asBuilt: AsBuiltResult; design: ProjectR
                   <Verdict ok={c.ok} />
                   {!c.ok && <span className="case-meta">{c.messages.join(' ')}</span>}
                 </td>
-                <td>{num(c.maxTension, 'force', units)}</td>
-                <td>{percent(c.utilisation)}</td>
-                <td>{num(c.clearance, 'length', units)}</td>
+                <td>{formatNumber(units, 'force', c.maxTension)}</td>
+                <td>{formatPercent(c.utilisation)}</td>
+                <td>{formatNumber(units, 'length', c.clearance)}</td>
               </tr>
             ))}
           </tbody>
@@ -117,7 +122,7 @@ export function AsBuiltPanel({ project, results }: { project: Project; results: 
   const [form, setForm] = useState<AsBuiltForm>(() => ({
     kind: 'sag',
     value: '',
-    temperature: fieldText(project.installation.temperature, 'temperature', units),
+    temperature: fieldText(units, 'temperature', project.installation.temperature),
     x: '',
   }));
   const [issues, setIssues] = useState<string[]>([]);

@@ -6,7 +6,7 @@ import type { ProjectResults } from '../../core/index.ts';
 import { unitSymbol } from '../../core/units.ts';
 import { useUiStore } from '../../state/uiStore.ts';
 import './asBuilt.css';
-import { num, percent, show } from '../format.ts';
+import { formatCell, formatNumber, formatPercent } from '../../deliverables/displayUnits.ts';
 
 export function MovingLoadsTable({ results }: { results: ProjectResults }) {
   const units = useUiStore((s) => s.unitSystem);
@@ -43,21 +43,23 @@ export function MovingLoadsTable({ results }: { results: ProjectResults }) {
                   <th scope="row">{c.name}</th>
                   <td>{m.label}</td>
                   <td>
-                    {num(m.maxTension, 'force', units)}
+                    {formatNumber(units, 'force', m.maxTension)}
                     <span className="case-meta">
-                      load at {show(m.maxTensionAt, 'length', units, 2)}
+                      load at {formatCell(units, 'length', m.maxTensionAt, 2)}
                     </span>
                   </td>
-                  <td>{percent(m.utilisation)}</td>
+                  <td>{formatPercent(m.utilisation)}</td>
                   <td>
-                    {num(m.clearance, 'length', units)}
+                    {formatNumber(units, 'length', m.clearance)}
                     <span className="case-meta">
-                      load at {show(m.clearanceAt, 'length', units, 2)}
+                      load at {formatCell(units, 'length', m.clearanceAt, 2)}
                     </span>
                     {m.zoneClearances.map((z) => (
                       <span className="case-meta" key={z.label}>
-                        {z.label}: {show(z.clearance, 'length', units, 2)}
-                        {z.ok ? '' : ` — too low, needs ${show(z.required, 'length', units, 2)}`}
+                        {z.label}: {formatCell(units, 'length', z.clearance, 2)}
+                        {z.ok
+                          ? ''
+                          : ` — too low, needs ${formatCell(units, 'length', z.required, 2)}`}
                       </span>
                     ))}
                   </td>

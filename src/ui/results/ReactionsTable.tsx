@@ -7,9 +7,9 @@
 import type { ProjectResults, SupportReaction } from '../../core/index.ts';
 import { unitSymbol } from '../../core/units.ts';
 import { ATTACHMENT_NAME } from '../../deliverables/attachmentWords.ts';
+import { formatNumber } from '../../deliverables/displayUnits.ts';
 import { useProjectStore } from '../../state/projectStore.ts';
 import { useUiStore } from '../../state/uiStore.ts';
-import { num } from '../format.ts';
 import { TableScroll } from './TableScroll.tsx';
 
 /** "408 N at 42.3°" for one side of a fixing, or a dash where the line ends. */
@@ -59,7 +59,7 @@ export function ReactionsTable({ results }: { results: ProjectResults }) {
   const supports = useProjectStore((s) => s.project.supports);
   const fu = unitSymbol('force', units);
   // Signed; a pull that rounds to nothing reads 0, not −0.
-  const force = (n: number) => num(n, 'force', units).replace(/^-(0(\.0*)?)$/, '$1');
+  const force = (n: number) => formatNumber(units, 'force', n).replace(/^-(0(\.0*)?)$/, '$1');
   return (
     <details className="reactions" open>
       <summary>Pull on the fixings</summary>

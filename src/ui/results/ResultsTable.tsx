@@ -2,10 +2,14 @@
 import type { CaseResult, Project, ProjectResults } from '../../core/index.ts';
 import { unitSymbol } from '../../core/units.ts';
 import { caseMessages } from '../../deliverables/caseMessages.ts';
-import { formatLength } from '../../deliverables/displayUnits.ts';
+import {
+  formatCell,
+  formatLength,
+  formatNumber,
+  formatPercent,
+} from '../../deliverables/displayUnits.ts';
 import { useUiStore } from '../../state/uiStore.ts';
 import { Hint } from '../fields/Hint.tsx';
-import { num, percent, show } from '../format.ts';
 import { TableScroll } from './TableScroll.tsx';
 
 function Verdict({ result }: { result: CaseResult }) {
@@ -30,7 +34,7 @@ export function utilisationBasis(results: ProjectResults): string {
   if (!f.stated)
     return 'Utilisation = largest tension × safety factor / breaking load. No end fittings stated: terminations taken as strong as the wire.';
   const weaker = f[f.governing];
-  return `Utilisation = largest tension × safety factor / (breaking load × ${percent(f.efficiency)}): the weaker end fitting is ${weaker.label.toLowerCase()} at the ${f.governing === 'start' ? 'first' : 'last'} fixing.`;
+  return `Utilisation = largest tension × safety factor / (breaking load × ${formatPercent(f.efficiency)}): the weaker end fitting is ${weaker.label.toLowerCase()} at the ${f.governing === 'start' ? 'first' : 'last'} fixing.`;
 }
 
 export function ResultsTable({ project, results }: { project: Project; results: ProjectResults }) {
@@ -38,8 +42,9 @@ export function ResultsTable({ project, results }: { project: Project; results: 
   // Lengths as installers read them: metres (unit in the heading), or feet and inches per cell.
   const si = units === 'si';
   const lu = si ? ` (${unitSymbol('length', units)})` : '';
-  const length = (m: number) => (si ? num(m, 'length', units) : formatLength(units, m, true));
-  const position = (m: number) => (si ? show(m, 'length', units, 2) : formatLength(units, m));
+  const length = (m: number) =>
+    si ? formatNumber(units, 'length', m) : formatLength(units, m, true);
+  const position = (m: number) => (si ? formatCell(units, 'length', m, 2) : formatLength(units, m));
   const fu = unitSymbol('force', units);
   return (
     <TableScroll>
@@ -81,13 +86,13 @@ export function ResultsTable({ project, results }: { project: Project; results: 
                 <th scope="row">
                   {result.name}
                   <span className="case-meta">
-                    {show(result.temperature, 'temperature', units)}
+                    {formatCell(units, 'temperature', result.temperature)}
                   </span>
                   {marks.length > 0 && <span className="badge">{marks.join(', ')}</span>}
                 </th>
-                <td>{num(result.horizontalTension, 'force', units)}</td>
-                <td>{num(result.maxTension, 'force', units)}</td>
-                <td>{percent(result.utilisation)}</td>
+                <td>{formatNumber(units, 'force', result.horizontalTension)}</td>
+                <td>{formatNumber(units, 'force', result.maxTension)}</td>
+                <td>{formatPercent(result.utilisation)}</td>
                 <td>
                   <Verdict result={result} />
                   {messages.length > 0 && <span className="case-meta">{messages.join(' ')}</span>}

@@ -6,6 +6,7 @@
 import { useId } from 'react';
 import type { Project, ProjectResults, SetUpRow } from '../../core/index.ts';
 import { fromSi, type UnitSystem, unitSymbol } from '../../core/units.ts';
+import { formatCell, formatNumber } from '../../deliverables/displayUnits.ts';
 import {
   isInstallationRow,
   pulseCheck,
@@ -15,7 +16,6 @@ import {
   spanName,
 } from '../../deliverables/setUpContent.ts';
 import { useUiStore } from '../../state/uiStore.ts';
-import { num, show } from '../format.ts';
 import './setUpChart.css';
 import { TableScroll } from './TableScroll.tsx';
 
@@ -23,7 +23,7 @@ import { TableScroll } from './TableScroll.tsx';
 function temperatureText(celsius: number, units: UnitSystem): string {
   const shown = fromSi(celsius, 'temperature', units);
   const whole = Math.abs(shown - Math.round(shown)) < 1e-9;
-  return show(celsius, 'temperature', units, whole ? 0 : 1);
+  return formatCell(units, 'temperature', celsius, whole ? 0 : 1);
 }
 
 function Row({ row, installation, units }: RowProps) {
@@ -43,9 +43,9 @@ function Row({ row, installation, units }: RowProps) {
   return (
     <tr className={installation ? 'setup-installation' : undefined}>
       {temperature}
-      <td>{num(row.horizontalTension, 'force', units)}</td>
-      <td>{num(row.maxTension, 'force', units)}</td>
-      <td>{num(row.sag, 'length', units)}</td>
+      <td>{formatNumber(units, 'force', row.horizontalTension)}</td>
+      <td>{formatNumber(units, 'force', row.maxTension)}</td>
+      <td>{formatNumber(units, 'length', row.sag)}</td>
       <td>{returnTimeText(row)}</td>
     </tr>
   );
@@ -68,7 +68,7 @@ export function SetUpChart({ project, results }: { project: Project; results: Pr
       <h2 id={headingId}>{SET_UP_HEADING}</h2>
       <p className="setup-note">
         {setUpExplanation(
-          show(results.unstressedLength, 'length', units),
+          formatCell(units, 'length', results.unstressedLength),
           temperatureText(project.installation.temperature, units),
         )}
       </p>

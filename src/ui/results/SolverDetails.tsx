@@ -1,8 +1,8 @@
 /** Solver details on request: theory, elements, iterations and estimated discretisation error. */
 import { DEFAULT_MODEL, type ProjectResults } from '../../core/index.ts';
+import { formatCell } from '../../deliverables/displayUnits.ts';
 import { useResultsStore } from '../../state/resultsStore.ts';
 import { useUiStore } from '../../state/uiStore.ts';
-import { show } from '../format.ts';
 
 export function SolverDetails({ results }: { results: ProjectResults }) {
   const units = useUiStore((s) => s.unitSystem);
@@ -21,7 +21,7 @@ export function SolverDetails({ results }: { results: ProjectResults }) {
           ? ` (the ${model.elementsPerSpan} set were refined ×${results.mesh.refinement} automatically to bring the error estimate below ${results.mesh.errorTarget.toExponential(0)})`
           : ''}
         ; cut length (unstressed, installation temperature){' '}
-        {show(results.unstressedLength, 'length', units, 4)}.
+        {formatCell(units, 'length', results.unstressedLength, 4)}.
       </p>
       {!results.mesh.reached && (
         <p className="warning">

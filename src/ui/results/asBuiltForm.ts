@@ -9,7 +9,7 @@ import {
   validateAsBuilt,
 } from '../../core/index.ts';
 import { type Quantity, toSi, type UnitSystem, unitSymbol } from '../../core/units.ts';
-import { parseNumber } from '../format.ts';
+import { parseNumber } from '../../deliverables/displayUnits.ts';
 
 export interface AsBuiltForm {
   kind: AsBuiltKind;

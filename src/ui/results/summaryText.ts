@@ -8,9 +8,8 @@
  */
 import type { Project, ProjectResults } from '../../core/index.ts';
 import type { UnitSystem } from '../../core/units.ts';
-import { formatLength } from '../../deliverables/displayUnits.ts';
+import { formatForceShort, formatLength, formatPercent } from '../../deliverables/displayUnits.ts';
 import { caseFailures, governingClearance } from '../../deliverables/reportContent.ts';
-import { percent, showForceShort } from '../format.ts';
 
 export interface Summary {
   pass: boolean;
@@ -35,7 +34,7 @@ export function summaryText(project: Project, results: ProjectResults, units: Un
   const parts: string[] = [];
   if (tensionCase)
     parts.push(
-      `Largest tension ${showForceShort(tensionCase.maxTension, units)} = ${percent(tensionCase.utilisation)} of the working limit in ${tensionCase.name}`,
+      `Largest tension ${formatForceShort(units, tensionCase.maxTension, '\u00a0')} = ${formatPercent(tensionCase.utilisation)} of the working limit in ${tensionCase.name}`,
     );
   const g = governingClearance(project, results);
   if (g) {
