@@ -43,9 +43,9 @@ test('shell loads, shows results, the sag plot and the cautions without console 
   await expect(plot).toHaveAttribute('data-plot-state', 'drawn');
   await expect(plot.locator('.main-svg').first()).toBeVisible();
   // Per case a solid wire and a dashed parabola; plus ground, minimum-clearance line, one shape
-  // per clearance zone, the supports and the mark where the largest sag is measured (the demo's
-  // span is level: no straight line between the fixings is drawn).
-  const staticTraces = 4 + demo.limits.zones.length;
+  // per clearance zone, the supports, the straight line between the fixings and the mark where
+  // the largest sag is measured.
+  const staticTraces = 5 + demo.limits.zones.length;
   await expect(plot.locator('.scatterlayer .trace')).toHaveCount(
     2 * expectedCaseCount + staticTraces,
   );

@@ -124,10 +124,17 @@ describe('the sag mark sits where sag is measured', () => {
     expect((mark?.y?.[0] ?? 0) - (mark?.y?.[1] ?? 0)).toBeCloseTo(sagging.sag, 3);
   });
 
-  it('draws no chord on a level span', () => {
+  it('draws the chord on a level span too, so tilting a fixing changes only numbers', () => {
     const level = checked(demo);
     const drawn = buildSagFigure(level, solveProject(level), 'si');
-    expect(traceNamed(drawn.data, 'Straight line between fixings')).toBeUndefined();
+    const chord = traceNamed(drawn.data, 'Straight line between fixings');
+    const [a, b] = level.supports;
+    expect(chord?.x).toEqual([a.x, b.x]);
+    expect(chord?.y).toEqual([a.z, b.z]);
+    const tilted = checked(demo);
+    tilted.supports[1].z += 0.3;
+    const after = buildSagFigure(tilted, solveProject(tilted), 'si');
+    expect(after.data.map((t) => t.name)).toEqual(drawn.data.map((t) => t.name));
   });
 
   it('writes the sag and the lowest point in feet and inches for imperial', () => {

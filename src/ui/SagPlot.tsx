@@ -97,9 +97,8 @@ function Caption({ id, figure, view, units }: CaptionProps) {
         ? ` — largest difference ${formatCell(units, 'length', figure.parabola.differenceM, 4)} (${figure.parabola.caseName}).`
         : '.'}{' '}
       Shaded: ground and clearance zones at their required heights. Sag is measured straight down
-      from the straight line between the fixings (drawn dash-dotted where they are at different
-      heights), at the point where that drop is largest; on an inclined span that is not the lowest
-      point.
+      from the straight line between the fixings (drawn dash-dotted), at the point where that drop
+      is largest; on an inclined span that is not the lowest point.
       {figure.movingBands
         ? ' Lightly shaded with a dotted lower edge: the heights each case’s wire takes while a moving load travels its path.'
         : ''}

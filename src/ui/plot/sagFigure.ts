@@ -130,15 +130,17 @@ export function largestSagPoint(project: Project, results: ProjectResults): SagP
 const CHORD_NAME = 'Straight line between fixings (sag is measured down from it)';
 
 /**
- * The chord of each inclined span (dash-dotted), and the largest sag drawn as a short line from the
+ * The chord of each span (dash-dotted), and the largest sag drawn as a short line from the
  * chord straight down to the wire where it is measured.
  */
 function sagTraces(project: Project, point: SagPoint | null, units: UnitSystem): Data[] {
   const len = (m: number) => fromSi(m, 'length', units);
   const traces: Data[] = [];
+  // Every span's, level ones too: sag is measured from this line on any span, and a fixing
+  // dragged up or down then changes only numbers, so the plot can follow the drag quickly
+  // (figureUpdate.ts) instead of waiting for a full redraw when a level span tilts.
   project.supports.slice(1).forEach((b, j) => {
     const a = project.supports[j];
-    if (Math.abs(b.z - a.z) < 1e-6) return;
     traces.push({
       type: 'scatter',
       mode: 'lines',
