@@ -14,6 +14,7 @@ import { useProjectStore } from '../../state/projectStore.ts';
 import { applyEdit } from '../fields/ChoiceFields.tsx';
 import { NumberField } from '../fields/NumberField.tsx';
 import { TextField } from '../fields/TextField.tsx';
+import { LoadExtentFields } from './LoadExtentFields.tsx';
 import { LoadWeightField } from './LoadWeightField.tsx';
 import { MovingLoadRow } from './MovingLoadRow.tsx';
 import { Row } from './Row.tsx';
@@ -74,22 +75,7 @@ function UniformRow({ load, index }: { load: UniformLoad; index: number }) {
   const name = load.label || `Load ${index + 1}`;
   return (
     <>
-      <NumberField
-        path={`${path}.from`}
-        context={name}
-        label="From"
-        quantity="length"
-        value={load.from}
-        edit={(from) => edits.patchLoad(index, { from })}
-      />
-      <NumberField
-        path={`${path}.to`}
-        context={name}
-        label="To"
-        quantity="length"
-        value={load.to}
-        edit={(to) => edits.patchLoad(index, { to })}
-      />
+      <LoadExtentFields index={index} name={name} from={load.from} to={load.to} fromLabel="From" />
       <NumberField
         path={`${path}.massPerLength`}
         context={name}
