@@ -6,6 +6,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import {
+  chooseWire,
   chooseWires,
   type Project,
   solveProject,
@@ -42,6 +43,20 @@ describe.each([
       const w = tensionWindow(withWire(project, c.catalogId ?? ''));
       expect(c.low).toBeCloseTo(w.low?.horizontalTension ?? 0, 4);
       expect(c.high).toBeCloseTo(w.high?.horizontalTension ?? 0, 4);
+    }
+  });
+
+  it('the start carried from wire to wire moves no window end and drops no wire', () => {
+    // Each wire searched on its own, from no start, must give the same list (ends to 1e-8).
+    const alone = WIRE_CATALOG.map((wire) =>
+      chooseWire(project, { catalogId: wire.id }, wire),
+    ).filter((c) => c !== null);
+    expect(choices.map((c) => c.catalogId).sort()).toEqual(alone.map((c) => c.catalogId).sort());
+    for (const c of choices) {
+      const own = alone.find((a) => a.catalogId === c.catalogId);
+      expect(Math.abs(c.high / (own?.high ?? 0) - 1)).toBeLessThan(1e-8);
+      if (c.low === null) expect(own?.low).toBeNull();
+      else expect(Math.abs(c.low / (own?.low ?? 0) - 1)).toBeLessThan(1e-8);
     }
   });
 

@@ -39,6 +39,7 @@ export {
 } from './design/windowAdvice.ts';
 export { type WindowCurve, windowCurve, windowPosition } from './design/windowPosition.ts';
 export {
+  chooseWire,
   chooseWires,
   SUGGESTION_RULE,
   type WireChoice,

@@ -12,7 +12,7 @@ import type { Load, Project } from '../project.ts';
 import { buildProjectModel, type ProjectModel } from '../projectModel.ts';
 import { brent } from '../rootFind.ts';
 import { solveInstallation } from '../states.ts';
-import { findWindowEnds, type WindowEnds } from './windowEnds.ts';
+import { findWindowEnds, type SearchCarry, type WindowEnds } from './windowEnds.ts';
 import { CLEARANCE_CHECK, type WindowResponse } from './windowResponse.ts';
 
 /** "4.50 m over Road", "2.40 m over the ground", "the tension limit": a check in words. */
@@ -70,12 +70,22 @@ export function hungMass(project: Project, gravity: number): number {
   return total;
 }
 
-/** Worst clearance margin at the highest allowed tension for hung loads scaled by k (m). */
-function marginWithLoadsScaled(project: Project, k: number, refinement: number): number {
+/**
+ * Worst clearance margin at the highest allowed tension for hung loads scaled by k (m). `carry`
+ * (updated) starts each search where the last one, with other loads, ended.
+ */
+function marginWithLoadsScaled(
+  project: Project,
+  k: number,
+  refinement: number,
+  carry: SearchCarry,
+): number {
   const ends = findWindowEnds(buildProjectModel(scaleHungLoads(project, k), refinement), {
     tolerance: 1e-9,
     stopWhenEmpty: true,
+    carry,
   });
+  Object.assign(carry, ends.carry);
   if (!ends.atHigh) return -1e3;
   return ends.atHigh.clearanceMargin;
 }
@@ -115,12 +125,11 @@ function lighterLoadsFact(model: ProjectModel, refinement: number): AdviceFact |
   const project = model.project;
   const mass = hungMass(project, model.env.gravity);
   if (!(mass > 0)) return null;
-  const bare = marginWithLoadsScaled(project, 0, refinement);
+  const carry: SearchCarry = {};
+  const margin = (k: number) => marginWithLoadsScaled(project, k, refinement, carry);
+  const bare = margin(0);
   if (bare < 0) return { kind: 'lighterLoadsCannot' };
-  const root = brent((k) => marginWithLoadsScaled(project, k, refinement), 0, 1, 1e-4, 40, {
-    fa: bare,
-    fb: marginWithLoadsScaled(project, 1, refinement),
-  });
+  const root = brent(margin, 0, 1, 1e-4, 40, { fa: bare, fb: margin(1) });
   if (!root.converged) return null;
   const k = Math.floor(root.x * 1000) / 1000;
   return { kind: 'lighterLoads', mostKg: k * mass, nowKg: mass, lighterPercent: 100 * (1 - k) };

@@ -46,6 +46,22 @@ export interface WindowEnds {
   atFloor: WindowResponse | null;
   response: (tensionN: number, only?: CaseSubset) => WindowResponse;
   evaluations: number;
+  /** What this search learned, to start a similar one (the next wire of the chooser). */
+  carry: SearchCarry;
+}
+
+/**
+ * What one window search hands to a similar one (another wire on the same project): where its
+ * ends were, the cases that governed each and the slope of each check there. Only a start: the
+ * search with every case at each root decides the ends.
+ */
+export interface SearchCarry {
+  /** The low end (N): the slack limit depends mostly on the hung loads, not on the wire. */
+  lowN?: number;
+  /** The high end over the tension the wire is allowed (breaking load / safety factor). */
+  highFraction?: number;
+  tension?: { focus: number[]; slope: number };
+  clearance?: { focus: number[]; slope: number };
 }
 
 export interface WindowOptions {
@@ -53,13 +69,11 @@ export interface WindowOptions {
   tolerance?: number;
   /** Stop as soon as the window is known to be empty (the chooser needs no more). */
   stopWhenEmpty?: boolean;
-  /** Where to start looking for the low end (N), e.g. a similar wire's low end. */
-  lowGuessN?: number;
   /**
-   * Where to start looking for the high end, as a fraction of the tension the wire is allowed
-   * (breaking load over the safety factor), e.g. a similar wire's; default one half.
+   * A similar search's carry (SearchCarry). Without it the high end is first looked for at half
+   * the tension the wire is allowed, the low end from the high end down.
    */
-  highFraction?: number;
+  carry?: SearchCarry;
 }
 
 /** Slackest tension searched: the parabola's H for a sag of a quarter of each span, H = q l / 2. */
@@ -85,11 +99,16 @@ interface WorstRoot {
   x: number;
   /** Every case evaluated at x (null when a state could not be solved). */
   full: WindowResponse | null;
+  /** The cases solved in the last round and the slope of the check there (see SearchCarry). */
+  focus: number[];
+  slope: number;
 }
 
 /**
  * Root in ln H₀ of the worst check of one kind over every case: found for the governing cases
- * only, then checked with all of them (see the file header).
+ * only, then checked with all of them (see the file header). Given the cases that governed a
+ * similar search (`carried`), the search starts with those alone: the check with every case at
+ * the root still decides, so a wrong guess costs a round, never a wrong end.
  */
 function worstRoot(
   ends: WindowEnds,
@@ -99,18 +118,32 @@ function worstRoot(
   tolerance: number,
   count: { evaluations: number },
   moving: boolean,
+  carried?: { focus: number[]; slope: number },
 ): WorstRoot {
   const at = (x: number, only?: CaseSubset) => {
     count.evaluations++;
     return ends.response(Math.exp(x), only);
   };
-  let full = at(x0);
-  if (!full.solved) return { status: 'failed', x: x0, full: null };
-  const scale = Math.max(full.clearanceSagM, 1e-3);
+  const focus = new Set<number>(moving ? [] : (carried?.focus ?? []));
+  const first = at(x0, focus.size > 0 ? focus : undefined);
+  const failed = (x: number): WorstRoot => ({
+    status: 'failed',
+    x,
+    full: null,
+    focus: [...focus],
+    slope: 1,
+  });
+  if (!first.solved) return failed(x0);
+  const scale = Math.max(first.clearanceSagM, 1e-3);
   const value = (r: WindowResponse) =>
     kind === 'tension' ? Math.log(r.utilisation) : r.clearanceMargin / scale;
   const governing = (r: WindowResponse) => (kind === 'tension' ? r.tensionIndex : r.clearanceIndex);
-  const focus = new Set<number>();
+  // The value at x for the focused cases, when known: the worst over the focused cases equals
+  // the worst over all once the governing case is among them (not so with moving loads, whose
+  // focused solves park the load).
+  let known: number | undefined = moving ? undefined : value(first);
+  let full: WindowResponse = first;
+  let slope = carried?.slope;
   let x = x0;
   for (let round = 0; round < 60; round++) {
     const g = governing(full);
@@ -119,19 +152,22 @@ function worstRoot(
       const r = at(t, focus);
       return r.solved ? value(r) : Number.NaN;
     };
-    const root = rootInRange(f, x, range[0], range[1], tolerance);
-    if (root.status === 'failed') return { status: 'failed', x: root.x, full: null };
+    const root = rootInRange(f, x, range[0], range[1], tolerance, { value: known, slope });
+    slope = root.slope;
+    if (root.status === 'failed') return failed(root.x);
     // With moving loads the full check (whole envelopes) must agree with the focused one at the
     // root; they differ only when a load's worst position has moved.
     const focused = moving && root.status === 'root' ? f(root.x) : Number.NaN;
     full = at(root.x);
-    if (!full.solved) return { status: 'failed', x: root.x, full: null };
+    if (!full.solved) return failed(root.x);
     const now = governing(full);
     const settled = !moving || !(Math.abs(value(full) - focused) > MOVING_SETTLED);
-    if ((now < 0 || focus.has(now)) && settled) return { status: root.status, x: root.x, full };
+    if ((now < 0 || focus.has(now)) && settled)
+      return { status: root.status, x: root.x, full, focus: [...focus], slope };
     x = root.x;
+    known = moving ? undefined : value(full);
   }
-  return { status: 'failed', x, full: null };
+  return failed(x);
 }
 
 /** The window's two ends for a built model. */
@@ -152,16 +188,19 @@ export function findWindowEnds(model: ProjectModel, options: WindowOptions = {})
     atFloor: null,
     response: createWindowResponse(model),
     evaluations: 0,
+    carry: {},
   };
+  const carry = options.carry ?? {};
   const count = { evaluations: 0 };
   const moving = model.project.loads.some((l) => l.type === 'moving');
-  const fraction = options.highFraction;
-  const allowed =
-    (model.wire.breakingLoad / model.project.limits.safetyFactor) *
-    (fraction !== undefined && fraction > 0 && fraction < 10 ? fraction : 0.5);
-  const start = Math.min(range[1], Math.max(range[0], Math.log(allowed)));
-  const high = worstRoot(ends, 'tension', start, range, tolerance, count, moving);
+  const allowedN = model.wire.breakingLoad / model.project.limits.safetyFactor;
+  const fraction = carry.highFraction;
+  const guess = allowedN * (fraction !== undefined && fraction > 0 && fraction < 10 ? fraction : 0.5);
+  const start = Math.min(range[1], Math.max(range[0], Math.log(guess)));
+  const high = worstRoot(ends, 'tension', start, range, tolerance, count, moving, carry.tension);
+  ends.carry.tension = { focus: high.focus, slope: high.slope };
   if (high.status === 'root' && high.full) {
+    ends.carry.highFraction = Math.exp(high.x) / allowedN;
     ends.atHigh = high.full;
     ends.high = {
       horizontalTension: largestInstallationTension(model, Math.exp(high.x)),
@@ -180,10 +219,11 @@ export function findWindowEnds(model: ProjectModel, options: WindowOptions = {})
   }
   if (!(ends.empty && options.stopWhenEmpty)) {
     let from = high.status === 'root' ? high.x : range[0];
-    if (options.lowGuessN !== undefined && options.lowGuessN > 0)
-      from = Math.min(from, Math.log(options.lowGuessN));
-    const low = worstRoot(ends, 'clearance', from, range, tolerance, count, moving);
+    if (carry.lowN !== undefined && carry.lowN > 0) from = Math.min(from, Math.log(carry.lowN));
+    const low = worstRoot(ends, 'clearance', from, range, tolerance, count, moving, carry.clearance);
+    ends.carry.clearance = { focus: low.focus, slope: low.slope };
     if (low.status === 'root' && low.full) {
+      ends.carry.lowN = Math.exp(low.x);
       ends.atLow = low.full;
       ends.low = {
         horizontalTension: largestInstallationTension(model, Math.exp(low.x)),

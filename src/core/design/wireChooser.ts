@@ -8,7 +8,7 @@ import type { Project, WireSpec } from '../project.ts';
 import { buildProjectModel } from '../projectModel.ts';
 import { largestInstallationTension } from '../states.ts';
 import { resolveWire, WIRE_CATALOG, type WireKind, type WireProperties } from '../wireCatalog.ts';
-import { findWindowEnds } from './windowEnds.ts';
+import { findWindowEnds, type SearchCarry } from './windowEnds.ts';
 
 export type WireFamily = 'galvanised' | 'stainless' | 'fibre' | 'custom';
 
@@ -46,25 +46,22 @@ function candidates(project: Project): { spec: WireSpec; wire: WireProperties }[
 
 /**
  * The window of one wire for this project, or null when it is shut. The ends are found to
- * 1e-9 relative; `lowGuessN` starts the low-end search (a similar wire's low end: the slack
- * limit depends mostly on the hung loads, not on the wire), `highFraction` the high-end search
- * (a similar wire's high end over its allowed tension).
+ * 1e-9 relative; `carry` (updated in place) starts the search where a similar wire's ended.
  */
 export function chooseWire(
   project: Project,
   spec: WireSpec,
   wire: WireProperties,
-  lowGuessN?: number,
   refinement = 1,
-  highFraction?: number,
+  carry: SearchCarry = {},
 ): WireChoice | null {
   const model = buildProjectModel({ ...project, wire: spec }, refinement);
-  const ends = findWindowEnds(model, {
-    stopWhenEmpty: true,
-    tolerance: 1e-9,
-    lowGuessN,
-    highFraction,
-  });
+  const ends = findWindowEnds(model, { stopWhenEmpty: true, tolerance: 1e-9, carry });
+  // A shut window's search still learned the governing cases; its ends are no start for others.
+  carry.tension = ends.carry.tension ?? carry.tension;
+  carry.clearance = ends.carry.clearance ?? carry.clearance;
+  carry.lowN = ends.carry.lowN ?? carry.lowN;
+  carry.highFraction = ends.carry.highFraction ?? carry.highFraction;
   if (ends.empty || !ends.high) return null;
   const high = ends.high.horizontalTension;
   const low = ends.low?.horizontalTension ?? null;
@@ -92,15 +89,11 @@ export function chooseWires(
   refinement = 1,
 ): WireChoice[] {
   const choices: WireChoice[] = [];
-  let lowGuessN: number | undefined;
-  let highFraction: number | undefined;
+  const carry: SearchCarry = {};
   for (const { spec, wire } of candidates(project)) {
     if (families && !families.includes(wireFamily(wire.kind))) continue;
-    const choice = chooseWire(project, spec, wire, lowGuessN, refinement, highFraction);
+    const choice = chooseWire(project, spec, wire, refinement, carry);
     if (choice) choices.push(choice);
-    if (choice?.low) lowGuessN = choice.low;
-    // The high end sits at a similar fraction of the allowed tension from wire to wire.
-    if (choice) highFraction = choice.high / (wire.breakingLoad / project.limits.safetyFactor);
   }
   return choices.sort(
     (a, b) => a.massPerLength - b.massPerLength || a.label.localeCompare(b.label),
