@@ -33,17 +33,15 @@ export function rootInRange(
   const known = a === x0 && start.value !== undefined && Number.isFinite(start.value);
   let fa = known ? (start.value as number) : f(a);
   let evaluations = known ? 0 : 1;
-  let slope = start.slope !== undefined && start.slope > 0 && Number.isFinite(start.slope)
-    ? start.slope
-    : 1;
+  let slope =
+    start.slope !== undefined && start.slope > 0 && Number.isFinite(start.slope) ? start.slope : 1;
   if (!Number.isFinite(fa)) return { status: 'failed', x: a, evaluations, slope };
   if (fa === 0) return { status: 'root', x: a, evaluations, slope };
   const direction = fa < 0 ? 1 : -1;
   let step = 0.5;
   while (evaluations < MAX_EVALUATIONS) {
     const edge = direction > 0 ? hi : lo;
-    if (a === edge)
-      return { status: fa < 0 ? 'negative' : 'positive', x: a, evaluations, slope };
+    if (a === edge) return { status: fa < 0 ? 'negative' : 'positive', x: a, evaluations, slope };
     // Aim a little past the linear estimate of the root, so one step usually brackets it.
     const estimate = Math.abs(fa / slope) * 1.25;
     const distance = Number.isFinite(estimate)

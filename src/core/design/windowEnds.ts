@@ -195,7 +195,8 @@ export function findWindowEnds(model: ProjectModel, options: WindowOptions = {})
   const moving = model.project.loads.some((l) => l.type === 'moving');
   const allowedN = model.wire.breakingLoad / model.project.limits.safetyFactor;
   const fraction = carry.highFraction;
-  const guess = allowedN * (fraction !== undefined && fraction > 0 && fraction < 10 ? fraction : 0.5);
+  const guess =
+    allowedN * (fraction !== undefined && fraction > 0 && fraction < 10 ? fraction : 0.5);
   const start = Math.min(range[1], Math.max(range[0], Math.log(guess)));
   const high = worstRoot(ends, 'tension', start, range, tolerance, count, moving, carry.tension);
   ends.carry.tension = { focus: high.focus, slope: high.slope };
@@ -220,7 +221,16 @@ export function findWindowEnds(model: ProjectModel, options: WindowOptions = {})
   if (!(ends.empty && options.stopWhenEmpty)) {
     let from = high.status === 'root' ? high.x : range[0];
     if (carry.lowN !== undefined && carry.lowN > 0) from = Math.min(from, Math.log(carry.lowN));
-    const low = worstRoot(ends, 'clearance', from, range, tolerance, count, moving, carry.clearance);
+    const low = worstRoot(
+      ends,
+      'clearance',
+      from,
+      range,
+      tolerance,
+      count,
+      moving,
+      carry.clearance,
+    );
     ends.carry.clearance = { focus: low.focus, slope: low.slope };
     if (low.status === 'root' && low.full) {
       ends.carry.lowN = Math.exp(low.x);
