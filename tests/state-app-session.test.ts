@@ -1,18 +1,25 @@
 /**
  * The app's one session starts both workers: the solver's, and the design aids' once the
- * solver's results for the document are on screen. A component remount (React's strict mode
- * mounts twice) cannot start a second design worker, because no component starts it.
+ * solver's results for the document are on screen and the first plot is drawn. A small first
+ * document is answered on the page, so the solver's worker starts only after the first plot,
+ * ready for the first edit. A component remount (React's strict mode mounts twice) cannot start
+ * a second design worker, because no component starts it.
  */
 import { afterEach, describe, expect, it } from 'vitest';
+import { solveProject } from '../src/core/index.ts';
 import { appSession, startAppSession } from '../src/state/appSession.ts';
 import { useDesignStore } from '../src/state/designStore.ts';
+import { markFirstDraw } from '../src/state/firstDraw.ts';
 import { useProjectStore } from '../src/state/projectStore.ts';
+import { useResultsStore } from '../src/state/resultsStore.ts';
 import { StandInWorker } from './helpers/standInWorker.ts';
 
 afterEach(() => appSession()?.dispose());
 
+const tick = () => new Promise((resolve) => setTimeout(resolve, 0));
+
 describe('app session wiring', () => {
-  it('starts the design aids worker with the session, after the first results, and stops it', () => {
+  it('answers the demo on the page, starts both workers after the first plot, and stops them', async () => {
     const solvers: StandInWorker[] = [];
     const designs: StandInWorker[] = [];
     startAppSession(
@@ -28,14 +35,21 @@ describe('app session wiring', () => {
         return worker;
       },
     );
+    await tick();
+    const project = useProjectStore.getState().project;
+    // The page's own answer: the core's numbers, with no worker fetched yet.
+    expect(useResultsStore.getState().results).toEqual(solveProject(project));
+    expect(useResultsStore.getState().resultsProject).toBe(project);
+    expect(solvers).toHaveLength(0);
+    expect(designs).toHaveLength(0);
+    // The first plot is drawn: the solver's worker starts (idle) and the design aids are asked.
+    markFirstDraw();
+    await new Promise((resolve) => setTimeout(resolve, 350)); // the moment to paint and settle
     expect(solvers).toHaveLength(1);
-    expect(solvers[0].received).toHaveLength(1);
-    // Nothing for the design aids until the document's results are on screen.
-    expect(designs.flatMap((w) => w.received)).toHaveLength(0);
-    solvers[0].answer(solvers[0].received[0]);
+    expect(solvers[0].received).toHaveLength(0);
     expect(designs).toHaveLength(1);
     expect(designs[0].received).toHaveLength(1);
-    expect(designs[0].received[0].project).toBe(useProjectStore.getState().project);
+    expect(designs[0].received[0].project).toBe(project);
     expect(useDesignStore.getState().stale).toBe(true);
     appSession()?.dispose();
     expect(designs[0].terminated).toBe(true);

@@ -5,6 +5,7 @@
 import { describe, expect, it } from 'vitest';
 import { type Project, solveProject } from '../src/core/index.ts';
 import { demoProject } from '../src/state/demoProject.ts';
+import { FIRST_SOLVE_HERE_ELEMENTS, solveFirstHere } from '../src/worker/solveRequest.ts';
 import { standInClient } from './helpers/standInWorker.ts';
 
 const setup = standInClient;
@@ -120,5 +121,71 @@ describe('solver client', () => {
     expect(workers).toHaveLength(2);
     workers[1].answer(workers[1].received[0]);
     expect(outcomes.at(-1)?.ok && outcomes.at(-1)?.project.supports[1].x).toBe(25);
+  });
+});
+
+describe('the page answering its first, small document itself', () => {
+  const tick = () => new Promise((resolve) => setTimeout(resolve, 0));
+
+  it('answers the small demo without a worker, after the call returns, with the core numbers', async () => {
+    const { client, workers, outcomes } = setup({ firstHere: solveFirstHere });
+    client.solve(demoProject);
+    expect(outcomes).toHaveLength(0); // nothing delivered inside solve()
+    await tick();
+    expect(workers).toHaveLength(0);
+    expect(outcomes).toHaveLength(1);
+    const outcome = outcomes[0];
+    expect(outcome.ok && outcome.results).toEqual(solveProject(demoProject));
+  });
+
+  it('sends the next document to a worker, and one typed before the answer replaces it', async () => {
+    const { client, workers, outcomes } = setup({ firstHere: solveFirstHere });
+    client.solve(demoProject);
+    const edited = spanOf(24);
+    client.solve(edited); // while the page's answer is still on its way
+    await tick();
+    expect(outcomes).toHaveLength(0); // the page's answer is for a superseded document
+    expect(client.dropped).toBe(1);
+    expect(workers).toHaveLength(1);
+    expect(workers[0].received.map((r) => r.project)).toEqual([edited]);
+    workers[0].answer(workers[0].received[0]);
+    expect(outcomes).toHaveLength(1);
+    expect(outcomes[0].ok && outcomes[0].project).toBe(edited);
+  });
+
+  it('leaves a large document, or one that asks for the design aids, to the worker', async () => {
+    const large: Project = {
+      ...demoProject,
+      model: { ...demoProject.model, elementsPerSpan: FIRST_SOLVE_HERE_ELEMENTS + 1 },
+    };
+    expect(solveFirstHere({ id: 1, project: large })).toBeNull();
+    expect(
+      solveFirstHere({ id: 1, project: demoProject, design: { temperatureNow: null } }),
+    ).toBeNull();
+    const { client, workers, outcomes } = setup({ firstHere: solveFirstHere });
+    client.solve(large);
+    await tick();
+    expect(outcomes).toHaveLength(0);
+    expect(workers[0].received.map((r) => r.project)).toEqual([large]);
+  });
+
+  it('refuses an invalid first document with the field named, as the worker would', () => {
+    const bad = { ...demoProject, limits: { ...demoProject.limits, safetyFactor: -1 } };
+    const reply = solveFirstHere({ id: 7, project: bad });
+    expect(reply?.ok).toBe(false);
+    expect(reply && !reply.ok && reply.message).toContain('limits.safetyFactor');
+  });
+
+  it('starts the worker when told, ready for the first edit', async () => {
+    let go: () => void = () => {};
+    const startWorkerAfter = new Promise<void>((resolve) => {
+      go = resolve;
+    });
+    const { workers } = setup({ firstHere: solveFirstHere, startWorkerAfter });
+    await tick();
+    expect(workers).toHaveLength(0);
+    go();
+    await tick();
+    expect(workers).toHaveLength(1);
   });
 });

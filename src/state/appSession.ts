@@ -6,9 +6,11 @@
 
 import { connectDesign } from '../worker/connectDesign.ts';
 import type { WorkerLike } from '../worker/protocol.ts';
+import { solveFirstHere } from '../worker/solveRequest.ts';
 import { SolverClient } from '../worker/solverClient.ts';
 import { browserStorage } from './autosave.ts';
 import { demoProject } from './demoProject.ts';
+import { afterFirstDraw } from './firstDraw.ts';
 import { useProjectStore } from './projectStore.ts';
 import { useResultsStore } from './resultsStore.ts';
 import { type ChannelLike, createSession, type Session } from './session.ts';
@@ -35,9 +37,13 @@ export function startAppSession(
   createDesignWorker?: () => WorkerLike,
 ): Session {
   current?.dispose();
+  // A small first document is solved on the page (no worker script before the first plot);
+  // the worker starts once the plot is drawn, ready for the first edit.
   const solver = new SolverClient({
     createWorker,
     onOutcome: (outcome) => applyOutcome(outcome, useProjectStore, useResultsStore),
+    firstHere: solveFirstHere,
+    startWorkerAfter: afterFirstDraw(4000),
   });
   current = createSession({
     store: useProjectStore,
@@ -47,7 +53,10 @@ export function startAppSession(
     fallback: demoProject,
     channel: tabChannel(),
     solver,
-    designAids: createDesignWorker ? () => connectDesign(createDesignWorker) : undefined,
+    // The design aids' worker starts once the first plot is drawn (or after 4 s without one).
+    designAids: createDesignWorker
+      ? () => connectDesign(createDesignWorker, afterFirstDraw(4000))
+      : undefined,
     unloadTarget: typeof window === 'undefined' ? undefined : window,
   });
   current.start({ paused });

@@ -26,11 +26,20 @@ function applyOutcome(outcome: SolveOutcome): void {
   }
 }
 
-/** Starts answering for the current document and every later one; returns a stop function. */
-export function connectDesign(createWorker: () => WorkerLike = createDesignWorker): () => void {
+/**
+ * Starts answering for the current document and every later one; returns a stop function.
+ * Nothing is asked (and no worker started) before `ready` settles: the page's first plot.
+ */
+export function connectDesign(
+  createWorker: () => WorkerLike = createDesignWorker,
+  ready?: Promise<void>,
+): () => void {
   const client = new SolverClient({ createWorker, onOutcome: applyOutcome, watchdogMs: 60_000 });
   let asked: unknown = null;
+  let waiting = ready !== undefined;
+  let stopped = false;
   const ask = (force: boolean) => {
+    if (waiting || stopped) return;
     const { results, resultsProject, stale } = useResultsStore.getState();
     const project = useProjectStore.getState().project;
     if (!results || stale || resultsProject !== project) return;
@@ -40,7 +49,12 @@ export function connectDesign(createWorker: () => WorkerLike = createDesignWorke
     const { temperatureNow, chooserOn } = useDesignStore.getState();
     client.solve(project, { temperatureNow, choose: chooserOn });
   };
-  ask(false);
+  if (ready)
+    ready.then(() => {
+      waiting = false;
+      ask(false);
+    });
+  else ask(false);
   const stopResults = useResultsStore.subscribe(() => ask(false));
   const stopProject = useProjectStore.subscribe((state, previous) => {
     if (state.project !== previous.project) useDesignStore.setState({ stale: true });
@@ -50,6 +64,7 @@ export function connectDesign(createWorker: () => WorkerLike = createDesignWorke
       ask(true);
   });
   return () => {
+    stopped = true;
     stopResults();
     stopProject();
     stopTemperature();

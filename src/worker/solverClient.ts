@@ -34,6 +34,13 @@ export interface SolverClientOptions {
   maxRestarts?: number;
   /** Web Locks, to learn the moment a worker ends (default: the browser's navigator.locks). */
   locks?: LockWaiter;
+  /**
+   * The page's own answer to the first request (null: the worker answers), delivered a moment
+   * later as a reply would be: the first result then waits for no worker script.
+   */
+  firstHere?: (request: SolveRequest) => SolveReply | null;
+  /** Start the worker once this settles (it is started sooner if a request needs it). */
+  startWorkerAfter?: Promise<void>;
 }
 
 function browserLocks(): LockWaiter | undefined {
@@ -52,7 +59,14 @@ export class SolverClient {
   /** Replies dropped because a newer request had been made (for tests and diagnostics). */
   dropped = 0;
 
-  constructor(private readonly options: SolverClientOptions) {}
+  private answeredHere = false;
+  private disposed = false;
+
+  constructor(private readonly options: SolverClientOptions) {
+    options.startWorkerAfter?.then(() => {
+      if (!this.disposed) this.ensureWorker();
+    });
+  }
 
   solve(project: Project, design?: DesignQuestion, asBuilt?: AsBuiltMeasurement): void {
     const request: SolveRequest = { id: this.nextId++, project };
@@ -64,6 +78,7 @@ export class SolverClient {
   }
 
   dispose(): void {
+    this.disposed = true;
     clearTimeout(this.watchdog);
     const worker = this.worker;
     this.worker = undefined; // first, so its released lock is not taken for a death
@@ -92,6 +107,17 @@ export class SolverClient {
   private send(request: SolveRequest): void {
     this.inFlight = request;
     this.pending = undefined;
+    if (!this.answeredHere && !this.worker && this.options.firstHere) {
+      this.answeredHere = true;
+      const reply = this.options.firstHere(request);
+      if (reply) {
+        // As a worker's reply would: after this call has returned, and only if still wanted.
+        setTimeout(() => {
+          if (!this.disposed) this.receive(reply);
+        }, 0);
+        return;
+      }
+    }
     this.ensureWorker().postMessage(request);
     clearTimeout(this.watchdog);
     const ms = this.options.watchdogMs ?? 20_000;

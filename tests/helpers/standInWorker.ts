@@ -11,7 +11,11 @@ import type {
   WorkerLike,
   WorkerMessage,
 } from '../../src/worker/protocol.ts';
-import { type SolveOutcome, SolverClient } from '../../src/worker/solverClient.ts';
+import {
+  type SolveOutcome,
+  SolverClient,
+  type SolverClientOptions,
+} from '../../src/worker/solverClient.ts';
 
 export class StandInWorker implements WorkerLike {
   received: SolveRequest[] = [];
@@ -78,8 +82,11 @@ export class StandInLocks implements LockWaiter {
   }
 }
 
-/** A SolverClient on stand-in workers, with every worker it made and every outcome it gave. */
-export function standInClient() {
+/**
+ * A SolverClient on stand-in workers, with every worker it made and every outcome it gave;
+ * `extra` adds options (the page's own first answer, a later worker start).
+ */
+export function standInClient(extra: Partial<SolverClientOptions> = {}) {
   const workers: StandInWorker[] = [];
   const outcomes: SolveOutcome[] = [];
   const locks = new StandInLocks();
@@ -92,6 +99,7 @@ export function standInClient() {
     },
     onOutcome: (outcome) => outcomes.push(outcome),
     watchdogMs: 60_000,
+    ...extra,
   });
   return { client, workers, outcomes, locks };
 }

@@ -14,6 +14,7 @@
 
 import type { Config, Data, Layout } from 'plotly.js';
 import { type RefObject, useEffect, useRef, useState } from 'react';
+import { markFirstDraw } from '../../state/firstDraw.ts';
 import { BURST_GAP_MS, drawDelayMs } from './drawPolicy.ts';
 import {
   type FigureSignature,
@@ -209,6 +210,7 @@ export function usePlotlyDraw(
         done = plotly.react(container, figure.data, figure.layout, PLOT_CONFIG);
       } catch {
         setState('failed');
+        markFirstDraw();
         return;
       }
       container.classList.remove(SKETCH_CLASS);
@@ -228,8 +230,12 @@ export function usePlotlyDraw(
         () => {
           fitForPrint(container);
           setState('drawn');
+          markFirstDraw();
         },
-        () => setState('failed'),
+        () => {
+          setState('failed');
+          markFirstDraw();
+        },
       );
     };
     if (deferred && full.current) return;
@@ -239,7 +245,10 @@ export function usePlotlyDraw(
           .then((plotly) => {
             if (!cancelled) frame = requestAnimationFrame(() => drawFully(plotly));
           })
-          .catch(() => !cancelled && setState('failed'));
+          .catch(() => {
+            markFirstDraw();
+            if (!cancelled) setState('failed');
+          });
       },
       Math.max(0, next.holdUntil - now),
     );
