@@ -1,11 +1,16 @@
 /**
- * Root of an increasing function f(x) on [lo, hi] from a start x₀: steps (secant-guided,
- * growing) towards the root until its sign changes, then Brent's method on that bracket.
- * Reports when f keeps one sign over the whole range instead. Bounded; no NaN leaves here.
- * A caller that already knows f(x₀), or the slope of a similar function, passes them in `start`:
- * the known value is not computed again, and the slope aims the first step.
+ * Root of an increasing function f(x) on [lo, hi] from a start x₀, by secant steps: the first
+ * from a given slope (a similar function's) or 1, then the slope through the last two points.
+ * Until the sign changes a step is at most twice the longest so far (from 2 at first, clamped to
+ * the range); once it has changed, steps stay strictly inside the bracket (bisection when the
+ * secant leaves it, or when the bracket has not halved in three steps), so the root is always
+ * found. Done when a step is shorter than the tolerance, or, once the steps shrink
+ * superlinearly, when the step after it is predicted (step² / step before) to be: the point it
+ * leads to is returned unevaluated, for the caller's own check there. Done too when the bracket
+ * is narrower than the tolerance. Reports when f keeps one sign over the whole range
+ * instead. Bounded; no NaN leaves here.
+ * A caller that already knows f(x₀) passes it in `start`, and it is not computed again.
  */
-import { brent } from '../rootFind.ts';
 
 export type RangeRoot =
   | { status: 'root'; x: number; evaluations: number; slope: number }
@@ -29,47 +34,71 @@ export function rootInRange(
   start: RangeStart = {},
 ): RangeRoot {
   const clamp = (x: number) => Math.min(hi, Math.max(lo, x));
-  let a = clamp(x0);
-  const known = a === x0 && start.value !== undefined && Number.isFinite(start.value);
-  let fa = known ? (start.value as number) : f(a);
+  let x = clamp(x0);
+  const known = x === x0 && start.value !== undefined && Number.isFinite(start.value);
+  let fx = known ? (start.value as number) : f(x);
   let evaluations = known ? 0 : 1;
   let slope =
     start.slope !== undefined && start.slope > 0 && Number.isFinite(start.slope) ? start.slope : 1;
-  if (!Number.isFinite(fa)) return { status: 'failed', x: a, evaluations, slope };
-  if (fa === 0) return { status: 'root', x: a, evaluations, slope };
-  const direction = fa < 0 ? 1 : -1;
-  let step = 0.5;
+  if (!Number.isFinite(fx)) return { status: 'failed', x, evaluations, slope };
+  if (fx === 0) return { status: 'root', x, evaluations, slope };
+  // The bracket: the nearest points known below (f < 0) and above (f > 0) the root.
+  let below = fx < 0 ? x : Number.NaN;
+  let above = fx > 0 ? x : Number.NaN;
+  let reach = 2;
+  let width = Number.POSITIVE_INFINITY;
+  let slowSteps = 0;
+  let lastStep = Number.NaN;
   while (evaluations < MAX_EVALUATIONS) {
-    const edge = direction > 0 ? hi : lo;
-    if (a === edge) return { status: fa < 0 ? 'negative' : 'positive', x: a, evaluations, slope };
-    // Aim a little past the linear estimate of the root, so one step usually brackets it.
-    const estimate = Math.abs(fa / slope) * 1.25;
-    const distance = Number.isFinite(estimate)
-      ? Math.min(4 * step, Math.max(estimate, 1e-4))
-      : step;
-    const b = clamp(a + direction * distance);
-    const fb = f(b);
+    const bracketed = Number.isFinite(below) && Number.isFinite(above);
+    let next = x - fx / slope;
+    if (bracketed) {
+      const a = Math.min(below, above);
+      const b = Math.max(below, above);
+      if (b - a <= tolerance)
+        return { status: 'root', x: fx < 0 ? below : above, evaluations, slope };
+      if (!(next > a && next < b) || slowSteps >= 3) {
+        next = 0.5 * (a + b);
+        slowSteps = 0;
+        lastStep = Number.NaN; // a bisection says nothing of the secant's convergence
+      }
+    } else {
+      const edge = fx < 0 ? hi : lo;
+      if (x === edge) return { status: fx < 0 ? 'negative' : 'positive', x, evaluations, slope };
+      // Towards the root (f increases), at most `reach` at a time.
+      const direction = fx < 0 ? 1 : -1;
+      const distance = Number.isFinite(next) ? Math.abs(next - x) : reach;
+      next = clamp(x + direction * Math.min(distance, reach));
+    }
+    const step = Math.abs(next - x);
+    if (step <= tolerance || (step < 1e-3 && (step * step) / lastStep < 0.1 * tolerance))
+      return { status: 'root', x: next, evaluations, slope };
+    lastStep = step;
+    const fn = f(next);
     evaluations++;
-    if (!Number.isFinite(fb)) {
-      step = distance / 4;
-      if (step < 1e-9) return { status: 'failed', x: a, evaluations, slope };
+    if (!Number.isFinite(fn)) {
+      // No answer there: approach it in shorter steps.
+      reach = Math.abs(next - x) / 4;
+      if (reach < tolerance) return { status: 'failed', x, evaluations, slope };
+      if (bracketed) {
+        if (fx < 0) above = next;
+        else below = next;
+      }
       continue;
     }
-    if (fb === 0 || fa * fb < 0) {
-      // The bracket's secant slope: a start for the next similar search.
-      const secant = (fb - fa) / (b - a);
-      if (secant > 0 && Number.isFinite(secant)) slope = secant;
-      const root = brent(f, a, b, tolerance, MAX_EVALUATIONS, { fa, fb });
-      evaluations += root.evaluations;
-      return root.converged
-        ? { status: 'root', x: root.x, evaluations, slope }
-        : { status: 'failed', x: root.x, evaluations, slope };
+    if (fn === 0) return { status: 'root', x: next, evaluations, slope };
+    const secant = (fn - fx) / (next - x);
+    if (secant > 0 && Number.isFinite(secant)) slope = secant;
+    if (!bracketed) reach = Math.max(reach, 2 * Math.abs(next - x));
+    if (fn < 0) below = next;
+    else above = next;
+    if (Number.isFinite(below) && Number.isFinite(above)) {
+      const now = Math.abs(above - below);
+      slowSteps = now > 0.5 * width ? slowSteps + 1 : 0;
+      width = Math.min(width, now);
     }
-    slope = (fb - fa) / (b - a) || slope;
-    if (!(slope > 0)) slope = Math.abs(slope) || 1;
-    step = distance;
-    a = b;
-    fa = fb;
+    x = next;
+    fx = fn;
   }
-  return { status: 'failed', x: a, evaluations, slope };
+  return { status: 'failed', x, evaluations, slope };
 }

@@ -162,8 +162,12 @@ function worstRoot(
     if (!full.solved) return failed(root.x);
     const now = governing(full);
     const settled = !moving || !(Math.abs(value(full) - focused) > MOVING_SETTLED);
-    if ((now < 0 || focus.has(now)) && settled)
-      return { status: root.status, x: root.x, full, focus: [...focus], slope };
+    // A root the search returned unevaluated (rangeRoot.ts) must hold here: |f| within the
+    // tolerance's worth of slope, else the search goes on from here.
+    const holds =
+      moving || root.status !== 'root' || Math.abs(value(full)) <= tolerance * root.slope;
+    if ((now < 0 || focus.has(now)) && settled && holds)
+      return { status: root.status, x: root.x, full, focus: now >= 0 ? [now] : [...focus], slope };
     x = root.x;
     known = moving ? undefined : value(full);
   }

@@ -172,9 +172,27 @@ function movingChecks(
  * parked at the worst positions of the last full envelope.
  */
 export function createCheckEvaluator(model: ProjectModel) {
-  // Each case's span tensions from its last solve (a warm start), none before the first; and
-  // each state's element lengths (its catenary loads), so every state starts from its own.
-  const guesses: (number[] | undefined)[] = model.project.cases.map(() => undefined);
+  // Each case's span tensions from its last two solves, with the installation tension of each:
+  // the next solve starts from H = H_last (H₀ / H₀,last)^k, k the secant exponent of the two
+  // (within [0.2, 1.2] far from them; 1, a constant ratio to H₀, after one solve); and each
+  // state's element lengths (its catenary loads), so every state starts from its own.
+  const solvedAt: { lnH0: number; tensions: number[] }[][] = model.project.cases.map(() => []);
+  const guess = (i: number, tensionN: number, fallback: number[]): number[] => {
+    const [last, before] = solvedAt[i];
+    if (!last) return fallback;
+    const dx = Math.log(tensionN) - last.lnH0;
+    return last.tensions.map((h, j) => {
+      let k = 1;
+      if (before && before.lnH0 !== last.lnH0) {
+        k = Math.log(h / before.tensions[j]) / (last.lnH0 - before.lnH0);
+        if (!Number.isFinite(k)) k = 1;
+        // Far from the two points the secant is no guide to the power: keep it plausible.
+        if (Math.abs(dx) > 4 * Math.abs(last.lnH0 - before.lnH0))
+          k = Math.min(1.2, Math.max(0.2, k));
+      }
+      return h * Math.exp(k * dx);
+    });
+  };
   const hasMoving = model.project.loads.some((l) => l.type === 'moving');
   // Worst positions of each moving load in each state (index + 1; 0 the installation).
   const parked = new Map<number, number[][]>();
@@ -231,13 +249,20 @@ export function createCheckEvaluator(model: ProjectModel) {
     );
     for (const [i, weather] of model.project.cases.entries()) {
       if (only && !only.has(i)) continue;
-      const guess = guesses[i] ?? installed.spans.map((s) => s.tensionN);
+      const start = guess(
+        i,
+        tensionN,
+        installed.spans.map((s) => s.tensionN),
+      );
       const named = { ...loadStateOfCase(weather), name: weather.name };
       warm(i);
-      const state = solveChangeOfState(model, named, installed.unstressed, guess);
+      const state = solveChangeOfState(model, named, installed.unstressed, start);
       if (!state.solved) return false;
       keep(i);
-      guesses[i] = state.spans.map((s) => s.tensionN);
+      solvedAt[i] = [
+        { lnH0: Math.log(tensionN), tensions: state.spans.map((s) => s.tensionN) },
+        ...solvedAt[i].slice(0, 1),
+      ];
       visit(
         i,
         weather.name,
