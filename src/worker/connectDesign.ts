@@ -27,18 +27,28 @@ function applyOutcome(outcome: SolveOutcome): void {
 }
 
 /**
+ * Results that keep coming (typing, a drag) are answered once they pause this long (ms): the
+ * design aids take several solves of every case, and on a small machine they would otherwise
+ * take the processor from the drawing of each new result.
+ */
+export const DESIGN_SETTLE_MS = 300;
+
+/**
  * Starts answering for the current document and every later one; returns a stop function.
  * Nothing is asked (and no worker started) before `ready` settles: the page's first plot.
  */
 export function connectDesign(
   createWorker: () => WorkerLike = createDesignWorker,
   ready?: Promise<void>,
+  settleMs = DESIGN_SETTLE_MS,
 ): () => void {
   const client = new SolverClient({ createWorker, onOutcome: applyOutcome, watchdogMs: 60_000 });
   let asked: unknown = null;
   let waiting = ready !== undefined;
   let stopped = false;
+  let settle: ReturnType<typeof setTimeout> | undefined;
   const ask = (force: boolean) => {
+    clearTimeout(settle);
     if (waiting || stopped) return;
     const { results, resultsProject, stale } = useResultsStore.getState();
     const project = useProjectStore.getState().project;
@@ -55,7 +65,10 @@ export function connectDesign(
       ask(false);
     });
   else ask(false);
-  const stopResults = useResultsStore.subscribe(() => ask(false));
+  const stopResults = useResultsStore.subscribe(() => {
+    clearTimeout(settle);
+    settle = setTimeout(() => ask(false), settleMs);
+  });
   const stopProject = useProjectStore.subscribe((state, previous) => {
     if (state.project !== previous.project) useDesignStore.setState({ stale: true });
   });
@@ -65,6 +78,7 @@ export function connectDesign(
   });
   return () => {
     stopped = true;
+    clearTimeout(settle);
     stopResults();
     stopProject();
     stopTemperature();

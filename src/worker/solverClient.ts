@@ -60,16 +60,23 @@ export class SolverClient {
   dropped = 0;
 
   private answeredHere = false;
+  private lastProject: Project | undefined;
   private disposed = false;
 
   constructor(private readonly options: SolverClientOptions) {
     options.startWorkerAfter?.then(() => {
-      if (!this.disposed) this.ensureWorker();
+      if (this.disposed || this.worker) return;
+      // Started idle, it is given the document on screen to solve once (id 0: no request has
+      // it, so the reply is dropped): the engine compiles the solver now, not at the first edit.
+      const worker = this.ensureWorker();
+      if (this.lastProject && !this.inFlight)
+        worker.postMessage({ id: 0, project: this.lastProject });
     });
   }
 
   solve(project: Project, design?: DesignQuestion, asBuilt?: AsBuiltMeasurement): void {
     const request: SolveRequest = { id: this.nextId++, project };
+    this.lastProject = project;
     if (design) request.design = design;
     if (asBuilt) request.asBuilt = asBuilt;
     this.latestId = request.id;
