@@ -5,8 +5,8 @@
  * imports the real built worker). Expected numbers come from the core's solveProject() in Node
  * on the same document, so "recovered" means the page shows the solver's values for the newest
  * document, not just that a status line changed. The page answers its first, small document
- * itself and starts the worker once the first plot is drawn: the worker's first request is the
- * first edit.
+ * itself and starts the worker once the first plot is drawn, giving it the document on screen
+ * once to compile the solver: the first edit is the worker's second message.
  */
 import { expect, type Page, type Route, test } from '@playwright/test';
 import demo from '../examples/courtyard-lights.json' with { type: 'json' };
@@ -110,7 +110,7 @@ test('a worker that crashes while solving an edit is replaced and the edit is so
   const starts = await routeWorker(page, async (route) =>
     route.fulfill({
       contentType: 'text/javascript',
-      body: standInWorker(route.request().url(), 1, 'crash'),
+      body: standInWorker(route.request().url(), 2, 'crash'),
     }),
   );
   await page.goto('/');
@@ -119,8 +119,8 @@ test('a worker that crashes while solving an edit is replaced and the edit is so
   await expectResultsOf(page, solveProject(project));
   await expect.poll(starts).toBe(1);
 
-  // The worker's first request (this edit) crashes it; the client starts a new one and sends
-  // the newest document again.
+  // The worker's second message (this edit, after the warm-up) crashes it; the client starts a
+  // new one and sends the newest document again.
   await page.getByLabel('Studio wall bracket Position (m)').fill('24');
   project.supports[1].x = 24;
   await expect(page.getByRole('status')).toHaveText('Up to date.');
@@ -136,7 +136,7 @@ test('a worker that ends without a word is noticed at once and the edit is solve
   const starts = await routeWorker(page, async (route) =>
     route.fulfill({
       contentType: 'text/javascript',
-      body: standInWorker(route.request().url(), 1, 'silent'),
+      body: standInWorker(route.request().url(), 2, 'silent'),
     }),
   );
   await page.goto('/');
@@ -157,7 +157,7 @@ test('a worker busy with a long solve is left alone and its answer is used', asy
   const starts = await routeWorker(page, async (route) =>
     route.fulfill({
       contentType: 'text/javascript',
-      body: standInWorker(route.request().url(), 1, 'busy'),
+      body: standInWorker(route.request().url(), 2, 'busy'),
     }),
   );
   await page.goto('/');
@@ -178,7 +178,7 @@ test('a worker that hangs while alive is replaced after the watchdog time and th
   const starts = await routeWorker(page, async (route) =>
     route.fulfill({
       contentType: 'text/javascript',
-      body: standInWorker(route.request().url(), 1, 'hang'),
+      body: standInWorker(route.request().url(), 2, 'hang'),
     }),
   );
   await page.goto('/');

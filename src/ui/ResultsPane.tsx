@@ -80,7 +80,7 @@ export function ResultsPane() {
           <MovingLoadsTable results={results} />
           <SetUpChart project={resultsProject} results={results} />
           <AsBuiltPanel project={resultsProject} results={results} />
-          <ReactionsTable results={results} />
+          <ReactionsTable project={resultsProject} results={results} />
           <SolverDetails results={results} />
         </div>
       ) : (

@@ -4,11 +4,10 @@
  * on each side — what sizes a post, its stay and the fittings either side — and at the two end
  * fixings the end fitting the wire is terminated with.
  */
-import type { ProjectResults, SupportReaction } from '../../core/index.ts';
+import type { Project, ProjectResults, SupportReaction } from '../../core/index.ts';
 import { unitSymbol } from '../../core/units.ts';
 import { ATTACHMENT_NAME } from '../../deliverables/attachmentWords.ts';
 import { formatNumber } from '../../deliverables/displayUnits.ts';
-import { useProjectStore } from '../../state/projectStore.ts';
 import { useUiStore } from '../../state/uiStore.ts';
 import { TableScroll } from './TableScroll.tsx';
 
@@ -54,9 +53,19 @@ function fittingAt(results: ProjectResults, index: number, count: number): strin
   return `${end.label}, ${Math.round(end.efficiency * 1000) / 10} %`;
 }
 
-export function ReactionsTable({ results }: { results: ProjectResults }) {
+/**
+ * `project` is the document the results were solved for: while a newer one is being solved the
+ * rows keep that document's fixing names, never the new names beside the old numbers.
+ */
+export function ReactionsTable({
+  project,
+  results,
+}: {
+  project: Project;
+  results: ProjectResults;
+}) {
   const units = useUiStore((s) => s.unitSystem);
-  const supports = useProjectStore((s) => s.project.supports);
+  const supports = project.supports;
   const fu = unitSymbol('force', units);
   // Signed; a pull that rounds to nothing reads 0, not −0.
   const force = (n: number) => formatNumber(units, 'force', n).replace(/^-(0(\.0*)?)$/, '$1');
