@@ -220,6 +220,11 @@ test('a drawing error keeps the project, offers it for download, and the workben
   });
   await open(page);
   await page.getByLabel('Project title').fill('Terrace line');
+  // Everything the title edit sets off has been drawn (the design aids answer once results
+  // pause), so the next drawing is the one for the edit below.
+  await expect(page.getByTestId('design-status')).toHaveText('Design aids up to date.', {
+    timeout: 30_000,
+  });
   await page.evaluate(() => {
     (window as unknown as { breakDrawing?: boolean }).breakDrawing = true;
   });
