@@ -99,7 +99,10 @@ interface WorstRoot {
   x: number;
   /** Every case evaluated at x (null when a state could not be solved). */
   full: WindowResponse | null;
-  /** The cases solved in the last round and the slope of the check there (see SearchCarry). */
+  /**
+   * The case that governed at the root (or the cases solved) and the slope of the check there,
+   * in its own units per ln H₀ (see SearchCarry).
+   */
   focus: number[];
   slope: number;
 }
@@ -143,7 +146,10 @@ function worstRoot(
   // focused solves park the load).
   let known: number | undefined = moving ? undefined : value(first);
   let full: WindowResponse = first;
-  let slope = carried?.slope;
+  // Slopes are carried in the check's own units (ln u, or metres of margin, per ln H₀): each
+  // search scales the clearance by its own sag.
+  const unit = kind === 'tension' ? 1 : scale;
+  let slope = carried ? carried.slope / unit : undefined;
   let x = x0;
   for (let round = 0; round < 60; round++) {
     const g = governing(full);
@@ -167,7 +173,13 @@ function worstRoot(
     const holds =
       moving || root.status !== 'root' || Math.abs(value(full)) <= tolerance * root.slope;
     if ((now < 0 || focus.has(now)) && settled && holds)
-      return { status: root.status, x: root.x, full, focus: now >= 0 ? [now] : [...focus], slope };
+      return {
+        status: root.status,
+        x: root.x,
+        full,
+        focus: now >= 0 ? [now] : [...focus],
+        slope: slope * unit,
+      };
     x = root.x;
     known = moving ? undefined : value(full);
   }
