@@ -57,11 +57,8 @@ export function chooseWire(
 ): WireChoice | null {
   const model = buildProjectModel({ ...project, wire: spec }, refinement);
   const ends = findWindowEnds(model, { stopWhenEmpty: true, tolerance: 1e-9, carry });
-  // A shut window's search still learned the governing cases; its ends are no start for others.
-  carry.tension = ends.carry.tension ?? carry.tension;
-  carry.clearance = ends.carry.clearance ?? carry.clearance;
-  carry.lowN = ends.carry.lowN ?? carry.lowN;
-  carry.highFraction = ends.carry.highFraction ?? carry.highFraction;
+  // What the search learned replaces what it was given (an end not found keeps the old start).
+  Object.assign(carry, ends.carry);
   if (ends.empty || !ends.high) return null;
   const high = ends.high.horizontalTension;
   const low = ends.low?.horizontalTension ?? null;
